@@ -1,0 +1,65 @@
+package org.flexmargin.model;
+
+import java.util.List;
+
+/** Validation helpers shared by the input records; each throws {@link InvalidInputException}. */
+public final class Checks {
+  private Checks() {}
+
+  /** @return {@code value} if finite and strictly positive */
+  public static double positive(String path, double value) {
+    if (!Double.isFinite(value) || value <= 0) {
+      throw new InvalidInputException(path, "a finite value > 0", String.valueOf(value));
+    }
+    return value;
+  }
+
+  /** @return {@code value} if finite and not negative */
+  public static double nonNegative(String path, double value) {
+    if (!Double.isFinite(value) || value < 0) {
+      throw new InvalidInputException(path, "a finite value >= 0", String.valueOf(value));
+    }
+    return value;
+  }
+
+  /** @return {@code value} if finite */
+  public static double finite(String path, double value) {
+    if (!Double.isFinite(value)) {
+      throw new InvalidInputException(path, "a finite number", String.valueOf(value));
+    }
+    return value;
+  }
+
+  /** @return {@code value} if within [lo, hi] */
+  public static double inRange(String path, double value, double lo, double hi) {
+    if (!Double.isFinite(value) || value < lo || value > hi) {
+      throw new InvalidInputException(
+          path, "a value in [" + lo + ", " + hi + "]", String.valueOf(value));
+    }
+    return value;
+  }
+
+  /** @return {@code s} if non-null and not blank */
+  public static String name(String path, String s) {
+    if (s == null || s.isBlank()) {
+      throw new InvalidInputException(path, "a non-empty name", s == null ? "nothing" : "\"\"");
+    }
+    return s;
+  }
+
+  /** @return an immutable copy of a non-empty list */
+  public static <T> List<T> nonEmpty(String path, List<T> list) {
+    if (list == null || list.isEmpty()) {
+      throw new InvalidInputException(path, "at least one entry", "none");
+    }
+    return List.copyOf(list);
+  }
+
+  /** @return {@code n} if at least {@code min} */
+  public static int atLeast(String path, int n, int min) {
+    if (n < min) {
+      throw new InvalidInputException(path, "an integer >= " + min, String.valueOf(n));
+    }
+    return n;
+  }
+}
