@@ -1,0 +1,22 @@
+package org.flexmargin.flutter;
+
+/**
+ * Numerical diagnostics of one flutter solution.
+ *
+ * @param rootSolves converged root solutions (each a Newton or p-k iteration to convergence)
+ * @param iterations total inner iterations (Newton steps or p-k frequency updates)
+ * @param fullEigenSolves full complex eigen-decompositions (start-up, k method)
+ * @param stepHalvings continuation steps that were halved because tracking was not clean
+ * @param maxRelativeResidual worst ||F(s) v|| / (max|F| ||v||) over accepted roots
+ * @param minMac lowest modal assurance criterion between a root's vectors at consecutive
+ *     accepted steps (1 = same shape)
+ * @param unconvergedRoots roots that did not converge within the budget (reported, never hidden)
+ */
+public record SolverDiagnostics(
+    long rootSolves,
+    long iterations,
+    long fullEigenSolves,
+    int stepHalvings,
+    double maxRelativeResidual,
+    double minMac,
+    int unconvergedRoots) {}
