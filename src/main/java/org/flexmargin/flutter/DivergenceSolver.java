@@ -1,0 +1,167 @@
+package org.flexmargin.flutter;
+
+import java.util.Locale;
+import java.util.OptionalDouble;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.ejml.data.Complex_F64;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.CommonOps_DDRM;
+import org.ejml.dense.row.SingularOps_DDRM;
+import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
+import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
+import org.ejml.interfaces.decomposition.LUDecomposition_F64;
+import org.flexmargin.atmosphere.FlightCondition;
+
+/**
+ * Static divergence: the lowest positive real dynamic pressure q_D at which the static
+ * aeroelastic stiffness K - q Q(0) becomes singular (Bisplinghoff, Ashley &amp; Halfman,
+ * <i>Aeroelasticity</i>, ch. 8; Hodges &amp; Pierce, ch. 5). Solved directly as the eigenproblem
+ * K^-1 Q(0) phi = mu phi, q_D = 1 / max(mu &gt; 0, real). The rigid body is restrained (elastic
+ * coordinates only), which the result states.
+ *
+ * <p>{@link #confirmOnPath} is the independent sweep check: it brackets the first sign change of
+ * det(I - q K^-1 Q(0)) over the dynamic pressures of a sweep and refines it with Brent's method,
+ * using LU determinants only (no eigen-solver). Stateless and thread-safe.
+ */
+public final class DivergenceSolver {
+
+  private static final double REAL_TOLERANCE = 1e-9;
+
+  /**
+   * @param system aeroelastic system
+   * @return divergence pressure and speed, or not found
+   */
+  public DivergenceResult solve(AeroelasticSystem system) {
+    int n = system.size();
+    double k0 = Math.max(0.0, system.aero().minReducedFrequency());
+    DMatrixRMaj kInvQ = staticMatrix(system, k0);
+    EigenDecomposition_F64<DMatrixRMaj> eig = DecompositionFactory_DDRM.eig(n, true);
+    if (!eig.decompose(kInvQ.copy())) {
+      throw new ArithmeticException("eigen-decomposition of K^-1 Q(0) failed");
+    }
+    double muMax = 0;
+    int best = -1;
+    double scale = 0;
+    for (int i = 0; i < n; i++) {
+      Complex_F64 mu = eig.getEigenvalue(i);
+      scale = Math.max(scale, mu.getMagnitude());
+    }
+    for (int i = 0; i < n; i++) {
+      Complex_F64 mu = eig.getEigenvalue(i);
+      if (Math.abs(mu.imaginary) <= REAL_TOLERANCE * Math.max(scale, Double.MIN_NORMAL) && mu.real > muMax) {
+        muMax = mu.real;
+        best = i;
+      }
+    }
+    String note = "rigid body restrained; aerodynamic stiffness Q taken at k = "
+        + String.format(Locale.ROOT, "%.4g", k0) + (k0 > 0 ? " (lowest tabulated value, not 0)" : "");
+    if (best < 0 || muMax <= 1e-14 * scale) {
+      return new DivergenceResult(false, Double.NaN, Double.NaN, new double[n], Double.NaN, k0,
+          note + "; no positive real root of the static stability determinant");
+    }
+    double qd = 1.0 / muMax;
+    DMatrixRMaj vec = eig.getEigenVector(best);
+    double[] shape = new double[n];
+    double norm = 0;
+    int maxIdx = 0;
+    for (int i = 0; i < n; i++) {
+      shape[i] = vec.get(i, 0);
+      norm += shape[i] * shape[i];
+      if (Math.abs(shape[i]) > Math.abs(shape[maxIdx])) {
+        maxIdx = i;
+      }
+    }
+    double sign = shape[maxIdx] < 0 ? -1 : 1;
+    for (int i = 0; i < n; i++) {
+      shape[i] *= sign / Math.sqrt(norm);
+    }
+    double residual = singularRatio(system, k0, qd);
+    double eas = Math.sqrt(2 * qd / FlightCondition.SEA_LEVEL_DENSITY_KG_PER_M3);
+    return new DivergenceResult(true, qd, eas, shape, residual, k0, note);
+  }
+
+  /**
+   * Independent check: the first sign change of det(I - q K^-1 Q(0)) over the sweep's dynamic
+   * pressures, refined by Brent's method.
+   *
+   * @return q_D (Pa) if the sweep reaches divergence, else empty
+   */
+  public OptionalDouble confirmOnPath(AeroelasticSystem system, FlightPath path) {
+    double k0 = Math.max(0.0, system.aero().minReducedFrequency());
+    DMatrixRMaj kInvQ = staticMatrix(system, k0);
+    double qMax = 0;
+    for (int p = 0; p < path.gridPoints(); p++) {
+      qMax = Math.max(qMax, path.at(p).dynamicPressurePa());
+    }
+    int steps = Math.max(path.gridPoints(), 2) * 4;
+    double prevQ = 0;
+    double prevD = 1.0;
+    for (int i = 1; i <= steps; i++) {
+      double q = qMax * i / steps;
+      double d = determinant(kInvQ, q);
+      if (Math.signum(d) != Math.signum(prevD)) {
+        BrentSolver solver = new BrentSolver(1e-13, 1e-9 * qMax);
+        return OptionalDouble.of(solver.solve(200, qq -> determinant(kInvQ, qq), prevQ, q));
+      }
+      prevQ = q;
+      prevD = d;
+    }
+    return OptionalDouble.empty();
+  }
+
+  private static double determinant(DMatrixRMaj kInvQ, double q) {
+    int n = kInvQ.numRows;
+    DMatrixRMaj a = new DMatrixRMaj(n, n);
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        a.set(i, j, (i == j ? 1.0 : 0.0) - q * kInvQ.get(i, j));
+      }
+    }
+    LUDecomposition_F64<DMatrixRMaj> lu = DecompositionFactory_DDRM.lu(n, n);
+    if (!lu.decompose(a)) {
+      return 0.0;
+    }
+    return lu.computeDeterminant().real;
+  }
+
+  /** K^-1 Re Q(ik0). */
+  private static DMatrixRMaj staticMatrix(AeroelasticSystem system, double k0) {
+    int n = system.size();
+    ZMatrixRMaj q = new ZMatrixRMaj(n, n);
+    system.aero().forces(k0, q);
+    DMatrixRMaj qr = new DMatrixRMaj(n, n);
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        qr.set(i, j, q.getReal(i, j));
+      }
+    }
+    DMatrixRMaj k = new DMatrixRMaj(n, n, true, system.stiffnessFlat());
+    DMatrixRMaj kInvQ = new DMatrixRMaj(n, n);
+    if (!CommonOps_DDRM.solve(k, qr, kInvQ)) {
+      throw new IllegalArgumentException(
+          "stiffness matrix is singular: divergence needs the rigid body restrained (elastic modes only)");
+    }
+    return kInvQ;
+  }
+
+  private static double singularRatio(AeroelasticSystem system, double k0, double qd) {
+    int n = system.size();
+    ZMatrixRMaj q = new ZMatrixRMaj(n, n);
+    system.aero().forces(k0, q);
+    DMatrixRMaj a = new DMatrixRMaj(n, n);
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        a.set(i, j, system.stiffness(i, j) - qd * q.getReal(i, j));
+      }
+    }
+    double[] sv = SingularOps_DDRM.singularValues(a);
+    double max = 0;
+    double min = Double.MAX_VALUE;
+    for (double s : sv) {
+      max = Math.max(max, s);
+      min = Math.min(min, s);
+    }
+    return max > 0 ? min / max : 0.0;
+  }
+}

@@ -1,0 +1,42 @@
+package org.flexmargin.sweep;
+
+import java.util.List;
+import java.util.OptionalDouble;
+import org.flexmargin.flutter.DivergenceResult;
+import org.flexmargin.flutter.FlutterSolution;
+
+/**
+ * Open-loop results of one configuration.
+ *
+ * @param configuration configuration name
+ * @param modeNames elastic mode names, in order
+ * @param modeFrequenciesHz in-vacuo frequencies (Hz)
+ * @param aeroDescription one line on the aerodynamic source
+ * @param divergence static divergence (rigid body restrained)
+ * @param divergenceConfirmedPa q_D found independently by the determinant sign change over the
+ *     sweep (Pa), empty if the sweep does not reach divergence
+ * @param divergenceTasAtSweepStartMps divergence TAS at the first sweep point's altitude (m/s)
+ * @param flutter flutter solution (curves, crossings, diagnostics)
+ * @param elapsedSeconds wall time of this configuration's analysis (s)
+ */
+public record ConfigurationResult(
+    String configuration,
+    List<String> modeNames,
+    double[] modeFrequenciesHz,
+    String aeroDescription,
+    DivergenceResult divergence,
+    OptionalDouble divergenceConfirmedPa,
+    double divergenceTasAtSweepStartMps,
+    FlutterSolution flutter,
+    double elapsedSeconds) {
+  /** Copies. */
+  public ConfigurationResult {
+    modeNames = List.copyOf(modeNames);
+    modeFrequenciesHz = modeFrequenciesHz.clone();
+  }
+
+  @Override
+  public double[] modeFrequenciesHz() {
+    return modeFrequenciesHz.clone();
+  }
+}

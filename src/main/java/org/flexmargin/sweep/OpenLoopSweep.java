@@ -1,0 +1,89 @@
+package org.flexmargin.sweep;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.function.Consumer;
+import org.flexmargin.flutter.AeroelasticSystem;
+import org.flexmargin.flutter.DivergenceResult;
+import org.flexmargin.flutter.DivergenceSolver;
+import org.flexmargin.flutter.FlutterMethod;
+import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.flutter.KMethod;
+import org.flexmargin.flutter.PkMethod;
+import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.Configuration;
+import org.flexmargin.model.ElasticMode;
+import org.flexmargin.model.FlutterMethodKind;
+
+/**
+ * Runs the open-loop analysis of every configuration of a case: divergence (direct and confirmed
+ * over the sweep) and the flutter sweep with refined crossings. Configurations run in parallel on
+ * the given number of threads; each analysis is sequential along its path (continuation).
+ */
+public final class OpenLoopSweep {
+  private final int threads;
+
+  /** @param threads worker threads, &gt;= 1 */
+  public OpenLoopSweep(int threads) {
+    if (threads < 1) {
+      throw new IllegalArgumentException("threads must be >= 1, got " + threads);
+    }
+    this.threads = threads;
+  }
+
+  /**
+   * @param analysisCase validated case
+   * @param progress called with each configuration name when it completes (from worker threads)
+   * @return results in case order
+   */
+  public SweepResult run(AnalysisCase analysisCase, Consumer<String> progress) {
+    PlannedPath path = new PlannedPath(analysisCase.sweep());
+    ExecutorService pool = Executors.newFixedThreadPool(Math.min(threads, analysisCase.configurations().size()));
+    try {
+      List<Future<ConfigurationResult>> futures = new ArrayList<>();
+      for (Configuration c : analysisCase.configurations()) {
+        futures.add(pool.submit(() -> {
+          ConfigurationResult r = analyse(c, path, analysisCase);
+          progress.accept(c.name());
+          return r;
+        }));
+      }
+      List<ConfigurationResult> results = new ArrayList<>();
+      for (Future<ConfigurationResult> f : futures) {
+        results.add(f.get());
+      }
+      return new SweepResult(analysisCase, path.describe(), results);
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      throw new IllegalStateException("sweep interrupted", e);
+    } catch (ExecutionException e) {
+      if (e.getCause() instanceof RuntimeException re) {
+        throw re;
+      }
+      throw new IllegalStateException(e.getCause());
+    } finally {
+      pool.shutdownNow();
+    }
+  }
+
+  /** Analyses one configuration along a path. */
+  public static ConfigurationResult analyse(Configuration c, PlannedPath path, AnalysisCase analysisCase) {
+    long start = System.nanoTime();
+    ConfigurationModel model = ConfigurationModel.of(c);
+    AeroelasticSystem system = model.system();
+    DivergenceSolver div = new DivergenceSolver();
+    DivergenceResult divergence = div.solve(system);
+    OptionalDouble confirmed = div.confirmOnPath(system, path);
+    FlutterMethod method = analysisCase.options().method() == FlutterMethodKind.K ? new KMethod() : new PkMethod();
+    FlutterSolution flutter = method.solve(system, path, analysisCase.options());
+    double[] f = model.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).toArray();
+    double tasDiv = divergence.speedTasMps(path.at(0).densityKgPerM3());
+    return new ConfigurationResult(c.name(), model.modes().modeNames(), f, system.aero().description(),
+        divergence, confirmed, tasDiv, flutter, (System.nanoTime() - start) * 1e-9);
+  }
+}
