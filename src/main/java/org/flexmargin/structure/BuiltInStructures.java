@@ -119,8 +119,10 @@ public final class BuiltInStructures {
    * (rad, positive nose up), for a section of span s:
    *
    * <pre>
-   *   M = s [ m              -m x_alpha b       ]    K = s [ m omega_h^2   0                          ]
-   *         [ -m x_alpha b    m r_alpha^2 b^2   ]          [ 0             m r_alpha^2 b^2 omega_alpha^2 ]
+   *   M = s [ m              -m x_alpha b     ]
+   *         [ -m x_alpha b    m r_alpha^2 b^2 ]
+   *   K = s [ m omega_h^2     0                             ]
+   *         [ 0               m r_alpha^2 b^2 omega_alpha^2 ]
    * </pre>
    *
    * (Bisplinghoff, Ashley &amp; Halfman and Hodges &amp; Pierce write +S_alpha with h positive

@@ -50,7 +50,9 @@ import org.flexmargin.model.UniformCantileverWing;
  * (both included) equals 1 m, with that largest value positive; the generalized mass
  * {@code v^T M v} (kg) is reported with that scaling. The Rayleigh-Ritz frequencies are upper
  * bounds that decrease as functions are added; when the centre of mass lies on the elastic axis
- * the Ritz functions are the exact uncoupled modes and the frequencies are exact.
+ * the Ritz functions are the exact uncoupled modes and the frequencies are exact. All
+ * {@code bendingModes + torsionModes} normal modes are returned; the highest are the least
+ * converged, so use more functions than the modes the analysis needs.
  */
 public final class CantileverWingModes {
   /** Gauss-Legendre nodes per quadrature panel. */

@@ -111,12 +111,14 @@ final class ClampedFreeBeamFunctions {
   /** cosh(x) - sigma sinh(x) = (1 + sigma)/2 e^-x + (1 - sigma)/2 e^x. */
   private double hyperbolicEven(int n, double x) {
     double bl = betaPerM[n] * lengthM;
-    return onePlusSigmaHalf[n] * Math.exp(-x) + oneMinusSigmaHalfTimesExpBetaL[n] * Math.exp(x - bl);
+    return onePlusSigmaHalf[n] * Math.exp(-x)
+        + oneMinusSigmaHalfTimesExpBetaL[n] * Math.exp(x - bl);
   }
 
   /** sinh(x) - sigma cosh(x) = -(1 + sigma)/2 e^-x + (1 - sigma)/2 e^x. */
   private double hyperbolicOdd(int n, double x) {
     double bl = betaPerM[n] * lengthM;
-    return -onePlusSigmaHalf[n] * Math.exp(-x) + oneMinusSigmaHalfTimesExpBetaL[n] * Math.exp(x - bl);
+    return -onePlusSigmaHalf[n] * Math.exp(-x)
+        + oneMinusSigmaHalfTimesExpBetaL[n] * Math.exp(x - bl);
   }
 }

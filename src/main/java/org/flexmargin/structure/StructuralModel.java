@@ -165,6 +165,7 @@ public record StructuralModel(
     return coordinateNames.indexOf(name);
   }
 
+  /** Content equality: same names and element-wise equal matrices. */
   @Override
   public boolean equals(Object o) {
     return o instanceof StructuralModel other
@@ -174,6 +175,7 @@ public record StructuralModel(
         && Arrays.deepEquals(stiffnessNPerM, other.stiffnessNPerM);
   }
 
+  /** Hash of the names and matrix contents, consistent with {@link #equals}. */
   @Override
   public int hashCode() {
     int h = coordinateNames.hashCode();
@@ -182,6 +184,7 @@ public record StructuralModel(
     return 31 * h + Arrays.deepHashCode(stiffnessNPerM);
   }
 
+  /** @return the names and matrix contents, for diagnostics */
   @Override
   public String toString() {
     return "StructuralModel[coordinateNames="
@@ -204,7 +207,9 @@ public record StructuralModel(
     for (int i = 0; i < n; i++) {
       if (a[i] == null || a[i].length != n) {
         throw new InvalidInputException(
-            path + "[" + i + "]", n + " columns", a[i] == null ? "nothing" : String.valueOf(a[i].length));
+            path + "[" + i + "]",
+            n + " columns",
+            a[i] == null ? "nothing" : String.valueOf(a[i].length));
       }
       for (int j = 0; j < n; j++) {
         if (!Double.isFinite(a[i][j])) {
