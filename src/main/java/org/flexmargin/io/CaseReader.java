@@ -1,0 +1,580 @@
+package org.flexmargin.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.regex.Pattern;
+import org.flexmargin.model.AeroSpec;
+import org.flexmargin.model.AirspeedKind;
+import org.flexmargin.model.Altitudes;
+import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.AnalysisOptions;
+import org.flexmargin.model.Configuration;
+import org.flexmargin.model.ElasticMode;
+import org.flexmargin.model.FlutterMethodKind;
+import org.flexmargin.model.GafTable;
+import org.flexmargin.model.InertiaAxis;
+import org.flexmargin.model.InputFile;
+import org.flexmargin.model.MachSweep;
+import org.flexmargin.model.ModeTable;
+import org.flexmargin.model.PointList;
+import org.flexmargin.model.ShapeValue;
+import org.flexmargin.model.SpeedSweep;
+import org.flexmargin.model.Strip;
+import org.flexmargin.model.StripTheorySpec;
+import org.flexmargin.model.StructureSpec;
+import org.flexmargin.model.SweepPlan;
+import org.flexmargin.model.SweepPoint;
+import org.flexmargin.model.TypicalSection;
+import org.flexmargin.model.UniformCantileverWing;
+
+/**
+ * Reads and validates flexmargin input files, format 1: case files (JSON), mode tables (JSON or
+ * CSV) and generalized aerodynamic force tables (JSON). The format is described key by key in
+ * {@code docs/case-files.md}.
+ *
+ * <p>Rules common to every file: keys are lower_snake_case with the unit in the name; SI units,
+ * except explicitly named knot and foot keys ({@code from_kt}, {@code altitude_ft}) converted here
+ * (1 kt = 1852/3600 m/s, 1 ft = 0.3048 m, both exact by definition); every file carries
+ * {@code "format": 1}; unknown keys are errors, never ignored; the sections {@code loop} and
+ * {@code requirements} are reserved for later formats and rejected. Structural damping may be given
+ * as a viscous ratio {@code damping_ratio} or as a structural damping coefficient
+ * {@code structural_damping_g}, converted with g = 2 zeta (Fung, <i>An Introduction to the Theory
+ * of Aeroelasticity</i>).
+ *
+ * <p>Every failure is an {@link InputFileException} naming file, line, field path, what was
+ * expected and what was found. Paths inside a case file are relative to the case file's folder;
+ * the provenance list of the case ({@link AnalysisCase#inputs()}) holds the SHA-256 of every file
+ * read, the case file first, each referenced file once.
+ *
+ * <p>All methods are static and thread-safe.
+ */
+public final class CaseReader {
+  private CaseReader() {}
+
+  /** The format version this reader reads. */
+  public static final int FORMAT = 1;
+
+  /** One international knot in m/s (1852 m per hour, exact). */
+  public static final double METRES_PER_SECOND_PER_KNOT = 1852.0 / 3600.0;
+  /** One international foot in metres (exact). */
+  public static final double METRES_PER_FOOT = 0.3048;
+
+  private static final List<String> CASE_KEYS =
+      List.of("format", "name", "description", "configurations", "sweep", "options");
+  private static final List<String> RESERVED = List.of("loop", "requirements");
+  private static final List<String> CONFIG_KEYS =
+      List.of("name", "mode_table", "uniform_wing", "typical_section", "aero");
+  private static final List<String> MODE_TABLE_KEYS = List.of("format", "name", "description", "modes");
+  private static final List<String> MODE_KEYS = List.of(
+      "name", "frequency_hz", "damping_ratio", "structural_damping_g", "generalized_mass_kg", "shapes");
+  private static final List<String> SHAPE_KEYS = List.of("displacement_m", "rotation_rad");
+  private static final List<String> FORCE_KEYS = List.of("format", "description", "reference_semichord_m",
+      "mach", "modes", "reduced_frequencies", "real", "imag");
+  private static final Pattern CASE_NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]*");
+
+  /**
+   * Reads a case file and every file it references.
+   *
+   * @param caseFile the case file (JSON)
+   * @return the validated case, with provenance of every file read
+   * @throws InputFileException on any unreadable, malformed or invalid input
+   */
+  public static AnalysisCase read(Path caseFile) {
+    SourceFile src = SourceFile.read(caseFile, caseFile.toString());
+    JsonField root = JsonInput.parse(src).root().object("a case file");
+    rejectReserved(root);
+    root.allowOnly(CASE_KEYS);
+    int format = readFormat(root);
+    String name = root.required("name", "a case name").text();
+    if (!CASE_NAME.matcher(name).matches()) {
+      throw root.optional("name").fail(
+          "a name usable as a folder name (letters, digits, '.', '_', '-'; not starting with '.')",
+          "\"" + name + "\"");
+    }
+    String description = textOrEmpty(root, "description");
+
+    Context ctx = new Context(caseFile, src);
+    List<JsonField> configs = root.required("configurations", "a list of configurations")
+        .list("a list of configurations");
+    if (configs.isEmpty()) {
+      throw root.optional("configurations").fail("at least one configuration", "an empty list");
+    }
+    List<Configuration> configurations = new ArrayList<>();
+    for (JsonField c : configs) {
+      configurations.add(readConfiguration(c, ctx));
+    }
+    SweepPlan sweep = readSweep(root.required("sweep", "a sweep section").object("a sweep section"));
+    JsonField opts = root.optional("options");
+    AnalysisOptions options = opts == null ? AnalysisOptions.defaults() : readOptions(opts.object("options"));
+    List<InputFile> inputs = new ArrayList<>(ctx.inputs.values());
+    return root.build(
+        () -> new AnalysisCase(format, name, description, configurations, sweep, options, inputs));
+  }
+
+  /**
+   * Reads a mode table on its own, JSON or CSV by file extension.
+   *
+   * @param file a {@code .json} or {@code .csv} mode table
+   * @return the validated table
+   * @throws InputFileException on any unreadable, malformed or invalid input
+   */
+  public static ModeTable readModeTable(Path file) {
+    return parseModeTable(SourceFile.read(file, file.toString()));
+  }
+
+  /**
+   * Reads a generalized aerodynamic force table on its own (its modes are not checked against a
+   * mode table; {@link #read} does that).
+   *
+   * @param file a {@code .json} force table
+   * @return the validated table
+   * @throws InputFileException on any unreadable, malformed or invalid input
+   */
+  public static GafTable readForceTable(Path file) {
+    return parseForceTable(SourceFile.read(file, file.toString()), null);
+  }
+
+  // ----------------------------------------------------------------------------------------------
+  // case file sections
+
+  /** Files read for one case: provenance in order, and tables already read by path. */
+  private static final class Context {
+    final Path baseDir;
+    final Map<Path, InputFile> inputs = new LinkedHashMap<>();
+    final Map<Path, ModeTable> modeTables = new LinkedHashMap<>();
+
+    Context(Path caseFile, SourceFile src) {
+      Path parent = caseFile.toAbsolutePath().normalize().getParent();
+      this.baseDir = parent;
+      inputs.put(caseFile.toAbsolutePath().normalize(), new InputFile(src.display(), src.sha256()));
+    }
+
+    /** Resolves a path written in the case file and its display name. */
+    Path resolve(String relative) {
+      return baseDir.resolve(relative).normalize();
+    }
+
+    SourceFile read(JsonField from, String relative) {
+      Path p = resolve(relative);
+      String display = displayName(relative);
+      SourceFile f = SourceFile.readReferenced(p, display, from);
+      inputs.putIfAbsent(p, new InputFile(relative, f.sha256()));
+      return f;
+    }
+
+    String displayName(String relative) {
+      Path cwd = Path.of("").toAbsolutePath();
+      Path p = resolve(relative);
+      return p.startsWith(cwd) ? cwd.relativize(p).toString() : p.toString();
+    }
+  }
+
+  private static void rejectReserved(JsonField root) {
+    for (String r : RESERVED) {
+      JsonField f = root.optional(r);
+      if (f != null) {
+        throw f.fail("only the sections " + String.join(", ", CASE_KEYS),
+            "a \"" + r + "\" section, which is reserved for a later format and not supported in format "
+                + FORMAT + " yet");
+      }
+    }
+  }
+
+  private static int readFormat(JsonField obj) {
+    JsonField f = obj.required("format", "\"format\": " + FORMAT);
+    int v = f.integer();
+    if (v != FORMAT) {
+      throw f.fail("format " + FORMAT + " (the version this program reads)", String.valueOf(v));
+    }
+    return v;
+  }
+
+  private static String textOrEmpty(JsonField obj, String key) {
+    JsonField f = obj.optional(key);
+    return f == null ? "" : f.text();
+  }
+
+  private static Configuration readConfiguration(JsonField c, Context ctx) {
+    c.object("a configuration");
+    c.allowOnly(CONFIG_KEYS);
+    String name = c.required("name", "a configuration name").text();
+    String kind = c.exactlyOne("the structure", "mode_table", "uniform_wing", "typical_section");
+    JsonField s = c.optional(kind);
+    StructureSpec structure;
+    AeroSpec aero = null;
+    switch (kind) {
+      case "mode_table": {
+        String rel = s.text();
+        Path p = ctx.resolve(rel);
+        ModeTable table = ctx.modeTables.get(p);
+        if (table == null) {
+          String lower = rel.toLowerCase(Locale.ROOT);
+          if (!lower.endsWith(".json") && !lower.endsWith(".csv")) {
+            throw s.fail("a .json or .csv mode table file", "\"" + rel + "\"");
+          }
+          table = parseModeTable(ctx.read(s, rel));
+          ctx.modeTables.put(p, table);
+        }
+        structure = table;
+        JsonField a = c.required("aero", "an aero section (strip_theory or force_table) for a mode table");
+        aero = readAero(a.object("an aero section"), table, ctx);
+        break;
+      }
+      case "uniform_wing":
+        structure = readUniformWing(s.object("a uniform wing"));
+        break;
+      default:
+        structure = readTypicalSection(s.object("a typical section"));
+        break;
+    }
+    if (!(structure instanceof ModeTable) && c.has("aero")) {
+      throw c.optional("aero").fail(
+          "no aero section for a built-in " + kind + " (it carries its own strips)", "an aero section");
+    }
+    StructureSpec st = structure;
+    AeroSpec ae = aero;
+    return c.build(() -> new Configuration(name, st, ae));
+  }
+
+  private static AeroSpec readAero(JsonField a, ModeTable table, Context ctx) {
+    a.allowOnly(List.of("strip_theory", "force_table"));
+    String kind = a.exactlyOne("the aerodynamic data", "strip_theory", "force_table");
+    JsonField f = a.optional(kind);
+    if (kind.equals("force_table")) {
+      String rel = f.text();
+      if (!rel.toLowerCase(Locale.ROOT).endsWith(".json")) {
+        throw f.fail("a .json force table file", "\"" + rel + "\"");
+      }
+      return parseForceTable(ctx.read(f, rel), table);
+    }
+    f.object("strip-theory data");
+    f.allowOnly(List.of("reference_semichord_m", "strips"));
+    double bRef = f.required("reference_semichord_m", "the reference semichord (m)").positive();
+    List<JsonField> items = f.required("strips", "a list of strips").list("a list of strips");
+    if (items.isEmpty()) {
+      throw f.optional("strips").fail("at least one strip", "an empty list");
+    }
+    Set<String> stations = table.modes().get(0).shapes().keySet();
+    Set<String> used = new HashSet<>();
+    List<Strip> strips = new ArrayList<>();
+    for (JsonField s : items) {
+      s.object("a strip");
+      s.allowOnly(List.of("station", "width_m", "semichord_m", "elastic_axis_a", "lift_slope_per_rad"));
+      JsonField st = s.required("station", "the station name of the strip in the mode table");
+      String station = st.text();
+      if (!stations.contains(station)) {
+        throw st.fail("a station of mode table \"" + table.name() + "\" (" + String.join(", ",
+            new TreeSet<>(stations)) + ")", "\"" + station + "\"");
+      }
+      if (!used.add(station)) {
+        throw st.fail("a station not used by another strip", "\"" + station + "\" a second time");
+      }
+      double w = s.required("width_m", "the strip width (m)").number();
+      double b = s.required("semichord_m", "the local semichord (m)").number();
+      double ea = s.required("elastic_axis_a", "the elastic axis aft of mid-chord (semichords)").number();
+      double cla = s.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").number();
+      strips.add(s.build(() -> new Strip(station, w, b, ea, cla)));
+    }
+    return f.build(() -> new StripTheorySpec(bRef, strips));
+  }
+
+  private static UniformCantileverWing readUniformWing(JsonField w) {
+    w.allowOnly(List.of("semi_span_m", "chord_m", "elastic_axis_chord_fraction",
+        "mass_axis_chord_fraction", "mass_per_length_kg_per_m", "pitch_inertia_kg_m", "inertia_axis",
+        "bending_stiffness_n_m2", "torsion_stiffness_n_m2", "lift_slope_per_rad", "bending_modes",
+        "torsion_modes", "strips", "damping_ratio", "structural_damping_g"));
+    double span = w.required("semi_span_m", "the semi-span (m)").number();
+    double chord = w.required("chord_m", "the chord (m)").number();
+    double ea = w.required("elastic_axis_chord_fraction", "the elastic axis (fraction of chord)").number();
+    double cg = w.required("mass_axis_chord_fraction", "the centre of mass (fraction of chord)").number();
+    double m = w.required("mass_per_length_kg_per_m", "the mass per length (kg/m)").number();
+    double inertia = w.required("pitch_inertia_kg_m", "the pitch inertia per length (kg m)").number();
+    JsonField axisField = w.required("inertia_axis", "\"elastic_axis\" or \"centre_of_mass\"");
+    InertiaAxis axis = switch (axisField.text()) {
+      case "elastic_axis" -> InertiaAxis.ELASTIC_AXIS;
+      case "centre_of_mass" -> InertiaAxis.CENTRE_OF_MASS;
+      default -> throw axisField.fail("\"elastic_axis\" or \"centre_of_mass\"", axisField.describe());
+    };
+    double ei = w.required("bending_stiffness_n_m2", "EI (N m^2)").number();
+    double gj = w.required("torsion_stiffness_n_m2", "GJ (N m^2)").number();
+    double cla = w.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").number();
+    int nb = w.required("bending_modes", "the number of bending functions").integer();
+    int nt = w.required("torsion_modes", "the number of torsion functions").integer();
+    int ns = w.required("strips", "the number of strips").integer();
+    double zeta = readDamping(w);
+    return w.build(() -> new UniformCantileverWing(
+        span, chord, ea, cg, m, inertia, axis, ei, gj, cla, nb, nt, ns, zeta));
+  }
+
+  private static TypicalSection readTypicalSection(JsonField t) {
+    t.allowOnly(List.of("semichord_m", "mass_per_span_kg_per_m", "elastic_axis_a",
+        "mass_offset_x_alpha", "radius_of_gyration_squared", "heave_frequency_hz",
+        "pitch_frequency_hz", "lift_slope_per_rad", "span_m", "damping_ratio", "structural_damping_g"));
+    double b = t.required("semichord_m", "the semichord b (m)").number();
+    double m = t.required("mass_per_span_kg_per_m", "the mass per span (kg/m)").number();
+    double a = t.required("elastic_axis_a", "a, elastic axis aft of mid-chord (semichords)").number();
+    double xa = t.required("mass_offset_x_alpha", "x_alpha (semichords)").number();
+    double r2 = t.required("radius_of_gyration_squared", "r_alpha^2 (semichords^2)").number();
+    double fh = t.required("heave_frequency_hz", "the heave frequency (Hz)").number();
+    double fa = t.required("pitch_frequency_hz", "the pitch frequency (Hz)").number();
+    double cla = t.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").number();
+    double span = t.required("span_m", "the span (m)").number();
+    double zeta = readDamping(t);
+    return t.build(() -> new TypicalSection(b, m, a, xa, r2, fh, fa, cla, span, zeta));
+  }
+
+  /** Reads exactly one of damping_ratio / structural_damping_g; returns zeta. */
+  private static double readDamping(JsonField obj) {
+    String key = obj.exactlyOne("the structural damping", "damping_ratio", "structural_damping_g");
+    JsonField f = obj.optional(key);
+    double v = f.number();
+    if (key.equals("damping_ratio")) {
+      if (!(v >= 0 && v < 1)) {
+        throw f.fail("a damping ratio in [0, 1)", f.describe());
+      }
+      return v;
+    }
+    if (!(v >= 0 && v < 2)) {
+      throw f.fail("a structural damping g in [0, 2) (g = 2 zeta)", f.describe());
+    }
+    return v / 2;
+  }
+
+  private static SweepPlan readSweep(JsonField s) {
+    JsonField kindField = s.required("kind", "\"speed\", \"mach\" or \"points\"");
+    String kind = kindField.text();
+    switch (kind) {
+      case "speed": {
+        s.allowOnly(List.of("kind", "altitude_m", "altitude_ft", "speed_kind", "from_mps", "from_kt",
+            "to_mps", "to_kt", "points"));
+        double alt = readAltitude(s, "altitude");
+        AirspeedKind sk = readSpeedKind(s);
+        double from = readSpeed(s, "from");
+        double to = readSpeed(s, "to");
+        if (!(to > from)) {
+          String key = s.has("to_mps") ? "to_mps" : "to_kt";
+          throw s.optional(key).fail("a speed above the sweep's first speed " + from + " m/s",
+              to + " m/s (an empty or inverted range)");
+        }
+        int n = s.required("points", "the number of points (>= 2)").integer();
+        return s.build(() -> new SpeedSweep(alt, sk, from, to, n));
+      }
+      case "mach": {
+        s.allowOnly(List.of("kind", "mach", "from_altitude_m", "from_altitude_ft", "to_altitude_m",
+            "to_altitude_ft", "points"));
+        double mach = s.required("mach", "the Mach number").number();
+        double from = readAltitude(s, "from_altitude");
+        double to = readAltitude(s, "to_altitude");
+        if (from == to) {
+          String key = s.has("to_altitude_m") ? "to_altitude_m" : "to_altitude_ft";
+          throw s.optional(key).fail("an altitude different from the first", to + " m (an empty range)");
+        }
+        int n = s.required("points", "the number of points (>= 2)").integer();
+        return s.build(() -> new MachSweep(mach, from, to, n));
+      }
+      case "points": {
+        s.allowOnly(List.of("kind", "points"));
+        List<JsonField> items = s.required("points", "a list of flight points").list("a list of flight points");
+        if (items.size() < 2) {
+          throw s.optional("points").fail("at least two flight points", items.size() + "");
+        }
+        List<SweepPoint> points = new ArrayList<>();
+        for (JsonField p : items) {
+          p.object("a flight point");
+          p.allowOnly(List.of("altitude_m", "altitude_ft", "speed_kind", "speed_mps", "speed_kt"));
+          double alt = readAltitude(p, "altitude");
+          AirspeedKind sk = readSpeedKind(p);
+          double v = readSpeed(p, "speed");
+          points.add(p.build(() -> new SweepPoint(alt, v, sk)));
+        }
+        return s.build(() -> new PointList(points));
+      }
+      default:
+        throw kindField.fail("\"speed\", \"mach\" or \"points\"", kindField.describe());
+    }
+  }
+
+  /** Reads {@code <stem>_m} or {@code <stem>_ft} and checks the atmosphere range; returns metres. */
+  private static double readAltitude(JsonField obj, String stem) {
+    String key = obj.exactlyOne("the altitude", stem + "_m", stem + "_ft");
+    JsonField f = obj.optional(key);
+    double v = f.number();
+    double m = key.endsWith("_ft") ? v * METRES_PER_FOOT : v;
+    if (!(m >= Altitudes.MIN_M && m <= Altitudes.MAX_M)) {
+      throw f.fail("a geometric altitude in [" + Altitudes.MIN_M + ", " + Altitudes.MAX_M
+          + "] m (the standard atmosphere range)", f.describe() + (key.endsWith("_ft") ? " ft" : " m"));
+    }
+    return m;
+  }
+
+  /** Reads {@code <stem>_mps} or {@code <stem>_kt} (&gt; 0); returns m/s. */
+  private static double readSpeed(JsonField obj, String stem) {
+    String key = obj.exactlyOne("the airspeed", stem + "_mps", stem + "_kt");
+    JsonField f = obj.optional(key);
+    double v = f.positive();
+    return key.endsWith("_kt") ? v * METRES_PER_SECOND_PER_KNOT : v;
+  }
+
+  private static AirspeedKind readSpeedKind(JsonField obj) {
+    JsonField f = obj.required("speed_kind", "\"eas\" or \"tas\"");
+    return switch (f.text()) {
+      case "eas" -> AirspeedKind.EQUIVALENT;
+      case "tas" -> AirspeedKind.TRUE;
+      default -> throw f.fail("\"eas\" (equivalent) or \"tas\" (true airspeed)", f.describe());
+    };
+  }
+
+  private static AnalysisOptions readOptions(JsonField o) {
+    o.allowOnly(List.of("method", "damping_limit_g", "convergence_tolerance", "max_iterations",
+        "onset_speed_tolerance_mps", "k_method_min_reduced_frequency",
+        "k_method_max_reduced_frequency", "k_method_points"));
+    AnalysisOptions d = AnalysisOptions.defaults();
+    FlutterMethodKind method = d.method();
+    JsonField m = o.optional("method");
+    if (m != null) {
+      method = switch (m.text()) {
+        case "pk" -> FlutterMethodKind.PK;
+        case "k" -> FlutterMethodKind.K;
+        default -> throw m.fail("\"pk\" or \"k\"", m.describe());
+      };
+    }
+    FlutterMethodKind meth = method;
+    double g = numberOr(o, "damping_limit_g", d.dampingLimitG());
+    double tol = numberOr(o, "convergence_tolerance", d.convergenceTolerance());
+    int iters = o.has("max_iterations") ? o.optional("max_iterations").integer() : d.maxIterations();
+    double onset = numberOr(o, "onset_speed_tolerance_mps", d.onsetSpeedToleranceMps());
+    double kMin = numberOr(o, "k_method_min_reduced_frequency", d.kMethodMinReducedFrequency());
+    double kMax = numberOr(o, "k_method_max_reduced_frequency", d.kMethodMaxReducedFrequency());
+    int kPts = o.has("k_method_points") ? o.optional("k_method_points").integer() : d.kMethodPoints();
+    return o.build(() -> new AnalysisOptions(meth, g, tol, iters, onset, kMin, kMax, kPts));
+  }
+
+  private static double numberOr(JsonField obj, String key, double dflt) {
+    JsonField f = obj.optional(key);
+    return f == null ? dflt : f.number();
+  }
+
+  // ----------------------------------------------------------------------------------------------
+  // mode tables and force tables
+
+  private static ModeTable parseModeTable(SourceFile src) {
+    String lower = src.display().toLowerCase(Locale.ROOT);
+    if (lower.endsWith(".csv")) {
+      return ModeTableCsv.parse(src);
+    }
+    if (!lower.endsWith(".json")) {
+      throw new InputFileException(src.display(), 0, "", "a .json or .csv mode table", "another file type");
+    }
+    JsonField root = JsonInput.parse(src).root().object("a mode table");
+    root.allowOnly(MODE_TABLE_KEYS);
+    readFormat(root);
+    JsonField nameField = root.optional("name");
+    String name = nameField == null ? stem(src) : nameField.text();
+    textOrEmpty(root, "description");
+    List<JsonField> items = root.required("modes", "a list of modes").list("a list of modes");
+    if (items.isEmpty()) {
+      throw root.optional("modes").fail("at least one mode", "an empty list");
+    }
+    List<ElasticMode> modes = new ArrayList<>();
+    for (JsonField m : items) {
+      m.object("a mode");
+      m.allowOnly(MODE_KEYS);
+      String modeName = m.required("name", "a mode name").text();
+      double f = m.required("frequency_hz", "the natural frequency (Hz)").number();
+      double zeta = readDamping(m);
+      double mass = m.required("generalized_mass_kg", "the generalized mass (kg)").number();
+      JsonField shapesField = m.required("shapes", "the mode shape by station").object("the mode shape by station");
+      Map<String, ShapeValue> shapes = new LinkedHashMap<>();
+      for (Map.Entry<String, JsonField> e : shapesField.entries()) {
+        JsonField v = e.getValue().object("a shape value with displacement_m and rotation_rad");
+        v.allowOnly(SHAPE_KEYS);
+        double d = v.required("displacement_m", "the displacement (m per unit coordinate)").number();
+        double r = v.required("rotation_rad", "the rotation (rad per unit coordinate)").number();
+        shapes.put(e.getKey(), v.build(() -> new ShapeValue(d, r)));
+      }
+      if (shapes.isEmpty()) {
+        throw shapesField.fail("values at one station or more", "no stations");
+      }
+      String mismatch = modes.isEmpty() ? null : stationMismatch(modes.get(0).shapes().keySet(), shapes.keySet());
+      if (mismatch != null) {
+        throw shapesField.fail("the same stations as modes[0] (\"" + modes.get(0).name() + "\")", mismatch);
+      }
+      modes.add(m.build(() -> new ElasticMode(modeName, f, zeta, mass, shapes)));
+    }
+    return root.build(() -> new ModeTable(name, modes));
+  }
+
+  /**
+   * @return {@code null} if both station sets are equal, else a description of the difference
+   */
+  static String stationMismatch(Set<String> reference, Set<String> actual) {
+    Set<String> missing = new TreeSet<>(reference);
+    missing.removeAll(actual);
+    Set<String> extra = new TreeSet<>(actual);
+    extra.removeAll(reference);
+    if (missing.isEmpty() && extra.isEmpty()) {
+      return null;
+    }
+    StringBuilder sb = new StringBuilder();
+    if (!missing.isEmpty()) {
+      sb.append("missing ").append(String.join(", ", missing));
+    }
+    if (!extra.isEmpty()) {
+      sb.append(sb.length() > 0 ? "; " : "").append("extra ").append(String.join(", ", extra));
+    }
+    return sb.toString();
+  }
+
+  static String stem(SourceFile src) {
+    String f = src.path().getFileName().toString();
+    int dot = f.lastIndexOf('.');
+    return dot > 0 ? f.substring(0, dot) : f;
+  }
+
+  private static GafTable parseForceTable(SourceFile src, ModeTable table) {
+    JsonField root = JsonInput.parse(src).root().object("a force table");
+    root.allowOnly(FORCE_KEYS);
+    readFormat(root);
+    textOrEmpty(root, "description");
+    double bRef = root.required("reference_semichord_m", "the reference semichord (m)").number();
+    double mach = root.required("mach", "the Mach number of the table").number();
+    JsonField modesField = root.required("modes", "the list of mode names (rows and columns)");
+    List<String> names = new ArrayList<>();
+    for (JsonField f : modesField.list("a list of mode names")) {
+      names.add(f.text());
+    }
+    if (new LinkedHashSet<>(names).size() != names.size()) {
+      throw modesField.fail("unique mode names", names.toString());
+    }
+    if (table != null && !names.equals(table.modeNames())) {
+      throw modesField.fail("the modes of mode table \"" + table.name() + "\" in order "
+          + table.modeNames(), names.toString());
+    }
+    double[] k = root.required("reduced_frequencies", "the list of reduced frequencies")
+        .numbers("a list of reduced frequencies");
+    double[][][] re = cube(root.required("real", "the real parts as [k][row][column]"));
+    double[][][] im = cube(root.required("imag", "the imaginary parts as [k][row][column]"));
+    return root.build(() -> new GafTable(bRef, mach, names, k, re, im));
+  }
+
+  private static double[][][] cube(JsonField f) {
+    List<JsonField> ks = f.list("a list with one matrix per reduced frequency");
+    double[][][] out = new double[ks.size()][][];
+    for (int i = 0; i < out.length; i++) {
+      List<JsonField> rows = ks.get(i).list("a matrix as a list of rows");
+      out[i] = new double[rows.size()][];
+      for (int r = 0; r < rows.size(); r++) {
+        out[i][r] = rows.get(r).numbers("a row as a list of numbers");
+      }
+    }
+    return out;
+  }
+}
