@@ -1,0 +1,81 @@
+package org.flexmargin.cli;
+
+import java.io.PrintWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The {@code flexmargin} command line. Exit codes: 0 done (and every requirement met), 1 internal
+ * error, 2 bad input, 3 done with requirements violated.
+ */
+@Command(
+    name = "flexmargin",
+    mixinStandardHelpOptions = true,
+    versionProvider = Version.class,
+    description = {
+      "Aeroelastic stability analysis: divergence and flutter versus airspeed.",
+      "",
+      "Analysis only: results support, and never replace, ground vibration tests, structural-coupling "
+          + "tests, flight flutter testing and the approval of the airworthiness authority."
+    },
+    subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class,
+        CommandLine.HelpCommand.class},
+    footer = {
+      "",
+      "Examples:",
+      "  flexmargin demo",
+      "  flexmargin check mode-tables/validation/goland-wing.json",
+      "  flexmargin sweep mode-tables/demo/demo-case.json --out reports/demo",
+      "",
+      "Exit codes: 0 done, 1 internal error, 2 bad input, 3 done with requirements violated."
+    })
+public final class FlexMargin implements Runnable {
+
+  /** Exit code: done. */
+  public static final int EXIT_OK = 0;
+  /** Exit code: internal error. */
+  public static final int EXIT_INTERNAL = 1;
+  /** Exit code: bad input. */
+  public static final int EXIT_BAD_INPUT = 2;
+  /** Exit code: done with requirements violated. */
+  public static final int EXIT_REQUIREMENTS_VIOLATED = 3;
+
+  @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public void run() {
+    spec.commandLine().usage(spec.commandLine().getOut());
+  }
+
+  /**
+   * Runs the command line and returns the exit code (without exiting).
+   *
+   * @param args arguments
+   * @param out standard output
+   * @param err standard error
+   * @return exit code
+   */
+  public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+    CommandLine cl = new CommandLine(new FlexMargin());
+    cl.setOut(out);
+    cl.setErr(err);
+    cl.setExecutionExceptionHandler(new ErrorHandler());
+    cl.setParameterExceptionHandler((ex, a) -> {
+      err.println("flexmargin: " + ex.getMessage());
+      err.println("Try 'flexmargin " + (ex.getCommandLine().getCommandName().equals("flexmargin") ? ""
+          : ex.getCommandLine().getCommandName() + " ") + "--help'.");
+      return EXIT_BAD_INPUT;
+    });
+    int code = cl.execute(args);
+    out.flush();
+    err.flush();
+    return code;
+  }
+
+  /** @param args command-line arguments */
+  public static void main(String[] args) {
+    PrintWriter out = new PrintWriter(System.out, true);
+    PrintWriter err = new PrintWriter(System.err, true);
+    System.exit(execute(args, out, err));
+  }
+}

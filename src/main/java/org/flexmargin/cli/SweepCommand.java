@@ -1,0 +1,100 @@
+package org.flexmargin.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.flexmargin.flutter.SolverDiagnostics;
+import org.flexmargin.io.CaseReader;
+import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.report.ReportFolder;
+import org.flexmargin.report.ResultFiles;
+import org.flexmargin.sweep.ConfigurationResult;
+import org.flexmargin.sweep.Finding;
+import org.flexmargin.sweep.Findings;
+import org.flexmargin.sweep.OpenLoopSweep;
+import org.flexmargin.sweep.PlannedPath;
+import org.flexmargin.sweep.SweepResult;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code flexmargin sweep CASE}: the main job. */
+@Command(name = "sweep", mixinStandardHelpOptions = true,
+    description = {"Sweep airspeed: divergence speed and every flutter onset (refined between grid points), "
+        + "written as JSON and CSV under reports/<case>/."},
+    footer = {"", "Examples:", "  flexmargin sweep mode-tables/demo/demo-case.json",
+        "  flexmargin sweep mode-tables/validation/goland-wing.json --out /tmp/goland --quiet"})
+final class SweepCommand implements Callable<Integer> {
+  @Parameters(index = "0", paramLabel = "CASE", description = "Case file (JSON).")
+  Path caseFile;
+
+  @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: reports/<case name>).")
+  Path out;
+
+  @Mixin CommonOptions common;
+
+  @Spec picocli.CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public Integer call() {
+    return run(spec, caseFile, out, common);
+  }
+
+  static int run(picocli.CommandLine.Model.CommandSpec spec, Path caseFile, Path outDir, CommonOptions common) {
+    PrintWriter out = spec.commandLine().getOut();
+    PrintWriter err = spec.commandLine().getErr();
+    AnalysisCase c = CaseReader.read(caseFile);
+    boolean terminal = System.console() != null && !common.quiet;
+    int total = c.configurations().size();
+    AtomicInteger done = new AtomicInteger();
+    long start = System.nanoTime();
+    if (!common.quiet) {
+      err.printf(Locale.ROOT, "analysing %d configuration(s) of case %s ...%n", total, c.name());
+      err.flush();
+    }
+    SweepResult result = new OpenLoopSweep(common.threads).run(c, name -> {
+      if (!common.quiet) {
+        synchronized (err) {
+          int d = done.incrementAndGet();
+          double elapsed = (System.nanoTime() - start) * 1e-9;
+          double eta = d < total ? elapsed / d * (total - d) : 0;
+          err.printf(Locale.ROOT, "%s[%d/%d] %s done, %.1f s elapsed, ETA %.1f s%n",
+              terminal ? "\r" : "", d, total, name, elapsed, eta);
+          err.flush();
+        }
+      }
+    });
+    PlannedPath path = new PlannedPath(c.sweep());
+    List<Finding> findings = Findings.of(result, path.at(0));
+    Path target = outDir != null ? outDir : Path.of("reports", ResultFiles.fileSafe(c.name()));
+    Path written = ReportFolder.writeAtomically(target,
+        folder -> ResultFiles.write(folder, result, findings, Version.get()));
+    if (!common.quiet) {
+      out.println("case " + c.name() + ": " + result.pathDescription());
+      out.println();
+      Tables.findings(out, findings, terminal);
+      out.println();
+      for (ConfigurationResult r : result.configurations()) {
+        SolverDiagnostics d = r.flutter().diagnostics();
+        out.printf(Locale.ROOT,
+            "%s: %s method, %d root solves, %.2f iterations per root, %d step halvings, worst residual %.1e, "
+                + "lowest MAC %.3f, %d unconverged, %.2f s%n",
+            r.configuration(), r.flutter().method().name().toLowerCase(Locale.ROOT).replace("pk", "p-k"),
+            d.rootSolves(), d.rootSolves() > 0 ? (double) d.iterations() / d.rootSolves() : 0.0,
+            d.stepHalvings(), d.maxRelativeResidual(), d.minMac(), d.unconvergedRoots(), r.elapsedSeconds());
+        for (String w : r.flutter().warnings()) {
+          out.println("  warning: " + w);
+        }
+      }
+      out.println();
+      out.println("results written to " + written);
+      Tables.cautions(out);
+    }
+    return FlexMargin.EXIT_OK;
+  }
+}

@@ -1,0 +1,222 @@
+package org.flexmargin.report;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Locale;
+import org.flexmargin.flutter.BranchCurve;
+import org.flexmargin.flutter.DivergenceResult;
+import org.flexmargin.flutter.FlutterCrossing;
+import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.flutter.SolverDiagnostics;
+import org.flexmargin.model.InputFile;
+import org.flexmargin.sweep.ConfigurationResult;
+import org.flexmargin.sweep.Finding;
+import org.flexmargin.sweep.SweepResult;
+
+/**
+ * Writes the open-loop results as data files: {@code results.json} (every number, units in the key
+ * names, non-finite values as null), {@code findings.csv} (the findings table) and one
+ * {@code branches-CONFIG.csv} per configuration (damping and frequency of every root at every
+ * solution point, the data of the V-g and V-f diagrams).
+ */
+public final class ResultFiles {
+  private ResultFiles() {}
+
+  /** Format version of the result files. */
+  public static final int FORMAT = 1;
+
+  /**
+   * @param folder output folder (exists)
+   * @param result sweep result
+   * @param findings findings table
+   * @param toolVersion version string for provenance
+   * @throws IOException on write failure
+   */
+  public static void write(Path folder, SweepResult result, List<Finding> findings, String toolVersion)
+      throws IOException {
+    ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    ObjectNode root = mapper.createObjectNode();
+    root.put("format", FORMAT);
+    root.put("tool", "flexmargin " + toolVersion);
+    root.put("generated_utc", Instant.now().toString());
+    root.put("case", result.analysisCase().name());
+    root.put("description", result.analysisCase().description());
+    root.put("sweep", result.pathDescription());
+    ArrayNode cautions = root.putArray("cautions");
+    Cautions.TEXT.forEach(cautions::add);
+    ArrayNode inputs = root.putArray("inputs");
+    for (InputFile f : result.analysisCase().inputs()) {
+      inputs.addObject().put("path", f.path()).put("sha256", f.sha256());
+    }
+    ArrayNode fnd = root.putArray("findings");
+    for (Finding f : findings) {
+      ObjectNode o = fnd.addObject();
+      o.put("configuration", f.configuration());
+      o.put("finding", f.what());
+      o.put("mode", f.mode());
+      num(o, "speed_eas_mps", f.speedEasMps());
+      num(o, "speed_eas_kt", f.speedEasKnots());
+      num(o, "speed_tas_mps", f.speedTasMps());
+      num(o, "mach", f.mach());
+      num(o, "altitude_m", f.altitudeM());
+      num(o, "frequency_hz", f.frequencyHz());
+      o.put("remark", f.remark());
+    }
+    ArrayNode configs = root.putArray("configurations");
+    for (ConfigurationResult c : result.configurations()) {
+      configs.add(configuration(mapper, c));
+    }
+    Files.writeString(folder.resolve("results.json"), mapper.writeValueAsString(root), StandardCharsets.UTF_8);
+    writeFindingsCsv(folder.resolve("findings.csv"), findings);
+    for (ConfigurationResult c : result.configurations()) {
+      writeBranchesCsv(folder.resolve("branches-" + fileSafe(c.configuration()) + ".csv"), c.flutter());
+    }
+  }
+
+  /** @return a name safe for a file: letters, digits, dot, dash, underscore */
+  public static String fileSafe(String name) {
+    return name.replaceAll("[^A-Za-z0-9._-]", "_");
+  }
+
+  private static ObjectNode configuration(ObjectMapper mapper, ConfigurationResult c) {
+    ObjectNode o = mapper.createObjectNode();
+    o.put("name", c.configuration());
+    o.put("aero", c.aeroDescription());
+    num(o, "elapsed_s", c.elapsedSeconds());
+    ArrayNode modes = o.putArray("modes");
+    double[] f = c.modeFrequenciesHz();
+    for (int i = 0; i < f.length; i++) {
+      ObjectNode m = modes.addObject();
+      m.put("name", c.modeNames().get(i));
+      num(m, "frequency_hz", f[i]);
+    }
+    DivergenceResult d = c.divergence();
+    ObjectNode div = o.putObject("divergence");
+    div.put("found", d.found());
+    num(div, "dynamic_pressure_pa", d.dynamicPressurePa());
+    num(div, "speed_eas_mps", d.speedEasMps());
+    num(div, "speed_tas_mps_at_sweep_start_altitude", c.divergenceTasAtSweepStartMps());
+    num(div, "confirmed_dynamic_pressure_pa",
+        c.divergenceConfirmedPa().isPresent() ? c.divergenceConfirmedPa().getAsDouble() : Double.NaN);
+    num(div, "relative_residual", d.relativeResidual());
+    num(div, "reduced_frequency_used", d.reducedFrequencyUsed());
+    ArrayNode shape = div.putArray("shape");
+    for (double s : d.shape()) {
+      shape.add(s);
+    }
+    div.put("note", d.note());
+    FlutterSolution s = c.flutter();
+    ObjectNode fl = o.putObject("flutter");
+    fl.put("method", s.method().name().toLowerCase(Locale.ROOT));
+    ArrayNode cr = fl.putArray("crossings");
+    for (FlutterCrossing x : s.crossings()) {
+      ObjectNode xo = cr.addObject();
+      xo.put("mode", x.branchName());
+      xo.put("kind", x.kind().name().toLowerCase(Locale.ROOT));
+      num(xo, "threshold_g", x.thresholdG());
+      num(xo, "speed_eas_mps", x.condition().speedEasMps());
+      num(xo, "speed_tas_mps", x.condition().speedTasMps());
+      num(xo, "mach", x.condition().mach());
+      num(xo, "altitude_m", x.condition().altitudeM());
+      num(xo, "dynamic_pressure_pa", x.condition().dynamicPressurePa());
+      num(xo, "frequency_hz", x.frequencyHz());
+      num(xo, "path_parameter", x.pathParameter());
+      xo.put("evaluations", x.evaluations());
+    }
+    SolverDiagnostics dg = s.diagnostics();
+    ObjectNode diag = fl.putObject("diagnostics");
+    diag.put("root_solves", dg.rootSolves());
+    diag.put("iterations", dg.iterations());
+    diag.put("full_eigen_solves", dg.fullEigenSolves());
+    diag.put("step_halvings", dg.stepHalvings());
+    num(diag, "max_relative_residual", dg.maxRelativeResidual());
+    num(diag, "min_mac", dg.minMac());
+    diag.put("unconverged_roots", dg.unconvergedRoots());
+    ArrayNode warn = fl.putArray("warnings");
+    s.warnings().forEach(warn::add);
+    ArrayNode br = fl.putArray("branches");
+    for (BranchCurve b : s.branches()) {
+      ObjectNode bo = br.addObject();
+      bo.put("mode", b.name());
+      arr(bo, s.method().name().equals("K") ? "reduced_frequency_grid" : "path_parameter", b.pathParameter());
+      arr(bo, "speed_eas_mps", b.speedEasMps());
+      arr(bo, "speed_tas_mps", b.speedTasMps());
+      arr(bo, "frequency_hz", b.frequencyHz());
+      arr(bo, "damping_g", b.dampingG());
+      arr(bo, "damping_ratio", b.dampingRatio());
+      arr(bo, "reduced_frequency", b.reducedFrequency());
+    }
+    return o;
+  }
+
+  private static void num(ObjectNode o, String key, double v) {
+    if (Double.isFinite(v)) {
+      o.put(key, v);
+    } else {
+      o.putNull(key);
+    }
+  }
+
+  private static void arr(ObjectNode o, String key, double[] v) {
+    ArrayNode a = o.putArray(key);
+    for (double d : v) {
+      if (Double.isFinite(d)) {
+        a.add(d);
+      } else {
+        a.addNull();
+      }
+    }
+  }
+
+  private static void writeFindingsCsv(Path file, List<Finding> findings) throws IOException {
+    try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+      w.write("configuration,finding,mode,speed_eas_mps,speed_eas_kt,speed_tas_mps,mach,altitude_m,frequency_hz,remark\n");
+      for (Finding f : findings) {
+        w.write(String.join(",", csv(f.configuration()), csv(f.what()), csv(f.mode()),
+            fmt(f.speedEasMps()), fmt(f.speedEasKnots()), fmt(f.speedTasMps()), fmt(f.mach()),
+            fmt(f.altitudeM()), fmt(f.frequencyHz()), csv(f.remark())));
+        w.write('\n');
+      }
+    }
+  }
+
+  private static void writeBranchesCsv(Path file, FlutterSolution s) throws IOException {
+    try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+      w.write("mode,point,speed_eas_mps,speed_tas_mps,frequency_hz,damping_g,damping_ratio,reduced_frequency,converged\n");
+      for (BranchCurve b : s.branches()) {
+        double[] eas = b.speedEasMps();
+        double[] tas = b.speedTasMps();
+        double[] f = b.frequencyHz();
+        double[] g = b.dampingG();
+        double[] z = b.dampingRatio();
+        double[] k = b.reducedFrequency();
+        boolean[] ok = b.converged();
+        for (int i = 0; i < b.size(); i++) {
+          w.write(String.join(",", csv(b.name()), Integer.toString(i), fmt(eas[i]), fmt(tas[i]), fmt(f[i]),
+              fmt(g[i]), fmt(z[i]), fmt(k[i]), Boolean.toString(ok[i])));
+          w.write('\n');
+        }
+      }
+    }
+  }
+
+  private static String fmt(double v) {
+    return Double.isFinite(v) ? String.format(Locale.ROOT, "%.8g", v) : "";
+  }
+
+  private static String csv(String s) {
+    if (s.contains(",") || s.contains("\"") || s.contains("\n")) {
+      return "\"" + s.replace("\"", "\"\"") + "\"";
+    }
+    return s;
+  }
+}
