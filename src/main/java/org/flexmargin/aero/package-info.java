@@ -7,7 +7,7 @@
  *   <li>{@link org.flexmargin.aero.StripTheoryAero}: Theodorsen's two-dimensional theory strip by
  *       strip, valid at every k &ge; 0;
  *   <li>{@link org.flexmargin.aero.TabulatedAero}: the user's own tabulated Q(ik), interpolated by
- *       natural cubic splines and clamped outside the table;
+ *       not-a-knot cubic splines and clamped outside the table;
  *   <li>{@link org.flexmargin.aero.Theodorsen}: C(k) = F + iG (NACA Report 496);
  *   <li>{@link org.flexmargin.aero.Bessel}: J<sub>0</sub>, J<sub>1</sub>, Y<sub>0</sub>,
  *       Y<sub>1</sub> of real argument, which Theodorsen's function needs.
