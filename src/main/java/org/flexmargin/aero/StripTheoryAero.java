@@ -127,7 +127,79 @@ public final class StripTheoryAero implements AeroSource {
         twist[s * modeCount + j] = shape.rotationRad();
       }
     }
+    // strips sharing a semichord share C(k_s): evaluate Theodorsen's function once per group
+    this.semichordGroup = new int[stripCount];
+    double[] unique = new double[stripCount];
+    int groups = 0;
+    for (int s = 0; s < stripCount; s++) {
+      int g = 0;
+      while (g < groups && unique[g] != semichordM[s]) {
+        g++;
+      }
+      if (g == groups) {
+        unique[groups++] = semichordM[s];
+      }
+      semichordGroup[s] = g;
+    }
+    this.groupSemichordM = Arrays.copyOf(unique, groups);
+    this.basis = new double[groups * BASIS * modeCount * modeCount];
+    for (int st = 0; st < stripCount; st++) {
+      accumulateBasis(st);
+    }
   }
+
+  /** Number of k-dependent basis functions: k_s^2, i k_s, C(k_s), i k_s C(k_s). */
+  private static final int BASIS = 4;
+
+  /**
+   * Real matrices A[g][m] with Q(ik) = sum over semichord groups g and basis functions m of
+   * phi_m(k_s) A[g][m]; flattened as [(g * BASIS + m) * n * n + i * n + j].
+   */
+  private final double[] basis;
+
+  /**
+   * Adds strip st's contribution to the basis matrices. Per unit q and unit span, the strip's lift
+   * and moment for unit heave w and unit twist theta are linear combinations of
+   * phi = (k^2, i k, C, i k C) with real coefficients (see the class Javadoc for the derivation):
+   * L_w = 2 pi k^2 - 2 a0 (ikC); M_w = b (2 pi a k^2 - 2 a0 e' (ikC));
+   * L_t = b (2 pi a k^2 + 2 pi (ik) + 2 a0 C + 2 a0 r (ikC));
+   * M_t = b^2 (2 pi (1/8 + a^2) k^2 - 2 pi r (ik) + 2 a0 e' C + 2 a0 e' r (ikC)),
+   * with e' = a + 1/2 and r = 1/2 - a.
+   */
+  private void accumulateBasis(int st) {
+    int n = modeCount;
+    double b = semichordM[st];
+    double a = elasticAxisA[st];
+    double a0 = liftSlopePerRad[st];
+    double width = widthM[st];
+    double twoPi = 2.0 * Math.PI;
+    double armE = a + 0.5;
+    double rearA = 0.5 - a;
+    double[] lw = {twoPi, 0.0, 0.0, -2.0 * a0};
+    double[] mw = {b * twoPi * a, 0.0, 0.0, -2.0 * a0 * b * armE};
+    double[] lt = {b * twoPi * a, b * twoPi, 2.0 * a0 * b, 2.0 * a0 * b * rearA};
+    double[] mt = {b * b * twoPi * (0.125 + a * a), -b * b * twoPi * rearA, 2.0 * a0 * b * b * armE,
+        2.0 * a0 * b * b * armE * rearA};
+    int base = st * n;
+    for (int m = 0; m < BASIS; m++) {
+      int offset = (semichordGroup[st] * BASIS + m) * n * n;
+      for (int i = 0; i < n; i++) {
+        double wi = heave[base + i];
+        double ti = twist[base + i];
+        for (int j = 0; j < n; j++) {
+          double wj = heave[base + j];
+          double tj = twist[base + j];
+          basis[offset + i * n + j] +=
+              width * (wi * (lw[m] * wj + lt[m] * tj) + ti * (mw[m] * wj + mt[m] * tj));
+        }
+      }
+    }
+  }
+
+  /** Index into {@link #groupSemichordM} of each strip's semichord. */
+  private final int[] semichordGroup;
+  /** Distinct strip semichords (m). */
+  private final double[] groupSemichordM;
 
   @Override
   public int size() {
@@ -170,50 +242,24 @@ public final class StripTheoryAero implements AeroSource {
     double[] q = out.data;
     Arrays.fill(q, 0, 2 * n * n, 0.0);
     double[] fg = new double[2];
-    for (int s = 0; s < stripCount; s++) {
-      double b = semichordM[s];
-      double a = elasticAxisA[s];
-      double a0 = liftSlopePerRad[s];
-      double k = reducedFrequency * b / referenceSemichordM;
+    int nn = n * n;
+    for (int g = 0; g < groupSemichordM.length; g++) {
+      double k = reducedFrequency * groupSemichordM[g] / referenceSemichordM;
       Theodorsen.evaluate(k, fg);
-      double cRe = fg[0];
-      double cIm = fg[1];
-      double k2 = k * k;
-      double twoPi = 2.0 * Math.PI;
-      double armE = a + 0.5; // e / b
-      double rearA = 0.5 - a; // (1/2 - a)
-      // i k C = -k G + i k F
-      double ikcRe = -k * cIm;
-      double ikcIm = k * cRe;
-      // C (1 + i k (1/2 - a)) = C + (1/2 - a) i k C
-      double cwRe = cRe + rearA * ikcRe;
-      double cwIm = cIm + rearA * ikcIm;
-      // unit w (h = -1)
-      double lwRe = twoPi * k2 - 2.0 * a0 * ikcRe;
-      double lwIm = -2.0 * a0 * ikcIm;
-      double mwRe = twoPi * a * b * k2 - 2.0 * a0 * b * armE * ikcRe;
-      double mwIm = -2.0 * a0 * b * armE * ikcIm;
-      // unit theta
-      double ltRe = twoPi * b * a * k2 + 2.0 * a0 * b * cwRe;
-      double ltIm = twoPi * b * k + 2.0 * a0 * b * cwIm;
-      double mtRe = twoPi * b * b * (0.125 + a * a) * k2 + 2.0 * a0 * b * b * armE * cwRe;
-      double mtIm = -twoPi * b * b * k * rearA + 2.0 * a0 * b * b * armE * cwIm;
-      double width = widthM[s];
-      int base = s * n;
-      for (int j = 0; j < n; j++) {
-        double wj = heave[base + j];
-        double tj = twist[base + j];
-        // strip lift and moment per unit q for unit coordinate j, times the width
-        double lRe = width * (lwRe * wj + ltRe * tj);
-        double lIm = width * (lwIm * wj + ltIm * tj);
-        double mRe = width * (mwRe * wj + mtRe * tj);
-        double mIm = width * (mwIm * wj + mtIm * tj);
-        for (int i = 0; i < n; i++) {
-          double wi = heave[base + i];
-          double ti = twist[base + i];
-          int index = 2 * (i * n + j);
-          q[index] += wi * lRe + ti * mRe;
-          q[index + 1] += wi * lIm + ti * mIm;
+      // phi = (k^2, i k, C, i k C) with C = F + i G and i k C = -k G + i k F
+      double[] phiRe = {k * k, 0.0, fg[0], -k * fg[1]};
+      double[] phiIm = {0.0, k, fg[1], k * fg[0]};
+      for (int m = 0; m < BASIS; m++) {
+        double pr = phiRe[m];
+        double pi = phiIm[m];
+        if (pr == 0.0 && pi == 0.0) {
+          continue;
+        }
+        int offset = (g * BASIS + m) * nn;
+        for (int idx = 0; idx < nn; idx++) {
+          double v = basis[offset + idx];
+          q[2 * idx] += pr * v;
+          q[2 * idx + 1] += pi * v;
         }
       }
     }

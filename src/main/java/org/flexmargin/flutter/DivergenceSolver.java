@@ -3,15 +3,16 @@ package org.flexmargin.flutter;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
-import org.ejml.data.Complex_F64;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.ejml.dense.row.SingularOps_DDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
-import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
+import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
 import org.ejml.interfaces.decomposition.LUDecomposition_F64;
 import org.flexmargin.atmosphere.FlightCondition;
+import org.flexmargin.numerics.ComplexEigen;
+import org.flexmargin.numerics.ComplexEigenResult;
 
 /**
  * Static divergence: the lowest positive real dynamic pressure q_D at which the static
@@ -36,46 +37,28 @@ public final class DivergenceSolver {
     int n = system.size();
     double k0 = Math.max(0.0, system.aero().minReducedFrequency());
     DMatrixRMaj kInvQ = staticMatrix(system, k0);
-    EigenDecomposition_F64<DMatrixRMaj> eig = DecompositionFactory_DDRM.eig(n, true);
-    if (!eig.decompose(kInvQ.copy())) {
-      throw new ArithmeticException("eigen-decomposition of K^-1 Q(0) failed");
-    }
+    // eigenvalues of the (often defective: heave columns of Q(0) vanish) matrix K^-1 Q(0) by the
+    // complex Schur form, which needs no eigenvectors; the shape comes from the null space below
+    ComplexEigenResult eig = new ComplexEigen().decompose(toComplex(kInvQ));
     double muMax = 0;
-    int best = -1;
     double scale = 0;
     for (int i = 0; i < n; i++) {
-      Complex_F64 mu = eig.getEigenvalue(i);
-      scale = Math.max(scale, mu.getMagnitude());
+      scale = Math.max(scale, Math.hypot(eig.realAt(i), eig.imagAt(i)));
     }
     for (int i = 0; i < n; i++) {
-      Complex_F64 mu = eig.getEigenvalue(i);
-      if (Math.abs(mu.imaginary) <= REAL_TOLERANCE * Math.max(scale, Double.MIN_NORMAL) && mu.real > muMax) {
-        muMax = mu.real;
-        best = i;
+      double re = eig.realAt(i);
+      if (Math.abs(eig.imagAt(i)) <= REAL_TOLERANCE * Math.max(scale, Double.MIN_NORMAL) && re > muMax) {
+        muMax = re;
       }
     }
     String note = "rigid body restrained; aerodynamic stiffness Q taken at k = "
         + String.format(Locale.ROOT, "%.4g", k0) + (k0 > 0 ? " (lowest tabulated value, not 0)" : "");
-    if (best < 0 || muMax <= 1e-14 * scale) {
+    if (muMax <= 1e-14 * scale) {
       return new DivergenceResult(false, Double.NaN, Double.NaN, new double[n], Double.NaN, k0,
           note + "; no positive real root of the static stability determinant");
     }
     double qd = 1.0 / muMax;
-    DMatrixRMaj vec = eig.getEigenVector(best);
-    double[] shape = new double[n];
-    double norm = 0;
-    int maxIdx = 0;
-    for (int i = 0; i < n; i++) {
-      shape[i] = vec.get(i, 0);
-      norm += shape[i] * shape[i];
-      if (Math.abs(shape[i]) > Math.abs(shape[maxIdx])) {
-        maxIdx = i;
-      }
-    }
-    double sign = shape[maxIdx] < 0 ? -1 : 1;
-    for (int i = 0; i < n; i++) {
-      shape[i] *= sign / Math.sqrt(norm);
-    }
+    double[] shape = nullVector(system, k0, qd);
     double residual = singularRatio(system, k0, qd);
     double eas = Math.sqrt(2 * qd / FlightCondition.SEA_LEVEL_DENSITY_KG_PER_M3);
     return new DivergenceResult(true, qd, eas, shape, residual, k0, note);
@@ -145,7 +128,49 @@ public final class DivergenceSolver {
     return kInvQ;
   }
 
-  private static double singularRatio(AeroelasticSystem system, double k0, double qd) {
+  private static ZMatrixRMaj toComplex(DMatrixRMaj a) {
+    ZMatrixRMaj z = new ZMatrixRMaj(a.numRows, a.numCols);
+    for (int i = 0; i < a.numRows; i++) {
+      for (int j = 0; j < a.numCols; j++) {
+        z.set(i, j, a.get(i, j), 0.0);
+      }
+    }
+    return z;
+  }
+
+  /** Right singular vector of the smallest singular value of K - q Q(0): unit norm, largest entry positive. */
+  private static double[] nullVector(AeroelasticSystem system, double k0, double qd) {
+    DMatrixRMaj a = staticStiffness(system, k0, qd);
+    int n = a.numRows;
+    SingularValueDecomposition_F64<DMatrixRMaj> svd = DecompositionFactory_DDRM.svd(n, n, false, true, false);
+    if (!svd.decompose(a)) {
+      throw new ArithmeticException("SVD of the static stiffness at divergence failed");
+    }
+    double[] sv = svd.getSingularValues();
+    int min = 0;
+    for (int i = 1; i < sv.length; i++) {
+      if (sv[i] < sv[min]) {
+        min = i;
+      }
+    }
+    DMatrixRMaj v = svd.getV(null, false);
+    double[] shape = new double[n];
+    int maxIdx = 0;
+    for (int i = 0; i < n; i++) {
+      shape[i] = v.get(i, min);
+      if (Math.abs(shape[i]) > Math.abs(shape[maxIdx])) {
+        maxIdx = i;
+      }
+    }
+    if (shape[maxIdx] < 0) {
+      for (int i = 0; i < n; i++) {
+        shape[i] = -shape[i];
+      }
+    }
+    return shape;
+  }
+
+  private static DMatrixRMaj staticStiffness(AeroelasticSystem system, double k0, double qd) {
     int n = system.size();
     ZMatrixRMaj q = new ZMatrixRMaj(n, n);
     system.aero().forces(k0, q);
@@ -155,6 +180,11 @@ public final class DivergenceSolver {
         a.set(i, j, system.stiffness(i, j) - qd * q.getReal(i, j));
       }
     }
+    return a;
+  }
+
+  private static double singularRatio(AeroelasticSystem system, double k0, double qd) {
+    DMatrixRMaj a = staticStiffness(system, k0, qd);
     double[] sv = SingularOps_DDRM.singularValues(a);
     double max = 0;
     double min = Double.MAX_VALUE;

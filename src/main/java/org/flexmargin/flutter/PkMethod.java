@@ -20,9 +20,9 @@ import org.flexmargin.numerics.ComplexEigenResult;
  * found with the aerodynamics evaluated at its own reduced frequency k = Im(s) b_ref / V.
  *
  * <ul>
- *   <li><b>Start-up</b> (first grid point): the classical p-k iteration on the full 2m x 2m
+ *   <li><b>Start-up</b> (first grid point): two classical p-k updates on the full 2m x 2m
  *       first-order eigenproblem, one mode at a time, picking the root whose vector has the
- *       largest participation of that mode, then polished by Newton.
+ *       largest participation of that mode, then converged by Newton (below).
  *   <li><b>Continuation</b> (every further point): each root is converged from its value at the
  *       previous point by nonlinear inverse iteration on the m x m complex flutter matrix (see
  *       {@link FlutterWorkspace}). A step is accepted only if it converged, moved the root by less
@@ -40,6 +40,7 @@ import org.flexmargin.numerics.ComplexEigenResult;
 public final class PkMethod implements FlutterMethod {
 
   private static final int MAX_HALVINGS = 12;
+  private static final int START_UP_FROZEN_ITERATIONS = 2;
   private static final double MIN_STEP_MAC = 0.8;
   private static final double MAX_RELATIVE_STEP = 0.25;
   private static final double COLLISION_TOLERANCE = 1e-6;
@@ -57,12 +58,24 @@ public final class PkMethod implements FlutterMethod {
     roots[0] = startUp(ws, system, path.at(0), options, warnings);
     Root[] lastGood = roots[0].clone();
     double[] lastGoodT = new double[n];
+    Root[] previousGood = new Root[n];
+    double[] previousGoodT = new double[n];
     for (int p = 1; p < np; p++) {
       roots[p] = new Root[n];
       for (int j = 0; j < n; j++) {
-        Root r = track(ws, path, lastGoodT[j], lastGood[j], p, options, 0);
+        // linear predictor from the last two accepted roots of this branch
+        double predR = lastGood[j].sr();
+        double predI = lastGood[j].si();
+        if (previousGood[j] != null) {
+          double f = (p - lastGoodT[j]) / (lastGoodT[j] - previousGoodT[j]);
+          predR += f * (lastGood[j].sr() - previousGood[j].sr());
+          predI += f * (lastGood[j].si() - previousGood[j].si());
+        }
+        Root r = track(ws, path, lastGoodT[j], lastGood[j], p, predR, predI, options, 0);
         roots[p][j] = r;
         if (r.converged()) {
+          previousGood[j] = lastGood[j];
+          previousGoodT[j] = lastGoodT[j];
           lastGood[j] = r;
           lastGoodT[j] = p;
         } else {
@@ -124,7 +137,8 @@ public final class PkMethod implements FlutterMethod {
       double omega = sys.inVacuoOmegaRadPerS(j);
       ComplexEigenResult eig = null;
       int pick = -1;
-      for (int it = 0; it < options.maxIterations(); it++) {
+      // two classical p-k updates pick the root and bring k close; Newton then converges it
+      for (int it = 0; it < START_UP_FROZEN_ITERATIONS; it++) {
         double k = omega * b / fc.speedTasMps();
         eig = ws.frozenRoots(k, fc);
         pick = mostParticipating(eig, j, n);
@@ -185,7 +199,15 @@ public final class PkMethod implements FlutterMethod {
   /** Continues a root from (t0, r0) to t1, halving the step while tracking is not clean. */
   static Root track(
       FlutterWorkspace ws, FlightPath path, double t0, Root r0, double t1, AnalysisOptions options, int depth) {
-    Root r = ws.newton(r0.sr(), r0.si(), r0.v(), path.at(t1), options.maxIterations(),
+    return track(ws, path, t0, r0, t1, r0.sr(), r0.si(), options, depth);
+  }
+
+  /** As {@link #track(FlutterWorkspace, FlightPath, double, Root, double, AnalysisOptions, int)}
+   * with a predicted start value for the first attempt. */
+  static Root track(
+      FlutterWorkspace ws, FlightPath path, double t0, Root r0, double t1, double startR, double startI,
+      AnalysisOptions options, int depth) {
+    Root r = ws.newton(startR, startI, r0.v(), path.at(t1), options.maxIterations(),
         options.convergenceTolerance());
     double mac = r.converged() ? FlutterWorkspace.mac(r0.v(), r.v()) : 0;
     double scale = Math.max(Math.hypot(r0.sr(), r0.si()), Math.hypot(r.sr(), r.si()));
