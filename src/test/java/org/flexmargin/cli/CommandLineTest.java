@@ -1,0 +1,98 @@
+package org.flexmargin.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The command line as a user meets it: exit codes, messages, files written or not. */
+class CommandLineTest {
+
+  private record Run(int code, String out, String err) {}
+
+  private static Run run(String... args) {
+    StringWriter out = new StringWriter();
+    StringWriter err = new StringWriter();
+    int code = FlexMargin.execute(args, new PrintWriter(out), new PrintWriter(err));
+    return new Run(code, out.toString(), err.toString());
+  }
+
+  @Test
+  void checkSummarisesAValidCase() {
+    Run r = run("check", "mode-tables/validation/goland-wing.json");
+    assertEquals(0, r.code(), r.err());
+    assertTrue(r.out().contains("configuration goland: 8 elastic modes"), r.out());
+    assertTrue(r.out().contains("sha256"), r.out());
+    assertTrue(r.out().contains("input is valid."));
+  }
+
+  @Test
+  void badInputGivesExitTwoAClearMessageAndNoStackTrace(@TempDir Path tmp) {
+    Path out = tmp.resolve("report");
+    Run r = run("sweep", "src/test/resources/io/bad-station.json", "--out", out.toString());
+    assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code());
+    assertTrue(r.err().contains("bad input"), r.err());
+    assertTrue(r.err().contains("bad-station.json:13: configurations[0].aero.strip_theory.strips[1].station"), r.err());
+    assertFalse(r.err().contains("\tat "), "no stack trace without --debug: " + r.err());
+    assertFalse(Files.exists(out), "nothing may be written for bad input");
+  }
+
+  @Test
+  void debugShowsTheStackTrace() {
+    Run r = run("check", "src/test/resources/io/bad-malformed.json", "--debug");
+    assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code());
+    assertTrue(r.err().contains("\tat "), r.err());
+  }
+
+  @Test
+  void missingFileAndUnknownOptionAreBadInput() {
+    assertEquals(FlexMargin.EXIT_BAD_INPUT, run("check", "no/such/case.json").code());
+    assertEquals(FlexMargin.EXIT_BAD_INPUT, run("sweep", "--no-such-option", "x.json").code());
+  }
+
+  @Test
+  void sweepWritesResultsWhoseFindingsMatchTheTable(@TempDir Path tmp) throws IOException {
+    Path out = tmp.resolve("lpw");
+    Run r = run("sweep", "mode-tables/validation/typical-section-lpw.json", "--out", out.toString(), "--threads", "1");
+    assertEquals(0, r.code(), r.err());
+    assertTrue(r.out().contains("flutter onset"), r.out());
+    assertTrue(r.out().contains("Analysis only"), "cautions in the summary");
+    JsonNode json = new ObjectMapper().readTree(out.resolve("results.json").toFile());
+    JsonNode onset = null;
+    for (JsonNode f : json.get("findings")) {
+      if (f.get("finding").asText().equals("flutter onset")) {
+        onset = f;
+      }
+    }
+    assertTrue(onset != null);
+    // U* = 6.2566 (references.md §4c, derived) with omega_alpha = 2 pi 10 rad/s and b = 1 m
+    assertEquals(6.2566 * 20 * Math.PI, onset.get("speed_tas_mps").asDouble(), 1e-3 * 6.2566 * 20 * Math.PI);
+    assertTrue(r.out().contains(String.format(java.util.Locale.ROOT, "%.2f", onset.get("speed_tas_mps").asDouble())));
+    assertTrue(Files.exists(out.resolve("findings.csv")));
+    assertTrue(Files.exists(out.resolve("branches-lpw.csv")) || Files.list(out).anyMatch(
+        p -> p.getFileName().toString().startsWith("branches-")));
+    assertEquals(3, json.get("cautions").size());
+    try (Stream<Path> siblings = Files.list(tmp)) {
+      assertEquals(1, siblings.count(), "no temporary folders left beside the report");
+    }
+  }
+
+  @Test
+  void everyCommandHasHelpWithExamples() {
+    for (String cmd : new String[] {"check", "sweep", "demo", "bench"}) {
+      Run r = run(cmd, "--help");
+      assertEquals(0, r.code());
+      assertTrue(r.out().contains("Example"), cmd + " help lacks examples");
+    }
+  }
+}
