@@ -6,6 +6,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
+import org.ejml.dense.row.NormOps_DDRM;
 import org.ejml.dense.row.SingularOps_DDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
@@ -53,7 +54,11 @@ public final class DivergenceSolver {
     }
     String note = "rigid body restrained; aerodynamic stiffness Q taken at k = "
         + String.format(Locale.ROOT, "%.4g", k0) + (k0 > 0 ? " (lowest tabulated value, not 0)" : "");
-    if (muMax <= 1e-14 * scale) {
+    // A zero eigenvalue of a defective K^-1 Q(0) (e.g. elastic axis at the aerodynamic centre)
+    // is perturbed by rounding to O(sqrt(eps) ||K^-1 Q(0)||) (Golub & Van Loan, 4th ed., 7.2.2):
+    // smaller positive values are not divergence.
+    double spurious = 1e-7 * NormOps_DDRM.normF(kInvQ);
+    if (muMax <= spurious) {
       return new DivergenceResult(false, Double.NaN, Double.NaN, new double[n], Double.NaN, k0,
           note + "; no positive real root of the static stability determinant");
     }
