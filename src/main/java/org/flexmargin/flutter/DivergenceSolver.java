@@ -113,8 +113,8 @@ public final class DivergenceSolver {
     return lu.computeDeterminant().real;
   }
 
-  /** K^-1 Re Q(ik0). */
-  private static DMatrixRMaj staticMatrix(AeroelasticSystem system, double k0) {
+  /** Re Q(ik0): the aerodynamic stiffness. */
+  private static DMatrixRMaj realForces(AeroelasticSystem system, double k0) {
     int n = system.size();
     ZMatrixRMaj q = new ZMatrixRMaj(n, n);
     system.aero().forces(k0, q);
@@ -124,6 +124,13 @@ public final class DivergenceSolver {
         qr.set(i, j, q.getReal(i, j));
       }
     }
+    return qr;
+  }
+
+  /** K^-1 Re Q(ik0). */
+  private static DMatrixRMaj staticMatrix(AeroelasticSystem system, double k0) {
+    int n = system.size();
+    DMatrixRMaj qr = realForces(system, k0);
     DMatrixRMaj k = new DMatrixRMaj(n, n, true, system.stiffnessFlat());
     DMatrixRMaj kInvQ = new DMatrixRMaj(n, n);
     if (!CommonOps_DDRM.solve(k, qr, kInvQ)) {
@@ -175,14 +182,13 @@ public final class DivergenceSolver {
     return shape;
   }
 
+  /** K - q Re Q(ik0). */
   private static DMatrixRMaj staticStiffness(AeroelasticSystem system, double k0, double qd) {
-    int n = system.size();
-    ZMatrixRMaj q = new ZMatrixRMaj(n, n);
-    system.aero().forces(k0, q);
-    DMatrixRMaj a = new DMatrixRMaj(n, n);
+    DMatrixRMaj a = realForces(system, k0);
+    int n = a.numRows;
     for (int i = 0; i < n; i++) {
       for (int j = 0; j < n; j++) {
-        a.set(i, j, system.stiffness(i, j) - qd * q.getReal(i, j));
+        a.set(i, j, system.stiffness(i, j) - qd * a.get(i, j));
       }
     }
     return a;

@@ -113,18 +113,7 @@ final class FlutterWorkspace {
       double k = reducedFrequency(si, fc);
       assemble(sr, si, qd, k);
       // rhs = F'(s) v
-      for (int i = 0; i < n; i++) {
-        double ar = 0;
-        double ai = 0;
-        for (int j = 0; j < n; j++) {
-          double pr = fp.data[2 * (i * n + j)];
-          double pi = fp.data[2 * (i * n + j) + 1];
-          ar += pr * v[2 * j] - pi * v[2 * j + 1];
-          ai += pr * v[2 * j + 1] + pi * v[2 * j];
-        }
-        rhs.data[2 * i] = ar;
-        rhs.data[2 * i + 1] = ai;
-      }
+      multiply(fp, v, rhs.data);
       if (!lu.setA(f)) {
         converged = true;
         break;
@@ -187,23 +176,42 @@ final class FlutterWorkspace {
   /** ||F(s) v|| / (max|F_ij| ||v||). */
   private double residual(double sr, double si, double[] v, double qd, double k) {
     assemble(sr, si, qd, k);
+    double[] fv = new double[2 * n];
+    multiply(f, v, fv);
     double fmax = 0;
+    for (int idx = 0; idx < n * n; idx++) {
+      fmax = Math.max(fmax, Math.hypot(f.data[2 * idx], f.data[2 * idx + 1]));
+    }
     double res = 0;
     double vn = 0;
+    for (int i = 0; i < 2 * n; i++) {
+      res = Math.hypot(res, fv[i]);
+      vn = Math.hypot(vn, v[i]);
+    }
+    return res / Math.max(fmax * vn, Double.MIN_NORMAL);
+  }
+
+  /**
+   * out = a v for a complex n x n matrix and interleaved complex vectors.
+   *
+   * @param a matrix. Not modified.
+   * @param v vector (length 2n). Not modified.
+   * @param out result (length 2n). Modified.
+   */
+  private void multiply(ZMatrixRMaj a, double[] v, double[] out) {
+    double[] d = a.data;
     for (int i = 0; i < n; i++) {
       double ar = 0;
       double ai = 0;
       for (int j = 0; j < n; j++) {
-        double pr = f.data[2 * (i * n + j)];
-        double pi = f.data[2 * (i * n + j) + 1];
-        fmax = Math.max(fmax, Math.hypot(pr, pi));
+        double pr = d[2 * (i * n + j)];
+        double pi = d[2 * (i * n + j) + 1];
         ar += pr * v[2 * j] - pi * v[2 * j + 1];
         ai += pr * v[2 * j + 1] + pi * v[2 * j];
       }
-      res = Math.hypot(res, Math.hypot(ar, ai));
-      vn = Math.hypot(vn, Math.hypot(v[2 * i], v[2 * i + 1]));
+      out[2 * i] = ar;
+      out[2 * i + 1] = ai;
     }
-    return res / Math.max(fmax * vn, Double.MIN_NORMAL);
   }
 
   static void normalise(double[] v) {
