@@ -14,6 +14,8 @@ import java.util.Set;
  * @param sweep flight points to analyse
  * @param options numerical options
  * @param inputs provenance of every file read (case file first)
+ * @param loop the flight-control loop; {@code null} for an open-loop analysis. When present, every
+ *     configuration needs rigid-body data and every sensor station must exist in its mode table.
  */
 public record AnalysisCase(
     int format,
@@ -22,7 +24,8 @@ public record AnalysisCase(
     List<Configuration> configurations,
     SweepPlan sweep,
     AnalysisOptions options,
-    List<InputFile> inputs) {
+    List<InputFile> inputs,
+    LoopSpec loop) {
   /** Validates and copies. */
   public AnalysisCase {
     Checks.atLeast("format", format, 1);
@@ -45,5 +48,28 @@ public record AnalysisCase(
       throw new InvalidInputException("options", "analysis options", "nothing");
     }
     inputs = inputs == null ? List.of() : List.copyOf(inputs);
+    if (loop != null) {
+      for (int i = 0; i < configurations.size(); i++) {
+        Configuration c = configurations.get(i);
+        if (c.rigidBody() == null) {
+          throw new InvalidInputException("configurations[" + i + "].rigid_body",
+              "rigid-body data (the case has a loop)", "none");
+        }
+        if (c.structure() instanceof ModeTable mt) {
+          for (SensorSpec s : loop.sensors()) {
+            if (!mt.modes().get(0).shapes().containsKey(s.station())) {
+              throw new InvalidInputException("loop.sensors." + s.name() + ".station",
+                  "a station of mode table \"" + mt.name() + "\"", "\"" + s.station() + "\"");
+            }
+          }
+        }
+      }
+    }
+  }
+
+  /** Open-loop case without a flight-control loop. */
+  public AnalysisCase(int format, String name, String description, List<Configuration> configurations,
+      SweepPlan sweep, AnalysisOptions options, List<InputFile> inputs) {
+    this(format, name, description, configurations, sweep, options, inputs, null);
   }
 }

@@ -7,8 +7,10 @@ package org.flexmargin.model;
  * @param structure mode table or built-in validation structure
  * @param aero aerodynamic data; {@code null} only for built-in structures, which carry their own
  *     strip geometry
+ * @param rigidBody rigid-body short-period data with the modes' coupling; {@code null} for an
+ *     open-loop (flutter and divergence only) analysis
  */
-public record Configuration(String name, StructureSpec structure, AeroSpec aero) {
+public record Configuration(String name, StructureSpec structure, AeroSpec aero, RigidBody rigidBody) {
   /** Validates that a mode-table structure has aerodynamic data. */
   public Configuration {
     Checks.name("name", name);
@@ -22,5 +24,18 @@ public record Configuration(String name, StructureSpec structure, AeroSpec aero)
       throw new InvalidInputException(
           "aero", "no aero section (built-in structures carry their own strips)", "an aero section");
     }
+    if (rigidBody != null && structure instanceof ModeTable mt) {
+      for (String mode : rigidBody.modeCoupling().keySet()) {
+        if (!mt.modeNames().contains(mode)) {
+          throw new InvalidInputException("rigid_body.mode_coupling", "a mode of table \"" + mt.name() + "\"",
+              "\"" + mode + "\"");
+        }
+      }
+    }
+  }
+
+  /** Open-loop configuration without rigid-body data. */
+  public Configuration(String name, StructureSpec structure, AeroSpec aero) {
+    this(name, structure, aero, null);
   }
 }
