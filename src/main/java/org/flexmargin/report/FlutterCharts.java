@@ -271,7 +271,7 @@ public final class FlutterCharts {
     double pad = 0.06 * (hi - lo);
     lo = Math.max(lo - pad, floor);
     hi = Math.min(hi + pad, G_AXIS_CEILING);
-    double step = niceStep((hi - lo) / 10);
+    double step = niceStep((hi - lo) / 20);
     return new double[] {Math.floor(lo / step + 1e-9) * step, Math.ceil(hi / step - 1e-9) * step};
   }
 
@@ -356,10 +356,12 @@ public final class FlutterCharts {
     List<String> parts = new ArrayList<>();
     int total = 0;
     for (Map.Entry<String, Integer> e : counts.entrySet()) {
-      parts.add(e.getKey() + " (" + e.getValue() + ")");
+      parts.add(e.getKey() + ": " + e.getValue());
       total += e.getValue();
     }
-    notes.add(total + (total == 1 ? " point" : " points") + " of " + String.join(", ", parts) + " " + what + ".");
+    String points = total + (total == 1 ? " point" : " points");
+    String of = counts.size() == 1 ? " of " + counts.keySet().iterator().next() : " (" + String.join(", ", parts) + ")";
+    notes.add(points + of + " " + what + ".");
   }
 
   private static String fmt(double v) {

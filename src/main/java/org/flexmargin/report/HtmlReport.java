@@ -35,6 +35,7 @@ public final class HtmlReport {
       "h2{font-size:20px;margin:30px 0 10px;padding-bottom:4px;border-bottom:2px solid var(--band)}",
       "h3{font-size:16px;margin:22px 0 8px;color:var(--band)}",
       "table{border-collapse:collapse;margin:8px 0 14px;font-size:13px}",
+      "table.provenance th{white-space:nowrap}",
       "th,td{border:1px solid var(--rule);padding:4px 8px;vertical-align:top}",
       "th{background:var(--soft);text-align:left;font-weight:600}",
       "td.num{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
