@@ -203,10 +203,14 @@ public final class FlutterCharts {
       series.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
       series.setMarker(marker(e.getKey()));
       series.setMarkerColor(markerColor(e.getKey()));
-      if (e.getKey() == CrossingKind.FLUTTER_ONSET) {
-        double dy = 0.045 * (yRange[1] - yRange[0]);
+      if (damping && e.getKey() == CrossingKind.FLUTTER_ONSET) {
+        // speed label up and to the left of the marker: an onset root rises to the right, so that
+        // corner is clear of its own curve
+        double dx = 0.035 * (xMax - xMin);
+        double dy = 0.06 * (yRange[1] - yRange[0]);
         for (int i = 0; i < xs.size(); i++) {
-          chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f", mx[i]), mx[i], my[i] + dy, false));
+          chart.addAnnotation(
+              new AnnotationText(String.format(Locale.ROOT, "%.1f", mx[i]), mx[i] - dx, my[i] + dy, false));
         }
       }
     }
@@ -291,7 +295,7 @@ public final class FlutterCharts {
     if (!(hi > 0)) {
       hi = 1.0;
     }
-    hi *= 1.06;
+    hi *= 1.03;
     double step = niceStep(hi / 8);
     return new double[] {0.0, Math.ceil(hi / step) * step};
   }
