@@ -195,9 +195,18 @@ public final class FlutterCharts {
       List<FlutterCrossing> xs = e.getValue();
       double[] mx = new double[xs.size()];
       double[] my = new double[xs.size()];
+      int outside = 0;
       for (int i = 0; i < xs.size(); i++) {
-        mx[i] = unit.fromMps(xs.get(i).condition().speedEasMps());
+        double eas = xs.get(i).condition().speedEasMps();
+        mx[i] = unit.fromMps(eas);
         my[i] = damping ? xs.get(i).thresholdG() : xs.get(i).frequencyHz();
+        if (eas < easRangeMps[0] || eas > easRangeMps[1]) {
+          outside++;
+        }
+      }
+      if (outside > 0) {
+        notes.add(outside + " " + markerSeries(e.getKey()) + (outside == 1 ? " lies" : " crossings lie")
+            + " outside the plotted speed range and cannot be marked; see the findings table.");
       }
       XYSeries series = chart.addSeries(unique(markerSeries(e.getKey()), used), mx, my);
       series.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);

@@ -73,7 +73,8 @@ public final class ReportWriter {
     }
     Instant now = Instant.now();
     String page = HtmlReport.render("Flutter and divergence report: " + result.analysisCase().name(),
-        List.of(result.analysisCase().description(), result.pathDescription()),
+        java.util.stream.Stream.of(result.analysisCase().description(), result.pathDescription())
+            .filter(s -> !s.isBlank()).toList(),
         OpenLoopSections.of(result, findings, charts, toolVersion, now));
     Path html = folder.resolve(REPORT_FILE);
     Files.writeString(html, page, StandardCharsets.UTF_8);

@@ -184,4 +184,18 @@ class FlutterChartsTest {
       assertTrue(chart.getStyler().getYAxisMax() <= FlutterCharts.G_AXIS_CEILING + 1e-12);
     }
   }
+
+  @Test
+  void kMethodChartsDrawAndSayWhatGMeans() throws Exception {
+    AnalysisCase l = lpw.analysisCase();
+    AnalysisCase k = new AnalysisCase(l.format(), l.name(), l.description(), l.configurations(), l.sweep(),
+        l.options().withMethod(org.flexmargin.model.FlutterMethodKind.K), l.inputs());
+    SweepResult r = new OpenLoopSweep(1).run(k, n -> { });
+    for (ReportChart chart : FlutterCharts.of(r, r.configurations().get(0), SpeedAxisUnit.METRES_PER_SECOND)) {
+      byte[] png = chart.png();
+      assertTrue(png.length > 1000, "drawn");
+      assertTrue(chart.chart().getTitle().contains("k method"));
+      assertTrue(String.join(" ", chart.notes()).contains("artificial structural damping"));
+    }
+  }
 }
