@@ -1,0 +1,122 @@
+package org.flexmargin.report;
+
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Lays out a self-contained report page: inline style sheet only, no scripts, fonts, links or
+ * other outside resources (images are embedded as data URIs by the sections), so the single file
+ * can be archived, mailed and opened offline. The markup is well-formed XML as well as HTML.
+ *
+ * <p>Order: title block with a short pointer to the cautions, table of contents, the given
+ * sections in order, then the cautions ({@link Cautions#TEXT}) in a prominent box, always last and
+ * never optional.
+ */
+public final class HtmlReport {
+  private HtmlReport() {}
+
+  /** Anchor id of the cautions section. */
+  public static final String CAUTIONS_ID = "cautions";
+
+  private static final String CSS = String.join("\n",
+      ":root{--ink:#1d2226;--muted:#5a6470;--rule:#d5d9dd;--band:#14384f;--accent:#b0121b;--soft:#f4f5f2}",
+      "*{box-sizing:border-box}",
+      "body{margin:0;background:#fff;color:var(--ink);font-family:'DejaVu Sans','Segoe UI',Helvetica,Arial,"
+          + "sans-serif;font-size:14px;line-height:1.45}",
+      "header.top{background:var(--band);color:#fff;padding:18px 32px 14px}",
+      "header.top h1{margin:0 0 4px;font-size:24px;font-weight:600;letter-spacing:.2px}",
+      "header.top p{margin:2px 0;color:#d8e4ec}",
+      "main{max-width:1180px;margin:0 auto;padding:8px 32px 40px}",
+      ".pointer{margin:14px 0;padding:8px 12px;border-left:5px solid var(--accent);background:#fbefef}",
+      "nav.toc{margin:10px 0 18px;padding:8px 14px;background:var(--soft);border:1px solid var(--rule)}",
+      "nav.toc ol{margin:4px 0;padding-left:22px}",
+      "nav.toc a{color:var(--band)}",
+      "h2{font-size:20px;margin:30px 0 10px;padding-bottom:4px;border-bottom:2px solid var(--band)}",
+      "h3{font-size:16px;margin:22px 0 8px;color:var(--band)}",
+      "table{border-collapse:collapse;margin:8px 0 14px;font-size:13px}",
+      "table.provenance th{white-space:nowrap}",
+      "th,td{border:1px solid var(--rule);padding:4px 8px;vertical-align:top}",
+      "th{background:var(--soft);text-align:left;font-weight:600}",
+      "td.num{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
+      "tr.flutter td{background:#fdecea}",
+      "tr.limit td{background:#fff6e6}",
+      "tr.static td{background:#f3eefa}",
+      "td.mono,span.mono{font-family:'DejaVu Sans Mono',Consolas,monospace;font-size:12px;word-break:break-all}",
+      "figure{margin:14px 0 22px}",
+      "figure img{display:block;max-width:100%;height:auto;border:1px solid var(--rule)}",
+      "figcaption{color:var(--muted);margin-top:4px}",
+      "ul.notes{margin:4px 0 0;padding-left:20px;color:#6b4a00}",
+      ".headline{margin:6px 0;padding:6px 10px;background:var(--soft);border-left:4px solid var(--band)}",
+      ".warn{color:#8a1c12;font-weight:600}",
+      ".ok{color:#2f6b3a}",
+      "section.cautions{margin-top:34px;padding:14px 20px;border:3px solid var(--accent);background:#fff8f6}",
+      "section.cautions h2{border-bottom-color:var(--accent);color:var(--accent)}",
+      "section.cautions li{margin:6px 0;font-size:15px}",
+      "footer{color:var(--muted);font-size:12px;margin-top:24px}");
+
+  /**
+   * @param title page title (plain text)
+   * @param subtitleLines lines under the title (plain text)
+   * @param sections body sections, in order; ids must be unique and differ from
+   *     {@link #CAUTIONS_ID}
+   * @return the complete page
+   */
+  public static String render(String title, List<String> subtitleLines, List<ReportSection> sections) {
+    Set<String> ids = new HashSet<>();
+    ids.add(CAUTIONS_ID);
+    for (ReportSection s : sections) {
+      if (!s.id().matches("[a-z0-9-]+") || !ids.add(s.id())) {
+        throw new IllegalArgumentException("section id must be unique lower-case letters, digits, dashes: " + s.id());
+      }
+    }
+    XhtmlWriter w = new XhtmlWriter();
+    w.declaration("<!DOCTYPE html>");
+    w.open("html", "lang", "en");
+    w.open("head");
+    w.empty("meta", "charset", "utf-8");
+    w.empty("meta", "name", "viewport", "content", "width=device-width, initial-scale=1");
+    w.element("title", title);
+    w.style(CSS);
+    w.close("head");
+    w.open("body");
+    w.open("header", "class", "top");
+    w.element("h1", title);
+    for (String line : subtitleLines) {
+      w.element("p", line);
+    }
+    w.close("header");
+    w.open("main");
+    w.element("p", "Analysis only: these results support, and never replace, ground and flight testing and the "
+        + "airworthiness approval. Read the cautions at the end of this report.", "class", "pointer");
+    w.open("nav", "class", "toc");
+    w.element("strong", "Contents");
+    w.open("ol");
+    for (ReportSection s : sections) {
+      w.open("li").element("a", s.heading(), "href", "#" + s.id()).close("li");
+    }
+    w.open("li").element("a", "Cautions", "href", "#" + CAUTIONS_ID).close("li");
+    w.close("ol");
+    w.close("nav");
+    for (ReportSection s : sections) {
+      w.open("section", "id", s.id());
+      w.element("h2", s.heading());
+      s.writeBody(w);
+      w.close("section");
+    }
+    w.open("section", "id", CAUTIONS_ID, "class", "cautions");
+    w.element("h2", "Cautions");
+    w.open("ul");
+    for (String c : Cautions.TEXT) {
+      w.element("li", c);
+    }
+    w.close("ul");
+    w.close("section");
+    w.element("footer", "Generated by flexmargin. This file is self-contained: charts are embedded, "
+        + "and the same charts are in the charts folder beside it.");
+    w.close("main");
+    w.close("body");
+    w.close("html");
+    return w.finish();
+  }
+}

@@ -1,0 +1,83 @@
+package org.flexmargin.report;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.flexmargin.sweep.ConfigurationResult;
+import org.flexmargin.sweep.Finding;
+import org.flexmargin.sweep.SweepResult;
+
+/**
+ * Writes the human-readable part of a report folder: {@code charts/} (V-g and V-f diagrams of
+ * every configuration, PNG and optionally SVG) and {@code report.html} (self-contained, charts
+ * embedded). The data files ({@link ResultFiles}) are written separately into the same folder.
+ *
+ * <p>Drawing needs no display: if {@code java.awt.headless} is not set, it is set to true.
+ */
+public final class ReportWriter {
+  private ReportWriter() {}
+
+  /** Name of the page. */
+  public static final String REPORT_FILE = "report.html";
+  /** Name of the charts subfolder. */
+  public static final String CHARTS_FOLDER = "charts";
+
+  /**
+   * Writes charts and page with the default options.
+   *
+   * @param folder report folder (exists)
+   * @param result sweep result
+   * @param findings findings table (the one given to {@link ResultFiles#write})
+   * @param toolVersion version string for provenance
+   * @return the written report.html
+   * @throws IOException on write failure
+   */
+  public static Path write(Path folder, SweepResult result, List<Finding> findings, String toolVersion)
+      throws IOException {
+    return write(folder, result, findings, toolVersion, ReportOptions.defaults());
+  }
+
+  /**
+   * @param folder report folder (exists)
+   * @param result sweep result
+   * @param findings findings table (the one given to {@link ResultFiles#write})
+   * @param toolVersion version string for provenance
+   * @param options drawing options
+   * @return the written report.html
+   * @throws IOException on write failure
+   */
+  public static Path write(Path folder, SweepResult result, List<Finding> findings, String toolVersion,
+      ReportOptions options) throws IOException {
+    if (System.getProperty("java.awt.headless") == null) {
+      System.setProperty("java.awt.headless", "true");
+    }
+    Path chartDir = Files.createDirectories(folder.resolve(CHARTS_FOLDER));
+    Map<String, List<EmbeddedChart>> charts = new LinkedHashMap<>();
+    for (ConfigurationResult c : result.configurations()) {
+      List<EmbeddedChart> list = new ArrayList<>();
+      for (ReportChart chart : FlutterCharts.of(result, c, options.chartSpeedUnit())) {
+        byte[] png = chart.png();
+        List<String> names = new ArrayList<>();
+        for (Path p : chart.writeTo(chartDir, png, options.vectorCharts())) {
+          names.add(CHARTS_FOLDER + "/" + p.getFileName());
+        }
+        list.add(new EmbeddedChart(chart, png, names));
+      }
+      charts.put(c.configuration(), list);
+    }
+    Instant now = Instant.now();
+    String page = HtmlReport.render("Flutter and divergence report: " + result.analysisCase().name(),
+        java.util.stream.Stream.of(result.analysisCase().description(), result.pathDescription())
+            .filter(s -> !s.isBlank()).toList(),
+        OpenLoopSections.of(result, findings, charts, toolVersion, now));
+    Path html = folder.resolve(REPORT_FILE);
+    Files.writeString(html, page, StandardCharsets.UTF_8);
+    return html;
+  }
+}
