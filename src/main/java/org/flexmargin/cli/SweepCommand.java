@@ -10,6 +10,7 @@ import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.report.ReportFolder;
+import org.flexmargin.report.ReportWriter;
 import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
@@ -72,8 +73,10 @@ final class SweepCommand implements Callable<Integer> {
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
     Path target = outDir != null ? outDir : Path.of("reports", ResultFiles.fileSafe(c.name()));
-    Path written = ReportFolder.writeAtomically(target,
-        folder -> ResultFiles.write(folder, result, findings, Version.get()));
+    Path written = ReportFolder.writeAtomically(target, folder -> {
+      ResultFiles.write(folder, result, findings, Version.get());
+      ReportWriter.write(folder, result, findings, Version.get());
+    });
     if (!common.quiet) {
       out.println("case " + c.name() + ": " + result.pathDescription());
       out.println();
@@ -92,7 +95,7 @@ final class SweepCommand implements Callable<Integer> {
         }
       }
       out.println();
-      out.println("results written to " + written);
+      out.println("results written to " + written + " (report: " + written.resolve("report.html") + ")");
       Tables.cautions(out);
     }
     return FlexMargin.EXIT_OK;

@@ -41,6 +41,7 @@ public final class ReportFolder {
     try {
       Files.createDirectories(parent);
       tmp = Files.createTempDirectory(parent, ".tmp-" + abs.getFileName() + "-");
+      makeReadable(tmp);
       writer.write(tmp);
       if (Files.exists(abs)) {
         old = Files.createTempDirectory(parent, ".old-" + abs.getFileName() + "-");
@@ -70,6 +71,15 @@ public final class ReportFolder {
           // best effort clean-up of our own temporary folder
         }
       }
+    }
+  }
+
+  /** A temporary folder is private (rwx------); a report folder is readable by all (rwxr-xr-x). */
+  private static void makeReadable(Path folder) throws IOException {
+    try {
+      Files.setPosixFilePermissions(folder, java.nio.file.attribute.PosixFilePermissions.fromString("rwxr-xr-x"));
+    } catch (UnsupportedOperationException e) {
+      // not a POSIX file system: default permissions apply
     }
   }
 
