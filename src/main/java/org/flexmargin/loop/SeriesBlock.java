@@ -11,8 +11,11 @@ import java.util.List;
 public record SeriesBlock(List<LinearBlock> blocks) implements LinearBlock {
   /** Validates and copies. */
   public SeriesBlock {
-    StateSpace.require(blocks != null && !blocks.isEmpty() && !blocks.contains(null),
-        "series.blocks", "at least one non-null block", String.valueOf(blocks));
+    StateSpace.require(blocks != null && !blocks.isEmpty(), "series.blocks",
+        "at least one block", String.valueOf(blocks));
+    for (LinearBlock b : blocks) {
+      StateSpace.require(b != null, "series.blocks", "non-null blocks", "null");
+    }
     blocks = List.copyOf(blocks);
   }
 
