@@ -4,7 +4,7 @@ package org.flexmargin.loop;
 public enum ClosedLoopStability {
   /** All eigenvalues of the unity negative-feedback state space have negative real part. */
   STABLE,
-  /** At least one closed-loop eigenvalue has real part >= 0. */
+  /** At least one closed-loop eigenvalue has real part &gt;= 0. */
   UNSTABLE,
   /** Only a frequency function was given; stability was not checked. */
   NOT_CHECKED

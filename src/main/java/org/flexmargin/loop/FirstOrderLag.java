@@ -3,7 +3,7 @@ package org.flexmargin.loop;
 /**
  * First-order lag 1/(tau s + 1) with unit static gain; phase -atan(w tau).
  *
- * @param timeConstantS tau, s (> 0)
+ * @param timeConstantS tau, s (&gt; 0)
  */
 public record FirstOrderLag(double timeConstantS) implements LinearBlock {
   /** Validates. */
@@ -13,7 +13,7 @@ public record FirstOrderLag(double timeConstantS) implements LinearBlock {
   }
 
   /**
-   * @param bandwidthRadPerS corner frequency 1/tau, rad/s (> 0)
+   * @param bandwidthRadPerS corner frequency 1/tau, rad/s (&gt; 0)
    * @return the lag
    */
   public static FirstOrderLag ofBandwidthRadPerS(double bandwidthRadPerS) {
@@ -24,7 +24,7 @@ public record FirstOrderLag(double timeConstantS) implements LinearBlock {
   }
 
   /**
-   * @param bandwidthHz corner frequency 1/(2 pi tau), Hz (> 0)
+   * @param bandwidthHz corner frequency 1/(2 pi tau), Hz (&gt; 0)
    * @return the lag
    */
   public static FirstOrderLag ofBandwidthHz(double bandwidthHz) {

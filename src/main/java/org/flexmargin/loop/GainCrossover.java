@@ -9,7 +9,7 @@ package org.flexmargin.loop;
  * @param phaseDeg unwrapped phase of L at w_c, deg (branch fixed by the principal value at the
  *     low end of the analysed range)
  * @param phaseMarginDeg 180 + phase, wrapped into (-180, 180], deg
- * @param delayMarginS smallest added delay tau >= 0 that puts L e^{-j w_c tau} on -1:
+ * @param delayMarginS smallest added delay tau &gt;= 0 that puts L e^{-j w_c tau} on -1:
  *     (phase margin in rad, wrapped into [0, 2 pi)) / w_c, s
  */
 public record GainCrossover(double omegaRadPerS, double frequencyHz, double phaseDeg,

@@ -39,14 +39,14 @@ public record LoopMarginResult(double omegaMinRadPerS, double omegaMaxRadPerS,
         .min(Comparator.comparingDouble(g -> Math.abs(g.phaseMarginDeg())));
   }
 
-  /** @return the phase crossover with the smallest positive gain margin (|L| < 1), if any */
+  /** @return the phase crossover with the smallest positive gain margin (|L| &lt; 1), if any */
   public Optional<PhaseCrossover> governingGainIncreaseMargin() {
     return phaseCrossovers.stream().filter(p -> p.direction() == MarginDirection.GAIN_INCREASE)
         .min(Comparator.comparingDouble(PhaseCrossover::gainMarginDb));
   }
 
   /**
-   * @return the phase crossover with the gain-reduction margin (|L| > 1, negative dB) closest to
+   * @return the phase crossover with the gain-reduction margin (|L| &gt; 1, negative dB) closest to
    *     0 dB, if any
    */
   public Optional<PhaseCrossover> governingGainReductionMargin() {

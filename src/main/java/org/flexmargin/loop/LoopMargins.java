@@ -63,8 +63,8 @@ public final class LoopMargins {
    * their Padé approximation, the margins through the exact response).
    *
    * @param loop broken-loop transfer function L
-   * @param omegaMinRadPerS low end, rad/s (> 0)
-   * @param omegaMaxRadPerS high end, rad/s (> low end)
+   * @param omegaMinRadPerS low end, rad/s (&gt; 0)
+   * @param omegaMaxRadPerS high end, rad/s (&gt; low end)
    * @return the margins
    */
   public LoopMarginResult analyse(LinearBlock loop, double omegaMinRadPerS,
@@ -82,8 +82,8 @@ public final class LoopMargins {
    * Margins of a frequency function (e.g. L computed directly in the frequency domain).
    *
    * @param loop broken-loop frequency function L(j w)
-   * @param omegaMinRadPerS low end, rad/s (> 0)
-   * @param omegaMaxRadPerS high end, rad/s (> low end)
+   * @param omegaMinRadPerS low end, rad/s (&gt; 0)
+   * @param omegaMaxRadPerS high end, rad/s (&gt; low end)
    * @param seedPoles poles of L known to the caller (e.g. structural modes), used only to place
    *     grid points; {@link Eigenvalues#none()} if unknown
    * @return the margins, with {@link ClosedLoopStability#NOT_CHECKED}

@@ -3,16 +3,16 @@ package org.flexmargin.loop;
 /**
  * Settings of the adaptive frequency grid of {@link LoopMargins}.
  *
- * @param pointsPerDecade points per decade of the initial logarithmic grid (>= 4)
+ * @param pointsPerDecade points per decade of the initial logarithmic grid (&gt;= 4)
  * @param maxPhaseStepDeg an interval is bisected while the phase of L changes by more than this
- *     between its ends, deg (0 < value <= 45); keeps phase unwrapping unambiguous and catches
+ *     between its ends, deg (0 &lt; value &lt;= 45); keeps phase unwrapping unambiguous and catches
  *     the 180 deg swing of a narrow resonance that falls between grid points
- * @param maxGainStepDb an interval is bisected while |L| changes by more than this, dB (> 0)
- * @param maxPoints cap on grid points after refinement (>= 2 x initial points is sensible)
+ * @param maxGainStepDb an interval is bisected while |L| changes by more than this, dB (&gt; 0)
+ * @param maxPoints cap on grid points after refinement (&gt;= 2 x initial points is sensible)
  * @param maxRefinementDepth maximum number of bisections of an initial interval (1..52)
  * @param seedDampingRatio poles with damping ratio below this (and non-zero imaginary part) seed
  *     extra grid points around their damped frequency (0 disables seeding)
- * @param seedPointsPerPole grid points added on each side of a seeding pole (>= 0), spaced by
+ * @param seedPointsPerPole grid points added on each side of a seeding pole (&gt;= 0), spaced by
  *     the pole's |real part| (its half-power half-bandwidth)
  */
 public record MarginOptions(int pointsPerDecade, double maxPhaseStepDeg, double maxGainStepDb,

@@ -14,9 +14,9 @@ package org.flexmargin.loop;
  * 2 w sqrt(zeta_z zeta_p) apart. That separation is this class's <b>width</b> (derived here from
  * the formula above; a definition of our own).
  *
- * @param centreFrequencyHz f_c, Hz (> 0)
- * @param zeroDampingRatio zeta_z (>= 0; 0 gives an infinitely deep notch)
- * @param poleDampingRatio zeta_p (> zeta_z for attenuation)
+ * @param centreFrequencyHz f_c, Hz (&gt; 0)
+ * @param zeroDampingRatio zeta_z (&gt;= 0; 0 gives an infinitely deep notch)
+ * @param poleDampingRatio zeta_p (&gt; zeta_z for attenuation)
  */
 public record NotchFilter(double centreFrequencyHz, double zeroDampingRatio,
     double poleDampingRatio) implements LinearBlock {
@@ -34,9 +34,9 @@ public record NotchFilter(double centreFrequencyHz, double zeroDampingRatio,
    * Notch of given centre, depth and width (width as defined in the class comment): zeta_p =
    * (W / (2 f_c)) / sqrt(r), zeta_z = r zeta_p with r = 10^(-depth/20).
    *
-   * @param centreFrequencyHz f_c, Hz (> 0)
-   * @param depthDb attenuation at the centre, dB (> 0; 20 means |N| = 0.1)
-   * @param widthHz separation of the two half-depth frequencies, Hz (> 0)
+   * @param centreFrequencyHz f_c, Hz (&gt; 0)
+   * @param depthDb attenuation at the centre, dB (&gt; 0; 20 means |N| = 0.1)
+   * @param widthHz separation of the two half-depth frequencies, Hz (&gt; 0)
    * @return the notch
    */
   public static NotchFilter fromDepthAndWidth(double centreFrequencyHz, double depthDb,

@@ -11,7 +11,7 @@ import org.ejml.dense.row.CommonOps_DDRM;
  * <p>The realisation is built for tau = 1 in controllable canonical form and time-scaled
  * (A/tau, B/tau), so the companion coefficients stay O(1)-O(10^5) whatever tau is.
  *
- * @param delayS tau, s (>= 0)
+ * @param delayS tau, s (&gt;= 0)
  * @param order Padé order of the state-space approximation
  */
 public record PureDelay(double delayS, PadeOrder order) implements LinearBlock {

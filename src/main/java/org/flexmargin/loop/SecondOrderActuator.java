@@ -3,8 +3,8 @@ package org.flexmargin.loop;
 /**
  * Second-order actuator wn^2/(s^2 + 2 zeta wn s + wn^2) with unit static gain, wn = 2 pi f_n.
  *
- * @param naturalFrequencyHz f_n, Hz (> 0)
- * @param dampingRatio zeta (> 0)
+ * @param naturalFrequencyHz f_n, Hz (&gt; 0)
+ * @param dampingRatio zeta (&gt; 0)
  */
 public record SecondOrderActuator(double naturalFrequencyHz, double dampingRatio)
     implements LinearBlock {

@@ -4,8 +4,8 @@ package org.flexmargin.loop;
  * Second-order low-pass filter wc^2/(s^2 + 2 zeta wc s + wc^2), wc = 2 pi f_c, unit static gain.
  * With zeta = 1/sqrt(2) (Butterworth) |H(j wc)| = 1/sqrt(2) (-3.01 dB) and phase -90 deg at wc.
  *
- * @param cutoffFrequencyHz f_c, Hz (> 0)
- * @param dampingRatio zeta (> 0)
+ * @param cutoffFrequencyHz f_c, Hz (&gt; 0)
+ * @param dampingRatio zeta (&gt; 0)
  */
 public record SecondOrderLowPass(double cutoffFrequencyHz, double dampingRatio)
     implements LinearBlock {

@@ -10,7 +10,7 @@ public interface SisoFrequencyFunction {
   /**
    * Evaluates F(j w).
    *
-   * @param omegaRadPerS frequency w, rad/s (>= 0)
+   * @param omegaRadPerS frequency w, rad/s (&gt;= 0)
    * @param reIm receives Re F in [0] and Im F in [1]
    */
   void response(double omegaRadPerS, double[] reIm);

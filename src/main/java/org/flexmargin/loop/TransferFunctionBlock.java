@@ -9,7 +9,7 @@ import org.flexmargin.model.InvalidInputException;
  * by complex Horner evaluation, independently of the state-space realisation (controllable
  * canonical form, {@link StateSpace#fromTransferFunction}).
  *
- * @param numerator numerator coefficients, descending powers, degree <= denominator degree
+ * @param numerator numerator coefficients, descending powers, degree &lt;= denominator degree
  * @param denominator denominator coefficients, descending powers, leading coefficient != 0
  */
 public record TransferFunctionBlock(double[] numerator, double[] denominator)

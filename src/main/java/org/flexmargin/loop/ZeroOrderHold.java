@@ -13,7 +13,7 @@ package org.flexmargin.loop;
  * magnitude is 1 at every frequency, so the droop is omitted (small well below the Nyquist
  * frequency pi/T). Computational delay (typically one frame) is a separate {@link PureDelay}.
  *
- * @param samplePeriodS T, s (> 0)
+ * @param samplePeriodS T, s (&gt; 0)
  * @param order Padé order of the state-space approximation of the T/2 delay
  */
 public record ZeroOrderHold(double samplePeriodS, PadeOrder order) implements LinearBlock {
