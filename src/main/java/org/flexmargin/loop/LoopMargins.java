@@ -1,0 +1,384 @@
+package org.flexmargin.loop;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.univariate.BrentOptimizer;
+import org.apache.commons.math3.optim.univariate.SearchInterval;
+import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
+import org.apache.commons.math3.optim.univariate.UnivariatePointValuePair;
+
+/**
+ * Gain, phase, delay and symmetric disk margins of a SISO broken loop L(j w) with the
+ * negative-feedback convention (closed loop 1/(1 + L)).
+ *
+ * <p>Method:
+ *
+ * <ol>
+ *   <li>L is sampled on a logarithmic grid over [w_min, w_max], plus points around the damped
+ *       frequency of every lightly damped pole supplied (seeds; for a {@link LinearBlock} the
+ *       eigenvalues of its state space), spaced by the pole's |real part|.
+ *   <li>Every interval whose phase changes by more than {@link MarginOptions#maxPhaseStepDeg()}
+ *       or whose gain changes by more than {@link MarginOptions#maxGainStepDb()} is bisected (in
+ *       log w) until both hold or the depth/point cap is reached. A narrow resonance falling
+ *       between grid points swings the phase by about 180 deg and is thereby resolved; the phase
+ *       is unwrapped on the refined grid.
+ *   <li>Gain crossovers (ln|L| = 0) and phase crossovers (unwrapped phase = -180 deg + k 360
+ *       deg) are bracketed by sign changes between grid points and solved by Brent's method
+ *       (Brent, <i>Algorithms for Minimization without Derivatives</i>, 1973; Commons Math).
+ *   <li>Phase margin 180 deg + phase, wrapped into (-180, 180]; gain margin -20 log10|L| at each
+ *       phase crossover (positive = increase, negative = reduction margin); delay margin per
+ *       crossover (PM in rad, wrapped into [0, 2 pi))/w_c, minimum over crossovers.
+ *   <li>Symmetric disk margin alpha = 1/max|(1 - L)/(2(1 + L))| (Seiler, Packard &amp;
+ *       Gahinet, IEEE Control Systems Magazine 40(5), 2020), and the peak of |L|, each maximised
+ *       by Brent's method around the largest sampled local maxima.
+ * </ol>
+ *
+ * <p>Instances are immutable; the frequency function is called from the calling thread only.
+ */
+public final class LoopMargins {
+  /** Local maxima refined for the disk margin and the gain peak. */
+  private static final int MAXIMA_REFINED = 8;
+
+  private final MarginOptions options;
+
+  /** Uses {@link MarginOptions#defaults()}. */
+  public LoopMargins() {
+    this(MarginOptions.defaults());
+  }
+
+  /** @param options grid settings */
+  public LoopMargins(MarginOptions options) {
+    StateSpace.require(options != null, "margin_options", "options", "null");
+    this.options = options;
+  }
+
+  /**
+   * Margins of a block loop; its state-space eigenvalues seed the grid and its unity
+   * negative-feedback closure gives {@link ClosedLoopStability} (delays enter that check through
+   * their Padé approximation, the margins through the exact response).
+   *
+   * @param loop broken-loop transfer function L
+   * @param omegaMinRadPerS low end, rad/s (&gt; 0)
+   * @param omegaMaxRadPerS high end, rad/s (&gt; low end)
+   * @return the margins
+   */
+  public LoopMarginResult analyse(LinearBlock loop, double omegaMinRadPerS,
+      double omegaMaxRadPerS) {
+    StateSpace ss = loop.stateSpace();
+    Eigenvalues poles = ss.eigenvalues();
+    Eigenvalues closed = ss.feedback(StateSpace.staticGain(1.0), FeedbackSign.NEGATIVE)
+        .eigenvalues();
+    ClosedLoopStability stability = closed.maxRealPart() < 0 ? ClosedLoopStability.STABLE
+        : ClosedLoopStability.UNSTABLE;
+    return analyse(loop, omegaMinRadPerS, omegaMaxRadPerS, poles, stability);
+  }
+
+  /**
+   * Margins of a frequency function (e.g. L computed directly in the frequency domain).
+   *
+   * @param loop broken-loop frequency function L(j w)
+   * @param omegaMinRadPerS low end, rad/s (&gt; 0)
+   * @param omegaMaxRadPerS high end, rad/s (&gt; low end)
+   * @param seedPoles poles of L known to the caller (e.g. structural modes), used only to place
+   *     grid points; {@link Eigenvalues#none()} if unknown
+   * @return the margins, with {@link ClosedLoopStability#NOT_CHECKED}
+   */
+  public LoopMarginResult analyse(SisoFrequencyFunction loop, double omegaMinRadPerS,
+      double omegaMaxRadPerS, Eigenvalues seedPoles) {
+    return analyse(loop, omegaMinRadPerS, omegaMaxRadPerS, seedPoles,
+        ClosedLoopStability.NOT_CHECKED);
+  }
+
+  private LoopMarginResult analyse(SisoFrequencyFunction loop, double wMin, double wMax,
+      Eigenvalues seeds, ClosedLoopStability stability) {
+    StateSpace.require(loop != null, "loop", "a frequency function", "null");
+    StateSpace.require(Double.isFinite(wMin) && wMin > 0, "omega_min_rad_per_s",
+        "a finite value > 0", String.valueOf(wMin));
+    StateSpace.require(Double.isFinite(wMax) && wMax > wMin, "omega_max_rad_per_s",
+        "a finite value > omega_min " + wMin, String.valueOf(wMax));
+    StateSpace.require(seeds != null, "seed_poles", "eigenvalues (possibly none)", "null");
+    Counted f = new Counted(loop);
+
+    // 1. initial grid in x = ln w, plus seeds
+    double x0 = Math.log(wMin);
+    double x1 = Math.log(wMax);
+    int initial = Math.max(2, (int) Math.ceil((x1 - x0) / Math.log(10) * options.pointsPerDecade())
+        + 1);
+    double[] xs = new double[initial];
+    for (int i = 0; i < initial; i++) {
+      xs[i] = i == initial - 1 ? x1 : x0 + (x1 - x0) * i / (initial - 1);
+    }
+    double minWidth = (x1 - x0) / (initial - 1) / Math.pow(2, options.maxRefinementDepth());
+    List<Double> seedX = new ArrayList<>();
+    for (int k = 0; k < seeds.size(); k++) {
+      double re = seeds.realAt(k);
+      double im = Math.abs(seeds.imagAt(k));
+      double zeta = Math.abs(seeds.dampingRatio(k));
+      if (im == 0 || !(zeta < options.seedDampingRatio())) {
+        continue;
+      }
+      double spacing = Math.max(Math.abs(re), 1e-9 * im);
+      for (int j = -options.seedPointsPerPole(); j <= options.seedPointsPerPole(); j++) {
+        double w = im + j * spacing;
+        if (w > wMin && w < wMax) {
+          seedX.add(Math.log(w));
+        }
+      }
+      double wn = seeds.naturalFrequencyRadPerS(k);
+      if (wn > wMin && wn < wMax) {
+        seedX.add(Math.log(wn));
+      }
+    }
+    double[] merged = new double[xs.length + seedX.size()];
+    System.arraycopy(xs, 0, merged, 0, xs.length);
+    for (int i = 0; i < seedX.size(); i++) {
+      merged[xs.length + i] = seedX.get(i);
+    }
+    Arrays.sort(merged);
+    Grid g = new Grid(merged.length + 64);
+    for (double x : merged) {
+      if (g.size == 0 || x > g.x[g.size - 1]) {
+        g.add(x, f);
+      }
+    }
+    int afterSeeds = g.size;
+
+    // 2. adaptive bisection
+    double maxPhase = Math.toRadians(options.maxPhaseStepDeg());
+    double maxLogMag = options.maxGainStepDb() * Math.log(10) / 20;
+    boolean changed = true;
+    while (changed && g.size < options.maxPoints()) {
+      changed = false;
+      Grid next = new Grid(2 * g.size);
+      for (int i = 0; i < g.size; i++) {
+        next.copyFrom(g, i);
+        if (i + 1 < g.size && next.size < options.maxPoints()
+            && g.needsRefinement(i, maxPhase, maxLogMag)
+            && g.x[i + 1] - g.x[i] > 2 * minWidth) {
+          next.add(0.5 * (g.x[i] + g.x[i + 1]), f);
+          changed = true;
+        }
+      }
+      g = next;
+    }
+    int unresolved = 0;
+    for (int i = 0; i + 1 < g.size; i++) {
+      if (g.needsRefinement(i, maxPhase, maxLogMag)) {
+        unresolved++;
+      }
+    }
+
+    // 3. unwrap
+    double[] phase = new double[g.size];
+    phase[0] = Math.atan2(g.im[0], g.re[0]);
+    for (int i = 1; i < g.size; i++) {
+      phase[i] = phase[i - 1] + wrap(Math.atan2(g.im[i], g.re[i]) - phase[i - 1]);
+    }
+
+    BrentSolver solver = new BrentSolver(1e-14, 1e-13, 1e-15);
+    double[] v = new double[2];
+
+    // 4. gain crossovers
+    List<GainCrossover> gains = new ArrayList<>();
+    for (int i = 0; i + 1 < g.size; i++) {
+      double a = g.logMag(i);
+      double b = g.logMag(i + 1);
+      if ((a <= 0) == (b <= 0) || Double.isNaN(a) || Double.isNaN(b)) {
+        continue;
+      }
+      double xr = a == 0 ? g.x[i] : solver.solve(200, x -> {
+        f.at(Math.exp(x), v);
+        return Math.log(Math.hypot(v[0], v[1]));
+      }, g.x[i], g.x[i + 1]);
+      double w = Math.exp(xr);
+      f.at(w, v);
+      double ph = phase[i] + wrap(Math.atan2(v[1], v[0]) - phase[i]);
+      double pmRad = wrap(Math.PI + ph);
+      double delay = (pmRad < 0 ? pmRad + 2 * Math.PI : pmRad) / w;
+      if (gains.isEmpty() || w > gains.get(gains.size() - 1).omegaRadPerS() * (1 + 1e-12)) {
+        gains.add(new GainCrossover(w, w / (2 * Math.PI), Math.toDegrees(ph),
+            Math.toDegrees(pmRad), delay));
+      }
+    }
+
+    // 5. phase crossovers
+    List<PhaseCrossover> phases = new ArrayList<>();
+    for (int i = 0; i + 1 < g.size; i++) {
+      long ka = (long) Math.floor((phase[i] + Math.PI) / (2 * Math.PI));
+      long kb = (long) Math.floor((phase[i + 1] + Math.PI) / (2 * Math.PI));
+      if (ka == kb) {
+        continue;
+      }
+      final int base = i;
+      for (long k = Math.min(ka, kb) + 1; k <= Math.max(ka, kb); k++) {
+        double target = -Math.PI + 2 * Math.PI * k;
+        DoubleUnaryOperator h = x -> {
+          f.at(Math.exp(x), v);
+          return phase[base] + wrap(Math.atan2(v[1], v[0]) - phase[base]) - target;
+        };
+        double ha = phase[i] - target;
+        double xr;
+        if (ha == 0) {
+          xr = g.x[i];
+        } else {
+          try {
+            xr = solver.solve(200, h::applyAsDouble, g.x[i], g.x[i + 1]);
+          } catch (RuntimeException e) {
+            // the phase inside an unresolved interval did not bracket this branch
+            unresolved++;
+            continue;
+          }
+        }
+        double w = Math.exp(xr);
+        f.at(w, v);
+        double mag = Math.hypot(v[0], v[1]);
+        if (!phases.isEmpty()
+            && w <= phases.get(phases.size() - 1).omegaRadPerS() * (1 + 1e-12)) {
+          continue;
+        }
+        phases.add(new PhaseCrossover(w, w / (2 * Math.PI), mag, -20 * Math.log10(mag),
+            mag < 1 ? MarginDirection.GAIN_INCREASE : MarginDirection.GAIN_REDUCTION));
+      }
+    }
+
+    // 6. peak gain and disk margin
+    double[] peak = maximise(g, x -> {
+      f.at(Math.exp(x), v);
+      return Math.hypot(v[0], v[1]);
+    });
+    double[] disk = maximise(g, x -> {
+      f.at(Math.exp(x), v);
+      return Math.hypot(1 - v[0], v[1]) / (2 * Math.hypot(1 + v[0], v[1]));
+    });
+    double wPeak = Math.exp(peak[0]);
+    PeakGain peakGain = new PeakGain(wPeak, wPeak / (2 * Math.PI), peak[1],
+        20 * Math.log10(peak[1]));
+    double alpha = disk[1] == 0 ? Double.POSITIVE_INFINITY : 1 / disk[1];
+    DiskMargin dm = DiskMargin.ofAlpha(Double.isNaN(alpha) ? 0.0 : alpha, Math.exp(disk[0]));
+
+    MarginDiagnostics diag = new MarginDiagnostics(initial, afterSeeds - Math.min(afterSeeds,
+        initial), g.size - afterSeeds, g.size, unresolved, f.count);
+    return new LoopMarginResult(wMin, wMax, gains, phases, dm, peakGain, stability, diag);
+  }
+
+  /**
+   * Maximises q(x) over the grid: samples q at every grid point, refines the largest local
+   * maxima by Brent's method on their neighbouring intervals, returns {x, q}.
+   */
+  private static double[] maximise(Grid g, DoubleUnaryOperator q) {
+    double[] values = new double[g.size];
+    for (int i = 0; i < g.size; i++) {
+      values[i] = q.applyAsDouble(g.x[i]);
+      if (Double.isNaN(values[i])) {
+        values[i] = Double.POSITIVE_INFINITY;
+      }
+    }
+    List<Integer> maxima = new ArrayList<>();
+    for (int i = 0; i < g.size; i++) {
+      boolean left = i == 0 || values[i] >= values[i - 1];
+      boolean right = i == g.size - 1 || values[i] >= values[i + 1];
+      if (left && right) {
+        maxima.add(i);
+      }
+    }
+    maxima.sort((p, r) -> Double.compare(values[r], values[p]));
+    double bestX = g.x[maxima.get(0)];
+    double best = values[maxima.get(0)];
+    if (Double.isInfinite(best)) {
+      return new double[] {bestX, best};
+    }
+    BrentOptimizer opt = new BrentOptimizer(1e-12, 1e-14);
+    for (int m = 0; m < Math.min(MAXIMA_REFINED, maxima.size()); m++) {
+      int i = maxima.get(m);
+      double lo = g.x[Math.max(0, i - 1)];
+      double hi = g.x[Math.min(g.size - 1, i + 1)];
+      if (hi <= lo) {
+        continue;
+      }
+      UnivariatePointValuePair p = opt.optimize(new MaxEval(500),
+          new UnivariateObjectiveFunction(q::applyAsDouble), GoalType.MAXIMIZE,
+          new SearchInterval(lo, hi, g.x[i]));
+      if (p.getValue() > best) {
+        best = p.getValue();
+        bestX = p.getPoint();
+      }
+    }
+    return new double[] {bestX, best};
+  }
+
+  /** Wraps an angle into (-pi, pi]. */
+  static double wrap(double a) {
+    double r = Math.IEEEremainder(a, 2 * Math.PI);
+    return r <= -Math.PI ? r + 2 * Math.PI : r;
+  }
+
+  /** The frequency function with an evaluation counter. */
+  private static final class Counted {
+    private final SisoFrequencyFunction fn;
+    private int count;
+
+    Counted(SisoFrequencyFunction fn) {
+      this.fn = fn;
+    }
+
+    void at(double w, double[] v) {
+      count++;
+      fn.response(w, v);
+    }
+  }
+
+  /** Growable sampled grid in x = ln w with Re L and Im L. */
+  private static final class Grid {
+    double[] x;
+    double[] re;
+    double[] im;
+    int size;
+
+    Grid(int capacity) {
+      x = new double[Math.max(capacity, 4)];
+      re = new double[x.length];
+      im = new double[x.length];
+    }
+
+    private void ensure() {
+      if (size == x.length) {
+        x = Arrays.copyOf(x, 2 * size);
+        re = Arrays.copyOf(re, 2 * size);
+        im = Arrays.copyOf(im, 2 * size);
+      }
+    }
+
+    void add(double xv, Counted f) {
+      ensure();
+      double[] v = new double[2];
+      f.at(Math.exp(xv), v);
+      x[size] = xv;
+      re[size] = v[0];
+      im[size] = v[1];
+      size++;
+    }
+
+    void copyFrom(Grid g, int i) {
+      ensure();
+      x[size] = g.x[i];
+      re[size] = g.re[i];
+      im[size] = g.im[i];
+      size++;
+    }
+
+    double logMag(int i) {
+      return Math.log(Math.hypot(re[i], im[i]));
+    }
+
+    boolean needsRefinement(int i, double maxPhase, double maxLogMag) {
+      double dPhase = wrap(Math.atan2(im[i + 1], re[i + 1]) - Math.atan2(im[i], re[i]));
+      double dMag = logMag(i + 1) - logMag(i);
+      return Math.abs(dPhase) > maxPhase || !(Math.abs(dMag) <= maxLogMag);
+    }
+  }
+}
