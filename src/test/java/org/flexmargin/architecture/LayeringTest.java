@@ -75,8 +75,18 @@ class LayeringTest {
   }
 
   @Test
+  void loopIsGeneralLinearSystemsMachinery() {
+    onlyDependsOn("loop", "model", "numerics");
+  }
+
+  @Test
+  void aseCombinesAircraftAndLoop() {
+    onlyDependsOn("ase", "model", "numerics", "aero", "structure", "atmosphere", "loop");
+  }
+
+  @Test
   void sweepDependsOnlyOnLowerLayers() {
-    onlyDependsOn("sweep", "model", "numerics", "aero", "structure", "atmosphere", "flutter");
+    onlyDependsOn("sweep", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase");
   }
 
   @Test
@@ -86,7 +96,7 @@ class LayeringTest {
 
   @Test
   void reportReadsOnlyResults() {
-    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep");
+    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase");
   }
 
   @Test

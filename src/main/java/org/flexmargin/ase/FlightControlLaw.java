@@ -1,0 +1,105 @@
+package org.flexmargin.ase;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.flexmargin.loop.FirstOrderLag;
+import org.flexmargin.loop.Gain;
+import org.flexmargin.loop.LinearBlock;
+import org.flexmargin.loop.NotchFilter;
+import org.flexmargin.loop.PadeOrder;
+import org.flexmargin.loop.ProportionalIntegral;
+import org.flexmargin.loop.PureDelay;
+import org.flexmargin.loop.SecondOrderActuator;
+import org.flexmargin.loop.SecondOrderLowPass;
+import org.flexmargin.loop.SeriesBlock;
+import org.flexmargin.model.ActuatorOrder;
+import org.flexmargin.model.FeedbackPath;
+import org.flexmargin.model.FilterSpec;
+import org.flexmargin.model.LoopSpec;
+import org.flexmargin.model.LowPassFilterSpec;
+import org.flexmargin.model.NotchFilterSpec;
+import org.flexmargin.model.SensorSpec;
+
+/**
+ * The control law of a {@link LoopSpec} at one dynamic pressure, as loop blocks:
+ *
+ * <ul>
+ *   <li>one path block per feedback path: sensor lag (if the sensor has a bandwidth), the path's
+ *       filters in order, then factor(q) (Kp + Ki/s);
+ *   <li>the forward block from elevator command to achieved elevator: zero-order hold (if
+ *       sampled), computational delay (if any), actuator.
+ * </ul>
+ *
+ * <p>Immutable.
+ *
+ * @param paths path blocks, in the order of the loop spec's paths
+ * @param pathSensorIndex index into the loop's sensor list of each path's sensor
+ * @param forward elevator command to achieved elevator
+ */
+public record FlightControlLaw(List<LinearBlock> paths, int[] pathSensorIndex, LinearBlock forward) {
+  /** Copies. */
+  public FlightControlLaw {
+    paths = List.copyOf(paths);
+    pathSensorIndex = pathSensorIndex.clone();
+  }
+
+  @Override
+  public int[] pathSensorIndex() {
+    return pathSensorIndex.clone();
+  }
+
+  /**
+   * @param loop the loop specification
+   * @param dynamicPressurePa dynamic pressure for the gain schedules (Pa)
+   * @return the blocks of the law
+   */
+  public static FlightControlLaw of(LoopSpec loop, double dynamicPressurePa) {
+    PadeOrder pade = PadeOrder.ofDegree(loop.padeOrder());
+    List<LinearBlock> paths = new ArrayList<>();
+    int[] sensorIndex = new int[loop.paths().size()];
+    for (int p = 0; p < loop.paths().size(); p++) {
+      FeedbackPath path = loop.paths().get(p);
+      SensorSpec sensor = loop.sensor(path.sensor());
+      sensorIndex[p] = loop.sensors().indexOf(sensor);
+      List<LinearBlock> chain = new ArrayList<>();
+      if (sensor.bandwidthHz() > 0) {
+        chain.add(FirstOrderLag.ofBandwidthHz(sensor.bandwidthHz()));
+      }
+      for (FilterSpec f : path.filters()) {
+        chain.add(filter(f));
+      }
+      double factor = path.schedule().at(dynamicPressurePa);
+      if (path.integralGainPerS() != 0) {
+        chain.add(new ProportionalIntegral(factor * path.proportionalGain(), factor * path.integralGainPerS()));
+      } else {
+        chain.add(new Gain(factor * path.proportionalGain()));
+      }
+      paths.add(chain.size() == 1 ? chain.get(0) : new SeriesBlock(chain));
+    }
+    List<LinearBlock> fwd = new ArrayList<>();
+    if (loop.samplePeriodS() > 0) {
+      fwd.add(new org.flexmargin.loop.ZeroOrderHold(loop.samplePeriodS(), pade));
+    }
+    if (loop.computationDelayS() > 0) {
+      fwd.add(new PureDelay(loop.computationDelayS(), pade));
+    }
+    fwd.add(actuator(loop));
+    return new FlightControlLaw(paths, sensorIndex, fwd.size() == 1 ? fwd.get(0) : new SeriesBlock(fwd));
+  }
+
+  /** @return the block of a filter specification */
+  public static LinearBlock filter(FilterSpec f) {
+    if (f instanceof NotchFilterSpec n) {
+      return new NotchFilter(n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio());
+    }
+    LowPassFilterSpec lp = (LowPassFilterSpec) f;
+    return new SecondOrderLowPass(lp.cornerHz(), lp.dampingRatio());
+  }
+
+  private static LinearBlock actuator(LoopSpec loop) {
+    if (loop.actuator().order() == ActuatorOrder.FIRST) {
+      return FirstOrderLag.ofBandwidthHz(loop.actuator().bandwidthHz());
+    }
+    return new SecondOrderActuator(loop.actuator().bandwidthHz(), loop.actuator().dampingRatio());
+  }
+}

@@ -1,0 +1,110 @@
+package org.flexmargin.ase;
+
+import org.ejml.data.DMatrixRMaj;
+import org.flexmargin.loop.FeedbackSign;
+import org.flexmargin.loop.LinearBlock;
+import org.flexmargin.loop.SisoFrequencyFunction;
+import org.flexmargin.loop.StateSpace;
+
+/**
+ * The pitch loop closed around the flexible aircraft at one flight condition, broken at the
+ * actuator command.
+ *
+ * <p>With u the signal injected at the actuator command, the law returns
+ * {@code G(s) u = sum_p C_p(s) P_p(s) F(s) u}, where F is the forward block (hold, delay,
+ * actuator), P_p the aircraft response from elevator to path p's sensor and C_p the path block.
+ * The loop closes with u = G u. In the negative-feedback convention used for margins the broken
+ * loop is therefore {@code L = -G}: the closed loop is stable when 1 + L has no zeros in the right
+ * half plane, and classical gain and phase margins of L apply directly.
+ *
+ * <p>Immutable; {@link #brokenLoop()} returns a function backed by a per-thread workspace.
+ */
+public final class ServoLoop {
+  private final AircraftPlant plant;
+  private final FlightControlLaw law;
+
+  /**
+   * @param plant aircraft at the flight condition
+   * @param law control law at the same dynamic pressure
+   */
+  public ServoLoop(AircraftPlant plant, FlightControlLaw law) {
+    this.plant = plant;
+    this.law = law;
+  }
+
+  /** @return the aircraft */
+  public AircraftPlant plant() {
+    return plant;
+  }
+
+  /** @return the control law */
+  public FlightControlLaw law() {
+    return law;
+  }
+
+  /**
+   * Broken-loop response L(j w) = -F(j w) sum_p C_p(j w) P_p(j w) with the exact aerodynamics and
+   * exact delays. Not thread-safe (one per thread).
+   *
+   * @return L as a frequency function
+   */
+  public SisoFrequencyFunction brokenLoop() {
+    AircraftPlant.FrequencyEvaluator eval = plant.frequencyEvaluator();
+    int ns = plant.sensors().size();
+    double[] sensorResponse = new double[2 * ns];
+    double[] block = new double[2];
+    int[] index = law.pathSensorIndex();
+    return (w, reIm) -> {
+      eval.response(w, sensorResponse);
+      double sumR = 0;
+      double sumI = 0;
+      for (int p = 0; p < index.length; p++) {
+        law.paths().get(p).response(w, block);
+        double pr = sensorResponse[2 * index[p]];
+        double pi = sensorResponse[2 * index[p] + 1];
+        sumR += block[0] * pr - block[1] * pi;
+        sumI += block[0] * pi + block[1] * pr;
+      }
+      law.forward().response(w, block);
+      reIm[0] = -(block[0] * sumR - block[1] * sumI);
+      reIm[1] = -(block[0] * sumI + block[1] * sumR);
+    };
+  }
+
+  /**
+   * The open chain G (actuator command to law output) as a state space, with the aerodynamics in
+   * rational form and delays by Pade.
+   *
+   * @param rational elastic aerodynamics in rational form
+   * @return G, one input and one output
+   */
+  public StateSpace openChain(RationalAerodynamics rational) {
+    StateSpace aircraft = plant.stateSpace(rational);
+    int ns = plant.sensors().size();
+    int[] index = law.pathSensorIndex();
+    StateSpace controller = null;
+    for (int p = 0; p < index.length; p++) {
+      DMatrixRMaj select = new DMatrixRMaj(1, ns);
+      select.set(0, index[p], 1.0);
+      StateSpace selector = StateSpace.of(new DMatrixRMaj(0, 0), new DMatrixRMaj(0, ns), new DMatrixRMaj(1, 0), select);
+      StateSpace path = selector.series(law.paths().get(p).stateSpace());
+      controller = controller == null ? path : controller.parallel(path);
+    }
+    return law.forward().stateSpace().series(aircraft).series(controller);
+  }
+
+  /**
+   * The closed loop u = G u as a state space (input: a disturbance added at the actuator command).
+   *
+   * @param rational elastic aerodynamics in rational form
+   * @return the closed-loop system
+   */
+  public StateSpace closedLoop(RationalAerodynamics rational) {
+    return openChain(rational).feedback(StateSpace.staticGain(1.0), FeedbackSign.POSITIVE);
+  }
+
+  /** @return the forward block (for reports: hold, delay, actuator) */
+  public LinearBlock forward() {
+    return law.forward();
+  }
+}
