@@ -11,6 +11,8 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Pattern;
+import org.flexmargin.model.ActuatorOrder;
+import org.flexmargin.model.ActuatorSpec;
 import org.flexmargin.model.AeroSpec;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.Altitudes;
@@ -18,13 +20,23 @@ import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
+import org.flexmargin.model.FeedbackPath;
+import org.flexmargin.model.FilterSpec;
 import org.flexmargin.model.FlutterMethodKind;
 import org.flexmargin.model.GafTable;
+import org.flexmargin.model.GainSchedule;
 import org.flexmargin.model.InertiaAxis;
 import org.flexmargin.model.InputFile;
+import org.flexmargin.model.LoopSpec;
+import org.flexmargin.model.LowPassFilterSpec;
 import org.flexmargin.model.MachSweep;
+import org.flexmargin.model.ModeCoupling;
 import org.flexmargin.model.ModeTable;
+import org.flexmargin.model.NotchFilterSpec;
 import org.flexmargin.model.PointList;
+import org.flexmargin.model.RigidBody;
+import org.flexmargin.model.SensorKind;
+import org.flexmargin.model.SensorSpec;
 import org.flexmargin.model.ShapeValue;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.model.Strip;
@@ -43,11 +55,18 @@ import org.flexmargin.model.UniformCantileverWing;
  * <p>Rules common to every file: keys are lower_snake_case with the unit in the name; SI units,
  * except explicitly named knot and foot keys ({@code from_kt}, {@code altitude_ft}) converted here
  * (1 kt = 1852/3600 m/s, 1 ft = 0.3048 m, both exact by definition); every file carries
- * {@code "format": 1}; unknown keys are errors, never ignored; the sections {@code loop} and
- * {@code requirements} are reserved for later formats and rejected. Structural damping may be given
+ * {@code "format": 1}; unknown keys are errors, never ignored; the section {@code requirements} is
+ * reserved for a later format and rejected. Structural damping may be given
  * as a viscous ratio {@code damping_ratio} or as a structural damping coefficient
  * {@code structural_damping_g}, converted with g = 2 zeta (Fung, <i>An Introduction to the Theory
  * of Aeroelasticity</i>).
+ *
+ * <p>Optional closed-loop data (still format 1; files without them read as before): a
+ * {@code rigid_body} object in each configuration ({@link RigidBody}, with per-mode
+ * {@link ModeCoupling}) and a top-level {@code loop} object ({@link LoopSpec}: actuator, sensors,
+ * feedback paths with filters and a dynamic-pressure gain schedule, computation delay, sample
+ * period, Pade order). With a loop every configuration must be a mode table with rigid-body data,
+ * and every sensor station must be a station of each configuration's mode table.
  *
  * <p>Every failure is an {@link InputFileException} naming file, line, field path, what was
  * expected and what was found. Paths inside a case file are relative to the case file's folder;
@@ -68,10 +87,26 @@ public final class CaseReader {
   public static final double METRES_PER_FOOT = 0.3048;
 
   private static final List<String> CASE_KEYS =
-      List.of("format", "name", "description", "configurations", "sweep", "options");
-  private static final List<String> RESERVED = List.of("loop", "requirements");
+      List.of("format", "name", "description", "configurations", "sweep", "options", "loop");
+  private static final List<String> RESERVED = List.of("requirements");
   private static final List<String> CONFIG_KEYS =
-      List.of("name", "mode_table", "uniform_wing", "typical_section", "aero");
+      List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
+  private static final List<String> RIGID_BODY_KEYS = List.of("mass_kg", "pitch_inertia_kg_m2",
+      "reference_area_m2", "reference_chord_m", "lift_slope_per_rad", "pitch_moment_slope_per_rad",
+      "pitch_damping_cmq", "alpha_dot_damping_cm_alpha_dot", "lift_per_elevator_per_rad",
+      "pitch_moment_per_elevator_per_rad", "mode_coupling");
+  private static final List<String> COUPLING_KEYS = List.of("lift_coefficient_per_unit_coordinate",
+      "pitch_moment_coefficient_per_unit_coordinate", "generalized_force_per_alpha_m2",
+      "generalized_force_per_elevator_m2");
+  private static final List<String> LOOP_KEYS = List.of("actuator", "sensors", "paths",
+      "computation_delay_s", "sample_period_s", "pade_order");
+  private static final List<String> ACTUATOR_KEYS = List.of("order", "bandwidth_hz", "damping_ratio");
+  private static final List<String> SENSOR_KEYS =
+      List.of("name", "kind", "station", "lever_arm_m", "bandwidth_hz");
+  private static final List<String> PATH_KEYS = List.of("sensor", "proportional_gain",
+      "integral_gain_per_s", "filters", "schedule");
+  /** Default order of the Pade approximation of delays when {@code pade_order} is absent. */
+  public static final int DEFAULT_PADE_ORDER = 2;
   private static final List<String> MODE_TABLE_KEYS = List.of("format", "name", "description", "modes");
   private static final List<String> MODE_KEYS = List.of(
       "name", "frequency_hz", "damping_ratio", "structural_damping_g", "generalized_mass_kg", "shapes");
@@ -114,9 +149,11 @@ public final class CaseReader {
     SweepPlan sweep = readSweep(root.required("sweep", "a sweep section").object("a sweep section"));
     JsonField opts = root.optional("options");
     AnalysisOptions options = opts == null ? AnalysisOptions.defaults() : readOptions(opts.object("options"));
+    JsonField loopField = root.optional("loop");
+    LoopSpec loop = loopField == null ? null : readLoop(loopField.object("a loop section"), configs, configurations);
     List<InputFile> inputs = new ArrayList<>(ctx.inputs.values());
     return root.build(
-        () -> new AnalysisCase(format, name, description, configurations, sweep, options, inputs));
+        () -> new AnalysisCase(format, name, description, configurations, sweep, options, inputs, loop));
   }
 
   /**
@@ -239,9 +276,182 @@ public final class CaseReader {
       throw c.optional("aero").fail(
           "no aero section for a built-in " + kind + " (it carries its own strips)", "an aero section");
     }
+    JsonField rb = c.optional("rigid_body");
+    RigidBody rigidBody = rb == null ? null : readRigidBody(rb.object("rigid-body data"), structure, kind);
     StructureSpec st = structure;
     AeroSpec ae = aero;
-    return c.build(() -> new Configuration(name, st, ae));
+    return c.build(() -> new Configuration(name, st, ae, rigidBody));
+  }
+
+  // ----------------------------------------------------------------------------------------------
+  // rigid body and flight-control loop
+
+  private static RigidBody readRigidBody(JsonField r, StructureSpec structure, String kind) {
+    r.allowOnly(RIGID_BODY_KEYS);
+    double mass = r.required("mass_kg", "the mass (kg; of the half for a half model)").number();
+    double iyy = r.required("pitch_inertia_kg_m2", "the pitch moment of inertia I_yy (kg m^2)").number();
+    double area = r.required("reference_area_m2", "the reference wing area (m^2)").number();
+    double chord = r.required("reference_chord_m", "the mean aerodynamic chord (m)").number();
+    double cla = r.required("lift_slope_per_rad", "C_L_alpha (1/rad)").number();
+    double cma = r.required("pitch_moment_slope_per_rad", "C_m_alpha (1/rad)").number();
+    double cmq = r.required("pitch_damping_cmq", "C_m_q (per unit q c / 2V)").number();
+    double cmad = r.required("alpha_dot_damping_cm_alpha_dot", "C_m_alphadot (per unit alphadot c / 2V)")
+        .number();
+    double cld = r.required("lift_per_elevator_per_rad", "C_L_delta (1/rad)").number();
+    double cmd = r.required("pitch_moment_per_elevator_per_rad", "C_m_delta (1/rad)").number();
+    Map<String, ModeCoupling> coupling = new LinkedHashMap<>();
+    JsonField mc = r.optional("mode_coupling");
+    if (mc != null) {
+      mc.object("the coupling of each mode by mode name");
+      if (!(structure instanceof ModeTable table)) {
+        throw mc.fail("no mode_coupling for a built-in " + kind
+            + " (coupling needs the mode names of a mode table)", "a mode_coupling section");
+      }
+      for (Map.Entry<String, JsonField> e : mc.entries()) {
+        if (!table.modeNames().contains(e.getKey())) {
+          throw e.getValue().fail("a mode of mode table \"" + table.name() + "\" ("
+              + String.join(", ", table.modeNames()) + ")", "\"" + e.getKey() + "\"");
+        }
+        JsonField m = e.getValue().object("the coupling coefficients of a mode");
+        m.allowOnly(COUPLING_KEYS);
+        double lift = numberOr(m, "lift_coefficient_per_unit_coordinate", 0.0);
+        double moment = numberOr(m, "pitch_moment_coefficient_per_unit_coordinate", 0.0);
+        double fAlpha = numberOr(m, "generalized_force_per_alpha_m2", 0.0);
+        double fElev = numberOr(m, "generalized_force_per_elevator_m2", 0.0);
+        coupling.put(e.getKey(), m.build(() -> new ModeCoupling(lift, moment, fAlpha, fElev)));
+      }
+    }
+    return r.build(() -> new RigidBody(mass, iyy, area, chord, cla, cma, cmq, cmad, cld, cmd, coupling));
+  }
+
+  /**
+   * Reads the loop section and checks each sensor station against every configuration's mode
+   * table (the model checks the rest: rigid-body data present, sensor names, path sensors).
+   *
+   * @param configFields the configuration objects, in order, for error locations
+   * @param configurations the configurations read from them
+   */
+  private static LoopSpec readLoop(JsonField l, List<JsonField> configFields, List<Configuration> configurations) {
+    l.allowOnly(LOOP_KEYS);
+    ActuatorSpec actuator = readActuator(l.required("actuator", "an actuator section").object("an actuator section"));
+    List<JsonField> sensorItems = l.required("sensors", "a list of sensors").list("a list of sensors");
+    List<SensorSpec> sensors = new ArrayList<>();
+    for (JsonField s : sensorItems) {
+      sensors.add(readSensor(s.object("a sensor")));
+    }
+    for (int i = 0; i < configurations.size(); i++) {
+      StructureSpec st = configurations.get(i).structure();
+      if (!(st instanceof ModeTable table)) {
+        throw configFields.get(i).fail("a mode_table configuration (loop sensors need mode-table stations)",
+            "a built-in structure in a case with a loop");
+      }
+      Set<String> stations = table.modes().get(0).shapes().keySet();
+      for (int j = 0; j < sensors.size(); j++) {
+        if (!stations.contains(sensors.get(j).station())) {
+          throw sensorItems.get(j).optional("station").fail("a station of mode table \"" + table.name()
+              + "\" of configuration \"" + configurations.get(i).name() + "\" ("
+              + String.join(", ", new TreeSet<>(stations)) + ")", "\"" + sensors.get(j).station() + "\"");
+        }
+      }
+    }
+    List<JsonField> pathItems = l.required("paths", "a list of feedback paths").list("a list of feedback paths");
+    List<FeedbackPath> paths = new ArrayList<>();
+    for (JsonField p : pathItems) {
+      paths.add(readPath(p.object("a feedback path")));
+    }
+    double delay = numberOr(l, "computation_delay_s", 0.0);
+    double period = numberOr(l, "sample_period_s", 0.0);
+    int pade = l.has("pade_order") ? l.optional("pade_order").integer() : DEFAULT_PADE_ORDER;
+    return l.build(() -> new LoopSpec(actuator, sensors, paths, delay, period, pade));
+  }
+
+  private static ActuatorSpec readActuator(JsonField a) {
+    a.allowOnly(ACTUATOR_KEYS);
+    JsonField o = a.required("order", "\"first\" or \"second\"");
+    ActuatorOrder order = switch (o.text()) {
+      case "first" -> ActuatorOrder.FIRST;
+      case "second" -> ActuatorOrder.SECOND;
+      default -> throw o.fail("\"first\" or \"second\"", o.describe());
+    };
+    double bandwidth = a.required("bandwidth_hz",
+        "the bandwidth (Hz): corner of a first-order or natural frequency of a second-order actuator").number();
+    double zeta;
+    if (order == ActuatorOrder.SECOND) {
+      zeta = a.required("damping_ratio", "the damping ratio of the second-order actuator").number();
+    } else {
+      if (a.has("damping_ratio")) {
+        throw a.optional("damping_ratio").fail("no damping_ratio for a first-order actuator",
+            "a damping ratio, which a first-order model has no use for");
+      }
+      zeta = 0.0;
+    }
+    return a.build(() -> new ActuatorSpec(order, bandwidth, zeta));
+  }
+
+  private static SensorSpec readSensor(JsonField s) {
+    s.allowOnly(SENSOR_KEYS);
+    String name = s.required("name", "a sensor name").text();
+    JsonField k = s.required("kind", "\"pitch_rate_gyro\", \"normal_accelerometer\" or \"angle_of_attack_vane\"");
+    SensorKind kind = switch (k.text()) {
+      case "pitch_rate_gyro" -> SensorKind.PITCH_RATE_GYRO;
+      case "normal_accelerometer" -> SensorKind.NORMAL_ACCELEROMETER;
+      case "angle_of_attack_vane" -> SensorKind.ANGLE_OF_ATTACK_VANE;
+      default -> throw k.fail("\"pitch_rate_gyro\", \"normal_accelerometer\" or \"angle_of_attack_vane\"",
+          k.describe());
+    };
+    String station = s.required("station", "the mode-table station of the sensor").text();
+    double lever = numberOr(s, "lever_arm_m", 0.0);
+    double bandwidth = numberOr(s, "bandwidth_hz", 0.0);
+    return s.build(() -> new SensorSpec(name, kind, station, lever, bandwidth));
+  }
+
+  private static FeedbackPath readPath(JsonField p) {
+    p.allowOnly(PATH_KEYS);
+    String sensor = p.required("sensor", "the name of one of the loop's sensors").text();
+    double kp = p.required("proportional_gain", "Kp (rad of elevator per sensor unit)").number();
+    double ki = numberOr(p, "integral_gain_per_s", 0.0);
+    List<FilterSpec> filters = new ArrayList<>();
+    JsonField fl = p.optional("filters");
+    if (fl != null) {
+      for (JsonField f : fl.list("a list of filters")) {
+        filters.add(readFilter(f.object("a filter: {\"notch\": {...}} or {\"low_pass\": {...}}")));
+      }
+    }
+    JsonField sc = p.optional("schedule");
+    GainSchedule schedule = sc == null ? null : readSchedule(sc.object("a gain schedule"));
+    return p.build(() -> new FeedbackPath(sensor, kp, ki, filters, schedule));
+  }
+
+  private static FilterSpec readFilter(JsonField f) {
+    f.allowOnly(List.of("notch", "low_pass"));
+    String kind = f.exactlyOne("the filter type", "notch", "low_pass");
+    JsonField d = f.optional(kind).object("the filter data");
+    if (kind.equals("notch")) {
+      d.allowOnly(List.of("centre_hz", "numerator_damping_ratio", "denominator_damping_ratio"));
+      double centre = d.required("centre_hz", "the centre frequency (Hz)").number();
+      double zz = d.required("numerator_damping_ratio", "zeta_z, the numerator damping ratio").number();
+      double zp = d.required("denominator_damping_ratio", "zeta_p, the denominator damping ratio").number();
+      return d.build(() -> new NotchFilterSpec(centre, zz, zp));
+    }
+    d.allowOnly(List.of("corner_hz", "damping_ratio"));
+    double corner = d.required("corner_hz", "the corner frequency (Hz)").number();
+    double zeta = d.required("damping_ratio", "the damping ratio (0.7071 = Butterworth)").number();
+    return d.build(() -> new LowPassFilterSpec(corner, zeta));
+  }
+
+  private static GainSchedule readSchedule(JsonField s) {
+    s.allowOnly(List.of("dynamic_pressure_pa", "factor"));
+    JsonField qf = s.required("dynamic_pressure_pa", "the list of dynamic-pressure breakpoints (Pa)");
+    JsonField ff = s.required("factor", "the list of gain factors, one per breakpoint");
+    double[] q = qf.numbers("a list of dynamic pressures (Pa)");
+    double[] k = ff.numbers("a list of gain factors");
+    if (q.length == 0) {
+      throw qf.fail("at least one breakpoint", "an empty list");
+    }
+    if (k.length != q.length) {
+      throw ff.fail("one factor per dynamic pressure (" + q.length + ")", k.length + " factors");
+    }
+    return s.build(() -> new GainSchedule(q, k));
   }
 
   private static AeroSpec readAero(JsonField a, ModeTable table, Context ctx) {

@@ -11,9 +11,14 @@ import java.util.Locale;
 import java.util.Map;
 import org.flexmargin.atmosphere.StandardAtmosphere;
 import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.InertiaAxis;
+import org.flexmargin.model.LoopSpec;
 import org.flexmargin.model.ModeTable;
+import org.flexmargin.model.NotchFilterSpec;
+import org.flexmargin.model.RigidBody;
+import org.flexmargin.model.SensorKind;
 import org.flexmargin.model.ShapeValue;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.model.StripTheorySpec;
@@ -56,6 +61,49 @@ class BundledCaseFilesTest {
     Path csv = tmp.resolve("full.csv");
     Files.writeString(csv, toCsv(full));
     assertEquals(full, CaseReader.readModeTable(csv));
+  }
+
+  @Test
+  void demoLoopAndRigidBodyRead() {
+    AnalysisCase c = CaseReader.read(DEMO);
+    double altitudeM = ((SpeedSweep) c.sweep()).altitudeM();
+    double rho = StandardAtmosphere.densityKgPerM3(altitudeM);
+    for (Configuration cfg : c.configurations()) {
+      RigidBody rb = cfg.rigidBody();
+      // Statically unstable by design (negative static margin).
+      assertTrue(rb.pitchMomentSlopePerRad() > 0, cfg.name());
+      // Short-period approximation (Nelson, Flight Stability and Automatic Control, ch. 4, from
+      // memory): lambda^2 - (Z_alpha/V + M_q + M_alphadot) lambda + (Z_alpha M_q / V - M_alpha) = 0
+      // with Z_alpha = -q S C_L_alpha / m, M_q = q S c (c / 2V) C_m_q / I_yy, M_alpha = q S c
+      // C_m_alpha / I_yy. Its constant term is (q S c / I_yy) (-rho S c C_L_alpha C_m_q / (4 m) -
+      // C_m_alpha), independent of speed; negative means one real positive root: the airframe
+      // diverges without the loop at every speed of the sweep.
+      double stiffness = -rho * rb.referenceAreaM2() * rb.referenceChordM() * rb.liftSlopePerRad()
+          * rb.pitchDampingCmq() / (4 * rb.massKg()) - rb.pitchMomentSlopePerRad();
+      assertTrue(stiffness < 0, cfg.name() + ": short-period stiffness term " + stiffness);
+      // Conventional elevator (trailing edge down positive): C_L_delta > 0, C_m_delta < 0.
+      assertTrue(rb.liftPerElevatorPerRad() > 0 && rb.pitchMomentPerElevatorPerRad() < 0);
+      ModeTable t = (ModeTable) cfg.structure();
+      assertTrue(t.modeNames().containsAll(rb.modeCoupling().keySet()));
+    }
+    LoopSpec loop = c.loop();
+    assertEquals(2, loop.padeOrder());
+    assertEquals(1.0 / 80, loop.samplePeriodS(), 1e-15);
+    // The gyro sits where the first fuselage bending mode rotates strongly (visible coupling), and
+    // the notch is deliberately off that mode's frequency.
+    ModeTable full = (ModeTable) c.configurations().get(0).structure();
+    ElasticMode fus = full.modes().stream().filter(m -> m.name().equals("fuselage_bending_1")).findFirst()
+        .orElseThrow();
+    assertEquals(SensorKind.PITCH_RATE_GYRO, loop.sensor("pitch_rate").kind());
+    String gyroStation = loop.sensor("pitch_rate").station();
+    for (ElasticMode m : full.modes()) {
+      assertTrue(Math.abs(fus.shapes().get(gyroStation).rotationRad())
+          >= Math.abs(m.shapes().get(gyroStation).rotationRad()) || m.frequencyHz() > 15);
+    }
+    NotchFilterSpec notch = (NotchFilterSpec) loop.paths().get(0).filters().get(0);
+    assertTrue(Math.abs(notch.centreHz() - fus.frequencyHz()) > 0.5);
+    // Gains fall with dynamic pressure.
+    assertTrue(loop.paths().get(0).schedule().at(15_000) < loop.paths().get(0).schedule().at(1_000));
   }
 
   /** Writes a table in the CSV layout of docs/case-files.md (test-side, independent of the reader). */

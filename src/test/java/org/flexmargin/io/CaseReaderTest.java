@@ -202,7 +202,7 @@ class CaseReaderTest {
   @Test
   void reservedSectionsAreRejected() {
     InputFileException e = failsCase("bad-reserved.json");
-    assertEquals("loop", e.fieldPath());
+    assertEquals("requirements", e.fieldPath());
     assertEquals(6, e.line());
     assertHas(e.getMessage(), "not supported in format 1 yet");
   }
