@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -23,6 +24,7 @@ import org.flexmargin.model.RigidBody;
 import org.flexmargin.model.SensorKind;
 import org.flexmargin.model.SensorSpec;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The optional closed-loop sections of a case file: {@code rigid_body} in a configuration and the
@@ -82,6 +84,61 @@ class LoopCaseReaderTest {
     assertEquals(0.0125, loop.samplePeriodS());
     assertEquals(CaseReader.DEFAULT_PADE_ORDER, loop.padeOrder());
     assertEquals(2, loop.padeOrder());
+  }
+
+  /** Writes a typical-section case with the given extra text in the configuration and at the top. */
+  private static Path builtIn(Path dir, String inConfig, String atTop) throws Exception {
+    String text = "{\n"
+        + "  \"format\": 1, \"name\": \"builtin\",\n"
+        + "  \"configurations\": [{\"name\": \"ts\",\n"
+        + "    \"typical_section\": {\"semichord_m\": 1, \"mass_per_span_kg_per_m\": 300, \"elastic_axis_a\": -0.5,\n"
+        + "      \"mass_offset_x_alpha\": 0.25, \"radius_of_gyration_squared\": 0.25, \"heave_frequency_hz\": 2,\n"
+        + "      \"pitch_frequency_hz\": 10, \"lift_slope_per_rad\": 6.28, \"span_m\": 1, \"damping_ratio\": 0},\n"
+        + "    \"rigid_body\": {\"mass_kg\": 300, \"pitch_inertia_kg_m2\": 100, \"reference_area_m2\": 2,\n"
+        + "      \"reference_chord_m\": 2, \"lift_slope_per_rad\": 5, \"pitch_moment_slope_per_rad\": -0.5,\n"
+        + "      \"pitch_damping_cmq\": -10, \"alpha_dot_damping_cm_alpha_dot\": -3, \"lift_per_elevator_per_rad\": 0.3,\n"
+        + "      \"pitch_moment_per_elevator_per_rad\": -1" + inConfig + "}}],\n"
+        + "  \"sweep\": {\"kind\": \"speed\", \"altitude_m\": 0, \"speed_kind\": \"eas\", \"from_mps\": 20,"
+        + " \"to_mps\": 100, \"points\": 5}" + atTop + "\n}\n";
+    Path f = dir.resolve("builtin.json");
+    Files.writeString(f, text);
+    return f;
+  }
+
+  private static InputFileException failsBuiltIn(Path dir, String inConfig, String atTop) throws Exception {
+    Path f = builtIn(dir, inConfig, atTop);
+    return assertThrows(InputFileException.class, () -> CaseReader.read(f));
+  }
+
+  @Test
+  void builtInStructuresRefuseModeCouplingAndLoops(@TempDir Path dir) throws Exception {
+    // Rigid-body data alone are accepted on a built-in structure.
+    assertEquals(-0.5, CaseReader.read(builtIn(dir, "", "")).configurations().get(0).rigidBody()
+        .pitchMomentSlopePerRad());
+    InputFileException coupling = failsBuiltIn(dir, ",\n      \"mode_coupling\": {\"mode_1\": {}}", "");
+    assertEquals(11, coupling.line());
+    assertEquals("configurations[0].rigid_body.mode_coupling", coupling.fieldPath());
+    assertEquals("a mode_coupling section", coupling.found());
+    InputFileException loop = failsBuiltIn(dir, "", ",\n  \"loop\": {\"actuator\": {\"order\": \"first\","
+        + " \"bandwidth_hz\": 10},\n    \"sensors\": [{\"name\": \"g\", \"kind\": \"pitch_rate_gyro\","
+        + " \"station\": \"section\"}],\n    \"paths\": [{\"sensor\": \"g\", \"proportional_gain\": 0.1}]}");
+    assertEquals(3, loop.line());
+    assertEquals("configurations[0]", loop.fieldPath());
+    assertEquals("a built-in structure in a case with a loop", loop.found());
+  }
+
+  @Test
+  void firstOrderActuatorRefusesADampingRatio(@TempDir Path dir) throws Exception {
+    String text = Files.readString(DIR.resolve("bad-loop-unknown-key.json"))
+        .replace("\"bandwidth_hz\": 10}", "\"bandwidth_hz\": 10, \"damping_ratio\": 0.7}")
+        .replace(",\n    \"computation_delay_ms\": 10", "")
+        .replace("good-", DIR.toAbsolutePath() + "/good-");
+    Path f = dir.resolve("first.json");
+    Files.writeString(f, text);
+    InputFileException e = assertThrows(InputFileException.class, () -> CaseReader.read(f));
+    assertEquals(16, e.line());
+    assertEquals("loop.actuator.damping_ratio", e.fieldPath());
+    assertEquals("no damping_ratio for a first-order actuator", e.expected());
   }
 
   @Test
