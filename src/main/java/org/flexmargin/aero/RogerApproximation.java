@@ -1,0 +1,308 @@
+package org.flexmargin.aero;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.flexmargin.model.InvalidInputException;
+
+/**
+ * Least-squares rational function approximation of generalized aerodynamic forces in Roger's form
+ * (K. L. Roger, "Airplane math modeling methods for active control design", AGARD-CP-228, 1977;
+ * the least-squares formulation and the usual constraints are surveyed by Tiffany &amp; Adams,
+ * "Nonlinear programming extensions to rational function approximation methods for unsteady
+ * aerodynamic forces", NASA TP-2776, 1988):
+ *
+ * <pre>
+ *   Q(p) ~ A_0 + A_1 p + A_2 p^2 + sum_{l=1..nL} A_{l+2} p / (p + beta_l),   p = i k on the data
+ * </pre>
+ *
+ * <h2>Fit</h2>
+ *
+ * On the imaginary axis, with p = ik,
+ *
+ * <pre>
+ *   Re Q(ik) = A_0 - k^2 A_2 + sum_l A_{l+2} k^2 / (k^2 + beta_l^2)
+ *   Im Q(ik) =        k A_1  + sum_l A_{l+2} k beta_l / (k^2 + beta_l^2)
+ * </pre>
+ *
+ * <ol>
+ *   <li>Steady value imposed (a constraint, not fitted): A<sub>0</sub> = Re Q(0), so the fit is
+ *       exact at k = 0 and the static aeroelastic stiffness, hence divergence, is that of the
+ *       data. (The other terms vanish at p = 0.)
+ *   <li>The remaining nL + 2 real unknowns of each element (i, j) minimise the sum over the
+ *       fitted k of |Q<sub>fit,ij</sub>(ik) - Q<sub>ij</sub>(ik)|<sup>2</sup>: the real and the
+ *       imaginary parts give two rows per reduced frequency of one real linear least-squares
+ *       problem, unweighted. The design matrix depends only on k and the lag roots, so it is
+ *       factored once (Householder QR, EJML) and solved for all n<sup>2</sup> elements at once.
+ * </ol>
+ *
+ * <h2>Defaults (common practice)</h2>
+ *
+ * Lag roots are chosen by the user, or spread over the fitted range ({@link #defaultLagRoots}:
+ * geometric between 0.02 and 0.15 k<sub>max</sub>). Reduced
+ * frequencies are the user's, or {@link #defaultReducedFrequencies}, dense near k = 0 where
+ * Q(ik) of unsteady theory behaves like k ln k. The fit quality is reported per element ({@link
+ * FitError}) and flagged above a threshold (default {@value #DEFAULT_ERROR_THRESHOLD}, i.e. 5 %).
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class RogerApproximation {
+
+  /** Worst relative element error above which a fit is flagged (dimensionless): 5 %. */
+  public static final double DEFAULT_ERROR_THRESHOLD = 0.05;
+
+  /** Number of reduced frequencies of the default grid. */
+  public static final int DEFAULT_POINTS = 31;
+
+  /** Reciprocal condition estimate below which the least-squares problem is refused. */
+  private static final double MIN_QUALITY = 1e-13;
+
+  private RogerApproximation() {}
+
+  /**
+   * Fits with the default reduced-frequency grid and the default lag roots.
+   *
+   * @param source the data to fit
+   * @param maxReducedFrequency k<sub>max</sub> of the fitted range [0, k<sub>max</sub>], &gt; 0
+   * @param lagCount nL &ge; 0
+   * @return the fit
+   * @throws InvalidInputException {@code rfa.max_reduced_frequency} or {@code rfa.lag_count}
+   */
+  public static RationalFit fit(AeroSource source, double maxReducedFrequency, int lagCount) {
+    return fit(source, defaultReducedFrequencies(maxReducedFrequency, DEFAULT_POINTS),
+        defaultLagRoots(maxReducedFrequency, lagCount), DEFAULT_ERROR_THRESHOLD);
+  }
+
+  /**
+   * Fits at given reduced frequencies with given lag roots, flagging errors above 5 %.
+   *
+   * @see #fit(AeroSource, double[], double[], double)
+   */
+  public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots) {
+    return fit(source, reducedFrequencies, lagRoots, DEFAULT_ERROR_THRESHOLD);
+  }
+
+  /**
+   * Fits Roger's form to {@code source} sampled at {@code reducedFrequencies}.
+   *
+   * @param source the data to fit; evaluated at k = 0 for A<sub>0</sub> (a source whose range
+   *     starts above 0 gives its own value there, e.g. a table's held end value, and the fit says so
+   *     in its warnings)
+   * @param reducedFrequencies k values, &ge; 0, finite, strictly increasing; at least enough
+   *     non-zero values for 2 (nL + 2) equations: ceil((nL + 2) / 2) + 1 of them
+   * @param lagRoots &beta;<sub>l</sub> &gt; 0, finite, distinct (dimensionless; may be empty)
+   * @param errorThreshold relative element error above which the fit is flagged, &gt; 0
+   * @return the fit, its errors and warnings
+   * @throws InvalidInputException {@code rfa.reduced_frequencies[i]}, {@code rfa.lag_roots[l]},
+   *     {@code rfa.error_threshold}, or {@code rfa.lag_roots} when the least-squares problem is
+   *     rank-deficient (lag roots too close together for the fitted frequencies)
+   */
+  public static RationalFit fit(
+      AeroSource source, double[] reducedFrequencies, double[] lagRoots, double errorThreshold) {
+    if (source == null) {
+      throw new InvalidInputException("rfa.source", "aerodynamic data", "none");
+    }
+    double[] ks = checkedFrequencies(reducedFrequencies);
+    double[] lags = RationalFit.checkedLagRoots("rfa.lag_roots", lagRoots);
+    if (!(errorThreshold > 0) || Double.isInfinite(errorThreshold)) {
+      throw new InvalidInputException("rfa.error_threshold", "a finite value > 0", String.valueOf(errorThreshold));
+    }
+    int nl = lags.length;
+    int unknowns = nl + 2;
+    int positive = 0;
+    for (double k : ks) {
+      if (k > 0) {
+        positive++;
+      }
+    }
+    int needed = (unknowns + 1) / 2 + 1;
+    if (positive < needed) {
+      throw new InvalidInputException("rfa.reduced_frequencies",
+          "at least " + needed + " values above 0 for " + nl + " lag roots", positive + " values above 0");
+    }
+    int n = source.size();
+    int nn = n * n;
+    List<String> warnings = new ArrayList<>();
+    if (source.minReducedFrequency() > 0) {
+      warnings.add(String.format(Locale.ROOT,
+          "steady forces A0 taken from the source at k = 0, below its range (lowest k %.4g)",
+          source.minReducedFrequency()));
+    }
+    if (ks[ks.length - 1] > source.maxReducedFrequency() || ks[0] < source.minReducedFrequency()) {
+      warnings.add(String.format(Locale.ROOT,
+          "fitted reduced frequencies %.4g .. %.4g extend beyond the data range %.4g .. %.4g",
+          ks[0], ks[ks.length - 1], source.minReducedFrequency(), source.maxReducedFrequency()));
+    }
+
+    // data: Q at every k, and A0 = Re Q(0)
+    ZMatrixRMaj q = new ZMatrixRMaj(n, n);
+    source.forces(0.0, q);
+    double[][][] coefficients = new double[nl + 3][n][n];
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        coefficients[0][i][j] = q.getReal(i, j);
+      }
+    }
+    int nk = ks.length;
+    double[][] data = new double[nk][];
+    for (int r = 0; r < nk; r++) {
+      source.forces(ks[r], q);
+      data[r] = q.data.clone();
+    }
+
+    // design matrix: row 2r real part, row 2r+1 imaginary part; columns A1, A2, A3..
+    DMatrixRMaj design = new DMatrixRMaj(2 * nk, unknowns);
+    DMatrixRMaj rhs = new DMatrixRMaj(2 * nk, nn);
+    for (int r = 0; r < nk; r++) {
+      double k = ks[r];
+      design.set(2 * r, 1, -k * k);
+      design.set(2 * r + 1, 0, k);
+      for (int l = 0; l < nl; l++) {
+        double b = lags[l];
+        double den = k * k + b * b;
+        design.set(2 * r, 2 + l, k * k / den);
+        design.set(2 * r + 1, 2 + l, k * b / den);
+      }
+      for (int e = 0; e < nn; e++) {
+        rhs.set(2 * r, e, data[r][2 * e] - coefficients[0][e / n][e % n]);
+        rhs.set(2 * r + 1, e, data[r][2 * e + 1]);
+      }
+    }
+    LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.leastSquares(2 * nk, unknowns);
+    if (!solver.setA(design.copy()) || !(solver.quality() > MIN_QUALITY)) {
+      throw new InvalidInputException("rfa.lag_roots",
+          "lag roots far enough apart for the fitted reduced frequencies (well-posed least squares)",
+          String.format(Locale.ROOT, "a rank-deficient problem (quality %.3g)", solver.quality()));
+    }
+    DMatrixRMaj x = new DMatrixRMaj(unknowns, nn);
+    solver.solve(rhs, x);
+    for (int u = 0; u < unknowns; u++) {
+      for (int e = 0; e < nn; e++) {
+        coefficients[u + 1][e / n][e % n] = x.get(u, e);
+      }
+    }
+
+    // errors on the fitted frequencies
+    RationalFit provisional = new RationalFit(source.referenceSemichordM(), lags, coefficients, ks,
+        FitError.of(new double[n][n], new double[n][n]), errorThreshold, List.of(), source.description());
+    double[][] absolute = new double[n][n];
+    double[][] largest = new double[n][n];
+    for (int r = 0; r < nk; r++) {
+      provisional.evaluate(ks[r], q);
+      for (int e = 0; e < nn; e++) {
+        double dr = q.data[2 * e] - data[r][2 * e];
+        double di = q.data[2 * e + 1] - data[r][2 * e + 1];
+        absolute[e / n][e % n] = Math.max(absolute[e / n][e % n], Math.hypot(dr, di));
+        largest[e / n][e % n] = Math.max(largest[e / n][e % n], Math.hypot(data[r][2 * e], data[r][2 * e + 1]));
+      }
+    }
+    double[][] relative = new double[n][n];
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        double big = Math.max(largest[i][j], Math.abs(coefficients[0][i][j]));
+        relative[i][j] = big > 0 ? absolute[i][j] / big : (absolute[i][j] == 0 ? 0.0 : Double.POSITIVE_INFINITY);
+      }
+    }
+    FitError error = FitError.of(relative, absolute);
+    if (error.worstRelativeError() > errorThreshold) {
+      warnings.add(String.format(Locale.ROOT,
+          "rational fit error %.3g %% on element (%d, %d) exceeds %.3g %%: add lag roots or narrow the "
+              + "fitted range",
+          100 * error.worstRelativeError(), error.worstRow(), error.worstColumn(), 100 * errorThreshold));
+    }
+    return new RationalFit(source.referenceSemichordM(), lags, coefficients, ks, error, errorThreshold,
+        warnings, source.description());
+  }
+
+  /**
+   * Default reduced frequencies: {@code count} values k<sub>i</sub> = k<sub>max</sub> (i /
+   * (count - 1))<sup>2</sup>, i = 0 .. count - 1, from 0 to k<sub>max</sub>, quadratically
+   * clustered near k = 0 where unsteady forces change fastest (k ln k behaviour).
+   *
+   * @param maxReducedFrequency k<sub>max</sub> &gt; 0, finite
+   * @param count number of values, &ge; 3
+   * @return the grid, increasing
+   * @throws InvalidInputException {@code rfa.max_reduced_frequency} or {@code rfa.points}
+   */
+  public static double[] defaultReducedFrequencies(double maxReducedFrequency, int count) {
+    checkMaxK(maxReducedFrequency);
+    if (count < 3) {
+      throw new InvalidInputException("rfa.points", "at least 3", String.valueOf(count));
+    }
+    double[] k = new double[count];
+    for (int i = 0; i < count; i++) {
+      double u = (double) i / (count - 1);
+      k[i] = maxReducedFrequency * u * u;
+    }
+    k[count - 1] = maxReducedFrequency;
+    return k;
+  }
+
+  /**
+   * Default lag roots. Spreading the lag roots over the fitted range is common practice (Tiffany
+   * &amp; Adams, NASA TP-2776, 1988, place them within the range of fitted reduced frequencies);
+   * the particular spread here is ours: geometric between 0.02 k<sub>max</sub> and 0.15
+   * k<sub>max</sub>,
+   *
+   * <pre>  beta_l = 0.02 k_max 7.5^((l - 1)/(nL - 1)),  l = 1 .. nL  (nL &ge; 2);   0.05 k_max for nL = 1 </pre>
+   *
+   * i.e. in the low part of the range, where forces of unsteady theory change fastest (their k ln k
+   * behaviour near k = 0). Chosen from fits of Theodorsen strip-theory forces over k in [0, 1.5]:
+   * with it the worst element error is below 1 % for every nL from 2 to 6 (see the tests), against
+   * several per cent for lag roots spread evenly up to k<sub>max</sub>. For data with strong
+   * high-frequency content (e.g. compressible panel-method tables) the user's own lag roots may do
+   * better; the fit error says so.
+   *
+   * @param maxReducedFrequency k<sub>max</sub> &gt; 0, finite
+   * @param lagCount nL from 0 to 12
+   * @return nL lag roots, increasing (dimensionless)
+   * @throws InvalidInputException {@code rfa.max_reduced_frequency} or {@code rfa.lag_count}
+   */
+  public static double[] defaultLagRoots(double maxReducedFrequency, int lagCount) {
+    checkMaxK(maxReducedFrequency);
+    if (lagCount < 0 || lagCount > 12) {
+      throw new InvalidInputException("rfa.lag_count", "0 to 12", String.valueOf(lagCount));
+    }
+    double[] b = new double[lagCount];
+    if (lagCount == 1) {
+      b[0] = SINGLE_LAG_FRACTION * maxReducedFrequency;
+    }
+    for (int l = 0; l < lagCount && lagCount > 1; l++) {
+      b[l] = LOW_LAG_FRACTION * maxReducedFrequency
+          * Math.pow(HIGH_LAG_FRACTION / LOW_LAG_FRACTION, (double) l / (lagCount - 1));
+    }
+    return b;
+  }
+
+  /** Lowest default lag root as a fraction of k<sub>max</sub>. */
+  private static final double LOW_LAG_FRACTION = 0.02;
+  /** Highest default lag root as a fraction of k<sub>max</sub>. */
+  private static final double HIGH_LAG_FRACTION = 0.15;
+  /** The single default lag root as a fraction of k<sub>max</sub>. */
+  private static final double SINGLE_LAG_FRACTION = 0.05;
+
+  private static void checkMaxK(double maxReducedFrequency) {
+    if (!(maxReducedFrequency > 0) || Double.isInfinite(maxReducedFrequency)) {
+      throw new InvalidInputException("rfa.max_reduced_frequency", "a finite value > 0",
+          String.valueOf(maxReducedFrequency));
+    }
+  }
+
+  private static double[] checkedFrequencies(double[] ks) {
+    if (ks == null || ks.length == 0) {
+      throw new InvalidInputException("rfa.reduced_frequencies", "a list of reduced frequencies", "none");
+    }
+    double[] c = ks.clone();
+    for (int i = 0; i < c.length; i++) {
+      if (!(c[i] >= 0) || Double.isInfinite(c[i]) || (i > 0 && !(c[i] > c[i - 1]))) {
+        throw new InvalidInputException("rfa.reduced_frequencies[" + i + "]",
+            "a finite value >= 0 above the previous one", String.valueOf(c[i]));
+      }
+    }
+    return c;
+  }
+}
