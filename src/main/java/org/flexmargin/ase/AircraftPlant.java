@@ -156,6 +156,31 @@ public final class AircraftPlant {
     return rigid.referenceChordM() / (2 * condition.speedTasMps());
   }
 
+  /**
+   * Roots of the rigid short period alone (elastic coupling ignored): the two eigenvalues of the
+   * alpha-q equations, as {re0, im0, re1, im1}.
+   *
+   * @return the roots (1/s, rad/s)
+   */
+  public double[] shortPeriodRoots() {
+    double lf = liftFactor();
+    double mf = momentFactor();
+    double rf = rateFactor();
+    double a11 = -lf * rigid.liftSlopePerRad();
+    double mad = mf * rigid.alphaDotDampingCmAlphaDot() * rf;
+    double a21 = mf * rigid.pitchMomentSlopePerRad() + mad * a11;
+    double a22 = mf * rigid.pitchDampingCmq() * rf + mad;
+    double tr = a11 + a22;
+    double det = a11 * a22 - a21;
+    double disc = tr * tr / 4 - det;
+    if (disc >= 0) {
+      double r = Math.sqrt(disc);
+      return new double[] {tr / 2 + r, 0, tr / 2 - r, 0};
+    }
+    double im = Math.sqrt(-disc);
+    return new double[] {tr / 2, im, tr / 2, -im};
+  }
+
   /** @return a new frequency-response workspace (not thread-safe: one per thread) */
   public FrequencyEvaluator frequencyEvaluator() {
     return new FrequencyEvaluator();

@@ -1,6 +1,7 @@
 package org.flexmargin.ase;
 
 import org.ejml.data.DMatrixRMaj;
+import org.flexmargin.aero.RationalFit;
 
 /**
  * Elastic generalized aerodynamic forces in Roger's rational form, in the Laplace variable
@@ -30,4 +31,37 @@ public interface RationalAerodynamics {
    * @return the real coefficient matrix (a copy)
    */
   DMatrixRMaj coefficient(int index);
+
+  /**
+   * @param fit a Roger fit of a configuration's elastic forces
+   * @return the fit seen as rational aerodynamics
+   */
+  static RationalAerodynamics of(RationalFit fit) {
+    return new RationalAerodynamics() {
+      @Override
+      public int size() {
+        return fit.size();
+      }
+
+      @Override
+      public double referenceSemichordM() {
+        return fit.referenceSemichordM();
+      }
+
+      @Override
+      public int lagCount() {
+        return fit.lagCount();
+      }
+
+      @Override
+      public double lagRoot(int l) {
+        return fit.lagRoot(l);
+      }
+
+      @Override
+      public DMatrixRMaj coefficient(int index) {
+        return new DMatrixRMaj(fit.matrix(index));
+      }
+    };
+  }
 }

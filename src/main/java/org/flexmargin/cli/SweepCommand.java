@@ -15,7 +15,7 @@ import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Findings;
-import org.flexmargin.sweep.OpenLoopSweep;
+import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.SweepResult;
 import picocli.CommandLine.Command;
@@ -58,7 +58,7 @@ final class SweepCommand implements Callable<Integer> {
       err.printf(Locale.ROOT, "analysing %d configuration(s) of case %s ...%n", total, c.name());
       err.flush();
     }
-    SweepResult result = new OpenLoopSweep(common.threads).run(c, name -> {
+    SweepResult result = new CaseSweep(common.threads).run(c, name -> {
       if (!common.quiet) {
         synchronized (err) {
           int d = done.incrementAndGet();

@@ -18,13 +18,13 @@ final class Tables {
   }
 
   static void findings(PrintWriter out, List<Finding> findings, boolean colour) {
-    String header = String.format(Locale.ROOT, "%-14s %-28s %-24s %9s %8s %9s %6s %8s %8s",
+    String header = String.format(Locale.ROOT, "%-14s %-33s %-22s %9s %8s %9s %6s %8s %8s",
         "configuration", "finding", "mode", "EAS m/s", "EAS kt", "TAS m/s", "Mach", "alt m", "freq Hz");
     out.println(header);
     out.println("-".repeat(header.length()));
     for (Finding f : findings) {
-      String line = String.format(Locale.ROOT, "%-14s %-28s %-24s %9s %8s %9s %6s %8.0f %8s",
-          clip(f.configuration(), 14), f.what(), clip(f.mode(), 24), num(f.speedEasMps(), "%.2f"),
+      String line = String.format(Locale.ROOT, "%-14s %-33s %-22s %9s %8s %9s %6s %8.0f %8s",
+          clip(f.configuration(), 14), f.what(), clip(f.mode(), 22), num(f.speedEasMps(), "%.2f"),
           num(f.speedEasKnots(), "%.1f"), num(f.speedTasMps(), "%.2f"), num(f.mach(), "%.3f"),
           f.altitudeM(), f.frequencyHz() > 0 ? num(f.frequencyHz(), "%.3f") : "-");
       if (colour && (f.what().startsWith("flutter onset") || f.what().equals("divergence"))) {

@@ -18,6 +18,7 @@ import org.flexmargin.flutter.FlutterSolution;
  * @param divergenceTasAtSweepStartMps divergence TAS at the first sweep point's altitude (m/s)
  * @param flutter flutter solution (curves, crossings, diagnostics)
  * @param elapsedSeconds wall time of this configuration's analysis (s)
+ * @param servo loop margins and closed-loop results; {@code null} when the case has no loop
  */
 public record ConfigurationResult(
     String configuration,
@@ -28,11 +29,20 @@ public record ConfigurationResult(
     OptionalDouble divergenceConfirmedPa,
     double divergenceTasAtSweepStartMps,
     FlutterSolution flutter,
-    double elapsedSeconds) {
+    double elapsedSeconds,
+    ServoResult servo) {
   /** Copies. */
   public ConfigurationResult {
     modeNames = List.copyOf(modeNames);
     modeFrequenciesHz = modeFrequenciesHz.clone();
+  }
+
+  /** Open-loop result without a loop. */
+  public ConfigurationResult(String configuration, List<String> modeNames, double[] modeFrequenciesHz,
+      String aeroDescription, DivergenceResult divergence, OptionalDouble divergenceConfirmedPa,
+      double divergenceTasAtSweepStartMps, FlutterSolution flutter, double elapsedSeconds) {
+    this(configuration, modeNames, modeFrequenciesHz, aeroDescription, divergence, divergenceConfirmedPa,
+        divergenceTasAtSweepStartMps, flutter, elapsedSeconds, null);
   }
 
   @Override

@@ -49,10 +49,34 @@ public final class Findings {
             String.format(Locale.ROOT, "g = %.3f crossed (%s)", x.thresholdG(),
                 c.flutter().method().name().toLowerCase(Locale.ROOT).replace("pk", "p-k") + " method")));
       }
+      if (c.servo() != null) {
+        closedLoop(out, c);
+      }
       out.sort(Comparator.comparingDouble(f -> Double.isNaN(f.speedEasMps()) ? -1 : f.speedEasMps()));
       all.addAll(out);
     }
     return all;
+  }
+
+  /** Closed-loop instability at the sweep start and every refined closed-loop crossing. */
+  private static void closedLoop(List<Finding> out, ConfigurationResult c) {
+    ClosedLoopResult r = c.servo().closedLoop();
+    ClosedLoopPoint first = r.points().get(0);
+    for (ClosedLoopRoot root : first.roots()) {
+      if (root.realPerS() > 0) {
+        FlightCondition fc = first.condition();
+        out.add(new Finding(c.configuration(), "closed loop unstable at start", root.label(), fc.speedEasMps(),
+            fc.speedTasMps(), fc.mach(), fc.altitudeM(), root.frequencyHz(),
+            String.format(Locale.ROOT, "root %.3f %+.3fi 1/s at the first sweep point", root.realPerS(),
+                root.imagRadPerS())));
+      }
+    }
+    for (FlutterCrossing x : r.crossings()) {
+      FlightCondition fc = x.condition();
+      out.add(new Finding(c.configuration(), "closed-loop " + label(x.kind()), x.branchName(), fc.speedEasMps(),
+          fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
+          String.format(Locale.ROOT, "g = %.3f crossed (closed-loop state space)", x.thresholdG())));
+    }
   }
 
   /** Roots already unstable, or below the damping limit, at the first sweep point. */

@@ -21,15 +21,16 @@ import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FlutterMethodKind;
 
 /**
- * Runs the open-loop analysis of every configuration of a case: divergence (direct and confirmed
- * over the sweep) and the flutter sweep with refined crossings. Configurations run in parallel on
+ * Runs the analysis of every configuration of a case: divergence (direct and confirmed over the
+ * sweep), the open-loop flutter sweep with refined crossings and, when the case has a loop, the
+ * loop margins at every point and the closed-loop eigenvalues with their refined onsets. Configurations run in parallel on
  * the given number of threads; each analysis is sequential along its path (continuation).
  */
-public final class OpenLoopSweep {
+public final class CaseSweep {
   private final int threads;
 
   /** @param threads worker threads, &gt;= 1 */
-  public OpenLoopSweep(int threads) {
+  public CaseSweep(int threads) {
     if (threads < 1) {
       throw new IllegalArgumentException("threads must be >= 1, got " + threads);
     }
@@ -83,7 +84,14 @@ public final class OpenLoopSweep {
     FlutterSolution flutter = method.solve(system, path, analysisCase.options());
     double[] f = model.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).toArray();
     double tasDiv = divergence.speedTasMps(path.at(0).densityKgPerM3());
+    ServoResult servo = null;
+    if (analysisCase.loop() != null) {
+      List<ServoPoint> margins = ServoMargins.withDefaults().along(model, c, analysisCase.loop(), path, flutter);
+      ClosedLoopResult closed = new ClosedLoopSweep().analyse(model, c, analysisCase.loop(), path, flutter,
+          analysisCase.options());
+      servo = new ServoResult(margins, closed);
+    }
     return new ConfigurationResult(c.name(), model.modes().modeNames(), f, system.aero().description(),
-        divergence, confirmed, tasDiv, flutter, (System.nanoTime() - start) * 1e-9);
+        divergence, confirmed, tasDiv, flutter, (System.nanoTime() - start) * 1e-9, servo);
   }
 }

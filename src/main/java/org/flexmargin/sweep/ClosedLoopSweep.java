@@ -1,0 +1,257 @@
+package org.flexmargin.sweep;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.flexmargin.aero.RationalFit;
+import org.flexmargin.aero.RogerApproximation;
+import org.flexmargin.ase.RationalAerodynamics;
+import org.flexmargin.ase.ServoLoop;
+import org.flexmargin.atmosphere.FlightCondition;
+import org.flexmargin.flutter.BranchCurve;
+import org.flexmargin.flutter.CrossingKind;
+import org.flexmargin.flutter.FlutterCrossing;
+import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.loop.Eigenvalues;
+import org.flexmargin.model.AnalysisOptions;
+import org.flexmargin.model.Configuration;
+import org.flexmargin.model.ElasticMode;
+import org.flexmargin.model.LoopSpec;
+
+/**
+ * Closed-loop (aeroservoelastic) eigenvalues along the sweep, and the speeds at which a
+ * closed-loop root crosses g = 0 or the damping limit, refined as roots.
+ *
+ * <p>The elastic aerodynamics are approximated once per configuration in Roger's form (four lag
+ * roots over the reduced-frequency range the sweep needs; the fit error is reported); delays
+ * are Pade approximations of the loop's order. At each grid point all closed-loop eigenvalues are
+ * computed; roots are followed from point to point by nearest-neighbour matching, and a sign
+ * change of 2 Re(s) - g_level |Im(s)| on a followed root is refined by Brent's method on the path
+ * parameter, re-solving at intermediate conditions and taking the root nearest the linear
+ * interpolation of the bracket. Roots are labelled with the open-loop root (p-k structural roots,
+ * rigid short period) nearest them, else "rigid body + loop" below half the first elastic
+ * frequency and "control loop" above. Stateless and thread-safe.
+ */
+public final class ClosedLoopSweep {
+  /** Lag roots of the rational approximation. */
+  public static final int LAG_COUNT = 4;
+
+  private static final int BRENT_MAX_EVALUATIONS = 60;
+  private static final double LABEL_DISTANCE = 0.3;
+
+  /**
+   * @param model configuration model
+   * @param configuration configuration (rigid body)
+   * @param loop loop
+   * @param path sweep path
+   * @param openLoop open-loop p-k solution on the same path (labels)
+   * @param options damping limit and tolerances
+   * @return closed-loop roots and crossings
+   */
+  public ClosedLoopResult analyse(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      PlannedPath path, FlutterSolution openLoop, AnalysisOptions options) {
+    double fmax = model.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).max().orElse(1);
+    double vmin = Double.MAX_VALUE;
+    for (int p = 0; p < path.gridPoints(); p++) {
+      vmin = Math.min(vmin, path.at(p).speedTasMps());
+    }
+    double b = model.system().aero().referenceSemichordM();
+    double kMax = Math.min(model.system().aero().maxReducedFrequency(),
+        Math.max(0.5, 1.5 * 2 * Math.PI * fmax * b / vmin));
+    RationalFit fit = RogerApproximation.fit(model.system().aero(), kMax, LAG_COUNT);
+    RationalAerodynamics rational = RationalAerodynamics.of(fit);
+    List<String> warnings = new ArrayList<>(fit.warnings());
+    int np = path.gridPoints();
+    double[][] re = new double[np][];
+    double[][] im = new double[np][];
+    int[] solves = {0};
+    for (int p = 0; p < np; p++) {
+      Eigenvalues e = eigenvaluesAt(model, configuration, loop, path.at(p), rational, solves);
+      re[p] = e.real();
+      im[p] = e.imag();
+    }
+    int n = re[0].length;
+    // order[p][j]: index at point p of branch j (nearest-neighbour continuation)
+    int[][] order = new int[np][n];
+    for (int j = 0; j < n; j++) {
+      order[0][j] = j;
+    }
+    for (int p = 1; p < np; p++) {
+      order[p] = match(re[p - 1], im[p - 1], order[p - 1], re[p], im[p]);
+    }
+    List<ClosedLoopPoint> points = new ArrayList<>();
+    for (int p = 0; p < np; p++) {
+      FlightCondition fc = path.at(p);
+      double[] sp = ServoMargins.loopAt(model, configuration, loop, fc).plant().shortPeriodRoots();
+      List<ClosedLoopRoot> roots = new ArrayList<>();
+      for (int i = 0; i < n; i++) {
+        if (im[p][i] >= 0) {
+          roots.add(new ClosedLoopRoot(re[p][i], im[p][i], label(re[p][i], im[p][i], openLoop, p, sp)));
+        }
+      }
+      roots.sort(Comparator.comparingDouble(ClosedLoopRoot::imagRadPerS));
+      points.add(new ClosedLoopPoint(p, fc, roots, n));
+    }
+    List<FlutterCrossing> crossings = new ArrayList<>();
+    double[] levels = options.dampingLimitG() > 0 ? new double[] {0.0, -options.dampingLimitG()} : new double[] {0.0};
+    for (int j = 0; j < n; j++) {
+      for (int p = 0; p + 1 < np; p++) {
+        int ia = order[p][j];
+        int ib = order[p + 1][j];
+        if (im[p][ia] < 0) {
+          continue;
+        }
+        for (double level : levels) {
+          double fa = crossing(re[p][ia], im[p][ia], level);
+          double fb = crossing(re[p + 1][ib], im[p + 1][ib], level);
+          if ((fa < 0 && fb >= 0) || (fa > 0 && fb <= 0)) {
+            String name = label(re[p][ia], im[p][ia], openLoop, p,
+                ServoMargins.loopAt(model, configuration, loop, path.at(p)).plant().shortPeriodRoots());
+            crossings.add(refine(model, configuration, loop, path, rational, p, re[p][ia], im[p][ia],
+                re[p + 1][ib], im[p + 1][ib], fa < 0, level, j, name, options, solves));
+          }
+        }
+      }
+    }
+    crossings.sort(Comparator.comparingDouble(FlutterCrossing::pathParameter));
+    String fitText = String.format(Locale.ROOT,
+        "Roger approximation, %d lag roots, k from 0 to %.3f, worst element error %.2f %%",
+        fit.lagCount(), kMax, 100 * fit.error().worstRelativeError());
+    ServoLoop first = ServoMargins.loopAt(model, configuration, loop, path.at(0));
+    List<String> assumptions = new ArrayList<>(first.plant().assumptions());
+    assumptions.add("closed-loop eigenvalues use the rational approximation of the elastic forces and Pade "
+        + "approximations (order " + loop.padeOrder() + ") of the delay and the zero-order hold");
+    return new ClosedLoopResult(points, crossings, fitText, solves[0], warnings, assumptions);
+  }
+
+  private static Eigenvalues eigenvaluesAt(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      FlightCondition fc, RationalAerodynamics rational, int[] solves) {
+    solves[0]++;
+    return ServoMargins.loopAt(model, configuration, loop, fc).closedLoop(rational).eigenvalues();
+  }
+
+  private static double crossing(double re, double im, double level) {
+    return 2 * re - level * Math.abs(im);
+  }
+
+  /** Greedy nearest-neighbour assignment of the new eigenvalues to the branches. */
+  private static int[] match(double[] reA, double[] imA, int[] orderA, double[] reB, double[] imB) {
+    int n = orderA.length;
+    int[] out = new int[n];
+    boolean[] rowDone = new boolean[n];
+    boolean[] colDone = new boolean[n];
+    double[][] d = new double[n][n];
+    for (int j = 0; j < n; j++) {
+      int a = orderA[j];
+      double scale = 1 + Math.hypot(reA[a], imA[a]);
+      for (int c = 0; c < n; c++) {
+        d[j][c] = Math.hypot(reB[c] - reA[a], imB[c] - imA[a]) / scale;
+      }
+    }
+    for (int step = 0; step < n; step++) {
+      double best = Double.MAX_VALUE;
+      int bj = -1;
+      int bc = -1;
+      for (int j = 0; j < n; j++) {
+        if (rowDone[j]) {
+          continue;
+        }
+        for (int c = 0; c < n; c++) {
+          if (!colDone[c] && d[j][c] < best) {
+            best = d[j][c];
+            bj = j;
+            bc = c;
+          }
+        }
+      }
+      out[bj] = bc;
+      rowDone[bj] = true;
+      colDone[bc] = true;
+    }
+    return out;
+  }
+
+  /** Nearest open-loop root: p-k structural root at grid point p, or the rigid short period. */
+  private static String label(double re, double im, FlutterSolution openLoop, int p, double[] shortPeriod) {
+    double lowestStructural = Double.MAX_VALUE;
+    for (BranchCurve b : openLoop.branches()) {
+      if (p < b.size() && b.converged()[p]) {
+        lowestStructural = Math.min(lowestStructural, 2 * Math.PI * b.frequencyHz()[p]);
+      }
+    }
+    // no open-loop root near: a rigid-body root moved by the loop if well below the first elastic
+    // mode, else a root of the loop's own dynamics (actuator, filters, aerodynamic lags)
+    String best = Math.hypot(re, im) < 0.5 * lowestStructural ? "rigid body + loop" : "control loop";
+    double bestDistance = Double.MAX_VALUE;
+    for (BranchCurve b : openLoop.branches()) {
+      if (p >= b.size() || !b.converged()[p]) {
+        continue;
+      }
+      double w = 2 * Math.PI * b.frequencyHz()[p];
+      double z = Math.max(-0.99, Math.min(0.99, b.dampingRatio()[p]));
+      double sr = -z * w;
+      double si = w * Math.sqrt(1 - z * z);
+      double dist = Math.hypot(re - sr, im - si) / Math.max(Math.hypot(sr, si), 1e-9);
+      if (dist < LABEL_DISTANCE && dist < bestDistance) {
+        bestDistance = dist;
+        best = b.name();
+      }
+    }
+    for (int k = 0; k < 2; k++) {
+      double sr = shortPeriod[2 * k];
+      double si = Math.abs(shortPeriod[2 * k + 1]);
+      double dist = Math.hypot(re - sr, im - si) / Math.max(Math.hypot(sr, si), 1e-9);
+      if (dist < LABEL_DISTANCE && dist < bestDistance) {
+        bestDistance = dist;
+        best = "short period";
+      }
+    }
+    return best;
+  }
+
+  private static FlutterCrossing refine(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      PlannedPath path, RationalAerodynamics rational, int p, double reA, double imA, double reB, double imB,
+      boolean rising, double level, int branch, String name, AnalysisOptions options, int[] solves) {
+    double dv = Math.abs(path.at(p + 1).speedEasMps() - path.at(p).speedEasMps());
+    double abs = Math.min(0.25, options.onsetSpeedToleranceMps() / Math.max(dv, 1e-9));
+    double[] at = new double[2];
+    BrentSolver solver = new BrentSolver(1e-14, abs);
+    double t;
+    int evaluations;
+    try {
+      t = solver.solve(BRENT_MAX_EVALUATIONS, tt -> {
+        nearest(eigenvaluesAt(model, configuration, loop, path.at(tt), rational, solves), reA, imA, reB, imB,
+            tt - p, at);
+        return crossing(at[0], at[1], level);
+      }, p, p + 1);
+      evaluations = solver.getEvaluations();
+    } catch (TooManyEvaluationsException e) {
+      t = p + 0.5;
+      evaluations = BRENT_MAX_EVALUATIONS;
+    }
+    nearest(eigenvaluesAt(model, configuration, loop, path.at(t), rational, solves), reA, imA, reB, imB, t - p, at);
+    CrossingKind kind = level == 0
+        ? (rising ? CrossingKind.FLUTTER_ONSET : CrossingKind.FLUTTER_RECOVERY)
+        : (rising ? CrossingKind.DAMPING_BELOW_LIMIT : CrossingKind.DAMPING_ABOVE_LIMIT);
+    return new FlutterCrossing(branch, name, kind, t, path.at(t), Math.abs(at[1]) / (2 * Math.PI), level,
+        evaluations, abs);
+  }
+
+  /** The eigenvalue nearest the linear interpolation of the bracket at fraction w. */
+  private static void nearest(Eigenvalues e, double reA, double imA, double reB, double imB, double w, double[] out) {
+    double pr = reA + w * (reB - reA);
+    double pi = imA + w * (imB - imA);
+    double best = Double.MAX_VALUE;
+    for (int i = 0; i < e.real().length; i++) {
+      double d = Math.hypot(e.real()[i] - pr, e.imag()[i] - pi);
+      if (d < best) {
+        best = d;
+        out[0] = e.real()[i];
+        out[1] = e.imag()[i];
+      }
+    }
+  }
+}

@@ -1,0 +1,116 @@
+package org.flexmargin.sweep;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.flexmargin.ase.AircraftPlant;
+import org.flexmargin.ase.FlightControlLaw;
+import org.flexmargin.ase.ServoLoop;
+import org.flexmargin.atmosphere.FlightCondition;
+import org.flexmargin.flutter.BranchCurve;
+import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.loop.Eigenvalues;
+import org.flexmargin.loop.LoopMargins;
+import org.flexmargin.loop.MarginOptions;
+import org.flexmargin.model.Configuration;
+import org.flexmargin.model.LoopSpec;
+
+/**
+ * Broken-loop margins of a configuration at flight conditions along the sweep path, from the
+ * exact frequency-domain loop ({@link ServoLoop#brokenLoop()}). The open-loop p-k roots at each
+ * grid point seed the frequency grid, so that no lightly damped structural peak is stepped over.
+ * Stateless and thread-safe.
+ */
+public final class ServoMargins {
+  private final LoopMargins margins;
+
+  /** @param options margin search options */
+  public ServoMargins(MarginOptions options) {
+    this.margins = new LoopMargins(options);
+  }
+
+  /** @return margin search with default options */
+  public static ServoMargins withDefaults() {
+    return new ServoMargins(MarginOptions.defaults());
+  }
+
+  /**
+   * The loop at one flight condition.
+   *
+   * @param model configuration model
+   * @param configuration configuration (rigid body)
+   * @param loop loop specification
+   * @param condition flight condition
+   * @return the servo loop
+   */
+  public static ServoLoop loopAt(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      FlightCondition condition) {
+    AircraftPlant plant = new AircraftPlant(model.modes(), model.system().structure(), model.system().aero(),
+        configuration.rigidBody(), loop.sensors(), condition);
+    return new ServoLoop(plant, FlightControlLaw.of(loop, condition.dynamicPressurePa()));
+  }
+
+  /**
+   * Margins at one point.
+   *
+   * @param servo the loop at the point
+   * @param seeds poles used to place grid points (structural roots)
+   * @param maxFrequencyHz top of the analysed band (Hz)
+   * @return the margins
+   */
+  public org.flexmargin.loop.LoopMarginResult at(ServoLoop servo, Eigenvalues seeds, double maxFrequencyHz) {
+    return margins.analyse(servo.brokenLoop(), 2 * Math.PI * MIN_FREQUENCY_HZ, 2 * Math.PI * maxFrequencyHz, seeds);
+  }
+
+  /** Lowest analysed frequency (Hz). */
+  public static final double MIN_FREQUENCY_HZ = 0.01;
+
+  /**
+   * Margins at every grid point.
+   *
+   * @param model configuration model
+   * @param configuration configuration
+   * @param loop loop
+   * @param path sweep path
+   * @param openLoop open-loop p-k solution along the same path (for grid seeds)
+   * @return one point per grid point
+   */
+  public List<ServoPoint> along(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      PlannedPath path, FlutterSolution openLoop) {
+    double maxHz = bandTopHz(model);
+    List<ServoPoint> points = new ArrayList<>();
+    for (int p = 0; p < path.gridPoints(); p++) {
+      FlightCondition fc = path.at(p);
+      ServoLoop servo = loopAt(model, configuration, loop, fc);
+      points.add(new ServoPoint(p, fc, at(servo, seeds(openLoop, p), maxHz)));
+    }
+    return points;
+  }
+
+  /** @return 1.5 x the highest in-vacuo mode frequency, at least 50 Hz */
+  public static double bandTopHz(ConfigurationModel model) {
+    double fmax = 0;
+    for (var m : model.modes().modes()) {
+      fmax = Math.max(fmax, m.frequencyHz());
+    }
+    return Math.max(50.0, 1.5 * fmax);
+  }
+
+  /** Open-loop p-k roots at grid point p as seed poles (s = -zeta w + i w sqrt(1 - zeta^2)). */
+  static Eigenvalues seeds(FlutterSolution openLoop, int p) {
+    List<double[]> roots = new ArrayList<>();
+    for (BranchCurve b : openLoop.branches()) {
+      if (p < b.size() && b.converged()[p]) {
+        double w = 2 * Math.PI * b.frequencyHz()[p];
+        double z = Math.max(-0.99, Math.min(0.99, b.dampingRatio()[p]));
+        roots.add(new double[] {-z * w, w * Math.sqrt(1 - z * z)});
+      }
+    }
+    double[] re = new double[roots.size()];
+    double[] im = new double[roots.size()];
+    for (int i = 0; i < roots.size(); i++) {
+      re[i] = roots.get(i)[0];
+      im[i] = roots.get(i)[1];
+    }
+    return new Eigenvalues(re, im);
+  }
+}
