@@ -17,6 +17,15 @@ import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
 import org.flexmargin.flutter.SolverDiagnostics;
+import org.flexmargin.loop.DiskMargin;
+import org.flexmargin.loop.GainCrossover;
+import org.flexmargin.loop.LoopMarginResult;
+import org.flexmargin.loop.PhaseCrossover;
+import org.flexmargin.sweep.ClosedLoopPoint;
+import org.flexmargin.sweep.ClosedLoopResult;
+import org.flexmargin.sweep.ClosedLoopRoot;
+import org.flexmargin.sweep.ServoPoint;
+import org.flexmargin.sweep.ServoResult;
 import org.flexmargin.model.InputFile;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
@@ -79,6 +88,9 @@ public final class ResultFiles {
     writeFindingsCsv(folder.resolve("findings.csv"), findings);
     for (ConfigurationResult c : result.configurations()) {
       writeBranchesCsv(folder.resolve("branches-" + fileSafe(c.configuration()) + ".csv"), c.flutter());
+      if (c.servo() != null) {
+        writeMarginsCsv(folder.resolve("margins-" + fileSafe(c.configuration()) + ".csv"), c.servo());
+      }
     }
   }
 
@@ -143,6 +155,9 @@ public final class ResultFiles {
     diag.put("unconverged_roots", dg.unconvergedRoots());
     ArrayNode warn = fl.putArray("warnings");
     s.warnings().forEach(warn::add);
+    if (c.servo() != null) {
+      loop(o.putObject("loop"), c.servo());
+    }
     ArrayNode br = fl.putArray("branches");
     for (BranchCurve b : s.branches()) {
       ObjectNode bo = br.addObject();
@@ -156,6 +171,105 @@ public final class ResultFiles {
       arr(bo, "reduced_frequency", b.reducedFrequency());
     }
     return o;
+  }
+
+  private static void loop(ObjectNode o, ServoResult servo) {
+    ClosedLoopResult cl = servo.closedLoop();
+    o.put("rational_approximation", cl.fitDescription());
+    o.put("closed_loop_eigen_solves", cl.eigenSolves());
+    ArrayNode notes = o.putArray("assumptions");
+    cl.assumptions().forEach(notes::add);
+    ArrayNode warn = o.putArray("warnings");
+    cl.warnings().forEach(warn::add);
+    ArrayNode cross = o.putArray("closed_loop_crossings");
+    for (FlutterCrossing x : cl.crossings()) {
+      ObjectNode xo = cross.addObject();
+      xo.put("root", x.branchName());
+      xo.put("kind", x.kind().name().toLowerCase(Locale.ROOT));
+      num(xo, "threshold_g", x.thresholdG());
+      num(xo, "speed_eas_mps", x.condition().speedEasMps());
+      num(xo, "speed_tas_mps", x.condition().speedTasMps());
+      num(xo, "mach", x.condition().mach());
+      num(xo, "frequency_hz", x.frequencyHz());
+      xo.put("evaluations", x.evaluations());
+    }
+    ArrayNode pts = o.putArray("points");
+    for (int i = 0; i < servo.points().size(); i++) {
+      ServoPoint p = servo.points().get(i);
+      LoopMarginResult m = p.margins();
+      ObjectNode po = pts.addObject();
+      num(po, "speed_eas_mps", p.condition().speedEasMps());
+      num(po, "speed_tas_mps", p.condition().speedTasMps());
+      num(po, "mach", p.condition().mach());
+      num(po, "dynamic_pressure_pa", p.condition().dynamicPressurePa());
+      ArrayNode gc = po.putArray("gain_crossovers");
+      for (GainCrossover g : m.gainCrossovers()) {
+        ObjectNode go = gc.addObject();
+        num(go, "frequency_hz", g.frequencyHz());
+        num(go, "phase_margin_deg", g.phaseMarginDeg());
+        num(go, "delay_margin_s", g.delayMarginS());
+      }
+      ArrayNode pc = po.putArray("phase_crossovers");
+      for (PhaseCrossover x : m.phaseCrossovers()) {
+        ObjectNode xo = pc.addObject();
+        num(xo, "frequency_hz", x.frequencyHz());
+        num(xo, "gain_margin_db", x.gainMarginDb());
+        xo.put("direction", x.direction().name().toLowerCase(Locale.ROOT));
+      }
+      DiskMargin d = m.diskMargin();
+      ObjectNode dm = po.putObject("disk_margin");
+      num(dm, "alpha", d.alpha());
+      num(dm, "gain_lower_db", d.gainLowerDb());
+      num(dm, "gain_upper_db", d.gainUpperDb());
+      num(dm, "phase_margin_deg", d.phaseMarginDeg());
+      num(dm, "frequency_hz", d.frequencyHz());
+      num(po, "peak_gain_db", m.peakGain().magnitudeDb());
+      num(po, "peak_gain_frequency_hz", m.peakGain().frequencyHz());
+      po.put("margin_grid_points", m.diagnostics().gridPoints());
+      po.put("unresolved_intervals", m.diagnostics().unresolvedIntervals());
+      ClosedLoopPoint cp = cl.points().get(i);
+      num(po, "closed_loop_max_real_per_s", cp.maxRealPart());
+      ArrayNode roots = po.putArray("closed_loop_roots");
+      for (ClosedLoopRoot r : cp.roots()) {
+        ObjectNode ro = roots.addObject();
+        ro.put("label", r.label());
+        num(ro, "real_per_s", r.realPerS());
+        num(ro, "imag_rad_per_s", r.imagRadPerS());
+        num(ro, "frequency_hz", r.frequencyHz());
+        num(ro, "damping_ratio", r.dampingRatio());
+      }
+    }
+  }
+
+  private static void writeMarginsCsv(Path file, ServoResult servo) throws IOException {
+    try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+      w.write("point,speed_eas_mps,speed_tas_mps,mach,dynamic_pressure_pa,min_phase_margin_deg,"
+          + "phase_margin_frequency_hz,min_gain_increase_margin_db,gain_increase_frequency_hz,"
+          + "gain_reduction_margin_db,gain_reduction_frequency_hz,delay_margin_s,disk_margin_alpha,"
+          + "disk_gain_margin_db,disk_phase_margin_deg,peak_gain_db,peak_gain_frequency_hz,"
+          + "closed_loop_max_real_per_s\n");
+      for (int i = 0; i < servo.points().size(); i++) {
+        ServoPoint p = servo.points().get(i);
+        LoopMarginResult m = p.margins();
+        var pm = m.governingPhaseMargin();
+        var gi = m.governingGainIncreaseMargin();
+        var gr = m.governingGainReductionMargin();
+        var dm = m.governingDelayMargin();
+        w.write(String.join(",", Integer.toString(i), fmt(p.condition().speedEasMps()),
+            fmt(p.condition().speedTasMps()), fmt(p.condition().mach()), fmt(p.condition().dynamicPressurePa()),
+            fmt(pm.map(GainCrossover::phaseMarginDeg).orElse(Double.NaN)),
+            fmt(pm.map(GainCrossover::frequencyHz).orElse(Double.NaN)),
+            fmt(gi.map(PhaseCrossover::gainMarginDb).orElse(Double.NaN)),
+            fmt(gi.map(PhaseCrossover::frequencyHz).orElse(Double.NaN)),
+            fmt(gr.map(PhaseCrossover::gainMarginDb).orElse(Double.NaN)),
+            fmt(gr.map(PhaseCrossover::frequencyHz).orElse(Double.NaN)),
+            fmt(dm.map(GainCrossover::delayMarginS).orElse(Double.NaN)),
+            fmt(m.diskMargin().alpha()), fmt(m.diskMargin().gainUpperDb()), fmt(m.diskMargin().phaseMarginDeg()),
+            fmt(m.peakGain().magnitudeDb()), fmt(m.peakGain().frequencyHz()),
+            fmt(servo.closedLoop().points().get(i).maxRealPart())));
+        w.write('\n');
+      }
+    }
   }
 
   private static void num(ObjectNode o, String key, double v) {
