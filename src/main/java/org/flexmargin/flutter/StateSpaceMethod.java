@@ -86,8 +86,15 @@ import org.flexmargin.numerics.ComplexEigenResult;
  *       reported as branches; if one is unstable at a grid point, the solution warns.
  *   <li><b>Crossings</b>: sign changes of 2 Re(s) - g_level |Im(s)| (g_level = 0 and minus the
  *       damping limit) on the grid are refined by Brent's method on the path parameter,
- *       re-solving the eigenproblem and matching from the left grid point's roots. A real root
- *       crossing zero (divergence) is reported as an onset at zero frequency.
+ *       re-solving the eigenproblem and matching from the left grid point's roots. A tracked
+ *       branch whose real root crosses zero gives an onset at zero frequency.
+ *   <li><b>Static divergence</b>: usually the real root that crosses zero at the divergence
+ *       pressure is not a tracked branch (it grows out of the aerodynamic lag roots while the
+ *       structural pairs stay oscillating). Every sign change of det A between grid points that
+ *       no branch accounts for is refined by Brent's method on the continuous function
+ *       (-1)^(number of negative real roots) &times; (distance of the nearest real root from 0)
+ *       and reported in the warnings with its speed and dynamic pressure (the result types have
+ *       no crossing kind for it yet).
  * </ul>
  *
  * <p>Diagnostics: {@code fullEigenSolves} counts eigen-decompositions, {@code iterations} their QR
