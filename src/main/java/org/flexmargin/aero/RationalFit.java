@@ -7,7 +7,8 @@ import org.flexmargin.model.InvalidInputException;
 
 /**
  * A rational function approximation of the generalized aerodynamic forces in Roger's form (K. L.
- * Roger, "Airplane math modeling methods for active control design", AGARD-CP-228, 1977; survey in
+ * Roger, "Airplane math modeling methods for active control design", AGARD-CP-228, 1977, title from
+ * memory; survey in
  * Tiffany &amp; Adams, NASA TP-2776, 1988):
  *
  * <pre>
@@ -98,6 +99,9 @@ public record RationalFit(
     }
     if (!(errorThreshold > 0)) {
       throw new InvalidInputException("rational_fit.error_threshold", "a value > 0", String.valueOf(errorThreshold));
+    }
+    if (warnings == null) {
+      throw new InvalidInputException("rational_fit.warnings", "a list (may be empty)", "none");
     }
     warnings = List.copyOf(warnings);
     if (sourceDescription == null) {

@@ -11,7 +11,8 @@ import org.flexmargin.model.InvalidInputException;
 
 /**
  * Least-squares rational function approximation of generalized aerodynamic forces in Roger's form
- * (K. L. Roger, "Airplane math modeling methods for active control design", AGARD-CP-228, 1977;
+ * (K. L. Roger, "Airplane math modeling methods for active control design", AGARD-CP-228, 1977,
+ * title from memory;
  * the least-squares formulation and the usual constraints are surveyed by Tiffany &amp; Adams,
  * "Nonlinear programming extensions to rational function approximation methods for unsteady
  * aerodynamic forces", NASA TP-2776, 1988):
