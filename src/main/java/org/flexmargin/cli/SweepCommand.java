@@ -87,7 +87,7 @@ final class SweepCommand implements Callable<Integer> {
         out.printf(Locale.ROOT,
             "%s: %s method, %d root solves, %.2f iterations per root, %d step halvings, worst residual %.1e, "
                 + "lowest MAC %.3f, %d unconverged, %.2f s%n",
-            r.configuration(), r.flutter().method().name().toLowerCase(Locale.ROOT).replace("pk", "p-k"),
+            r.configuration(), r.flutter().method().label(),
             d.rootSolves(), d.rootSolves() > 0 ? (double) d.iterations() / d.rootSolves() : 0.0,
             d.stepHalvings(), d.maxRelativeResidual(), d.minMac(), d.unconvergedRoots(), r.elapsedSeconds());
         for (String w : r.flutter().warnings()) {

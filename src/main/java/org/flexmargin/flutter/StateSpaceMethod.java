@@ -101,9 +101,6 @@ import org.flexmargin.numerics.ComplexEigenResult;
  * sweeps, {@code rootSolves} the tracked roots accepted, {@code maxRelativeResidual} the worst
  * eigen residual ||A v - s v|| / max|A_ij|, {@code minMac} the lowest step MAC.
  *
- * <p>The result's method is reported as {@link FlutterMethodKind#PK} until the enumeration has a
- * value of its own for this method; {@link FlutterSolution#warnings()} names the method.
- *
  * <p>Immutable and thread-safe; every call builds its own workspace.
  */
 public final class StateSpaceMethod implements FlutterMethod {
@@ -335,7 +332,8 @@ public final class StateSpaceMethod implements FlutterMethod {
     crossings.sort(Comparator.comparingDouble(FlutterCrossing::pathParameter));
     tr.staticCrossings(spectra, roots);
     tr.finishWarnings();
-    return new FlutterSolution(FlutterMethodKind.PK, curves, crossings, tr.counters.toDiagnostics(), warnings);
+    return new FlutterSolution(FlutterMethodKind.STATE_SPACE, curves, crossings, tr.counters.toDiagnostics(),
+        warnings);
   }
 
   private static BranchCurve curve(String name, FlightPath path, Root[][] roots, int j, double semichordM) {

@@ -653,7 +653,8 @@ public final class CaseReader {
       method = switch (m.text()) {
         case "pk" -> FlutterMethodKind.PK;
         case "k" -> FlutterMethodKind.K;
-        default -> throw m.fail("\"pk\" or \"k\"", m.describe());
+        case "state_space" -> FlutterMethodKind.STATE_SPACE;
+        default -> throw m.fail("\"pk\", \"k\" or \"state_space\"", m.describe());
       };
     }
     FlutterMethodKind meth = method;

@@ -26,7 +26,7 @@ public record AnalysisOptions(
   /** Validates. */
   public AnalysisOptions {
     if (method == null) {
-      throw new InvalidInputException("method", "pk or k", "nothing");
+      throw new InvalidInputException("method", "pk, k or state_space", "nothing");
     }
     Checks.inRange("damping_limit_g", dampingLimitG, 0.0, 1.0);
     Checks.inRange("convergence_tolerance", convergenceTolerance, 1e-14, 1e-3);

@@ -11,5 +11,19 @@ public enum FlutterMethodKind {
    * k method (V-g): artificial structural damping g needed for harmonic motion at each reduced
    * frequency; the damping is meaningful only where it crosses zero.
    */
-  K
+  K,
+  /**
+   * State-space eigenvalues with the aerodynamics in Roger's rational form (aerodynamic lag
+   * states): the model the closed loop uses, as a cross-check of p-k.
+   */
+  STATE_SPACE;
+
+  /** @return the method's name in reports: "p-k", "k" or "state-space" */
+  public String label() {
+    return switch (this) {
+      case PK -> "p-k";
+      case K -> "k";
+      case STATE_SPACE -> "state-space";
+    };
+  }
 }

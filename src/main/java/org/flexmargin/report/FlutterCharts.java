@@ -345,7 +345,7 @@ public final class FlutterCharts {
 
   /** @return the method in words, e.g. "p-k method" */
   static String methodWords(FlutterMethodKind m) {
-    return m.name().toLowerCase(Locale.ROOT).replace("pk", "p-k") + " method";
+    return m.label() + " method";
   }
 
   private static String unique(String name, Set<String> used) {

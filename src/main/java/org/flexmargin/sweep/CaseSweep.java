@@ -15,6 +15,7 @@ import org.flexmargin.flutter.FlutterMethod;
 import org.flexmargin.flutter.FlutterSolution;
 import org.flexmargin.flutter.KMethod;
 import org.flexmargin.flutter.PkMethod;
+import org.flexmargin.flutter.StateSpaceMethod;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
@@ -80,7 +81,11 @@ public final class CaseSweep {
     DivergenceSolver div = new DivergenceSolver();
     DivergenceResult divergence = div.solve(system);
     OptionalDouble confirmed = div.confirmOnPath(system, path);
-    FlutterMethod method = analysisCase.options().method() == FlutterMethodKind.K ? new KMethod() : new PkMethod();
+    FlutterMethod method = switch (analysisCase.options().method()) {
+      case K -> new KMethod();
+      case STATE_SPACE -> new StateSpaceMethod();
+      default -> new PkMethod();
+    };
     FlutterSolution flutter = method.solve(system, path, analysisCase.options());
     double[] f = model.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).toArray();
     double tasDiv = divergence.speedTasMps(path.at(0).densityKgPerM3());

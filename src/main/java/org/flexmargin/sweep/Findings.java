@@ -37,7 +37,7 @@ public final class Findings {
         out.add(new Finding(c.configuration(), "no divergence", "-", Double.NaN, Double.NaN, Double.NaN,
             sweepStart.altitudeM(), Double.NaN, d.note()));
       }
-      if (c.flutter().method() == FlutterMethodKind.PK) {
+      if (c.flutter().method() != FlutterMethodKind.K) {
         startStatus(out, c, result.analysisCase().options().dampingLimitG(), sweepStart);
       }
       List<FlutterCrossing> crossings = new ArrayList<>(c.flutter().crossings());
@@ -47,7 +47,7 @@ public final class Findings {
         out.add(new Finding(c.configuration(), label(x.kind()), x.branchName(), fc.speedEasMps(),
             fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
             String.format(Locale.ROOT, "g = %.3f crossed (%s)", x.thresholdG(),
-                c.flutter().method().name().toLowerCase(Locale.ROOT).replace("pk", "p-k") + " method")));
+                c.flutter().method().label() + " method")));
       }
       if (c.servo() != null) {
         closedLoop(out, c);

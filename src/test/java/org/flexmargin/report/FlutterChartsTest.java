@@ -18,7 +18,7 @@ import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Findings;
-import org.flexmargin.sweep.OpenLoopSweep;
+import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.SweepResult;
 import org.junit.jupiter.api.BeforeAll;
@@ -39,10 +39,10 @@ class FlutterChartsTest {
   @BeforeAll
   static void solve() {
     AnalysisCase d = CaseReader.read(Path.of("mode-tables/demo/demo-case.json"));
-    demo = new OpenLoopSweep(1).run(d, n -> { });
+    demo = new CaseSweep(1).run(d, n -> { });
     demoFindings = Findings.of(demo, new PlannedPath(d.sweep()).at(0));
     AnalysisCase l = CaseReader.read(Path.of("mode-tables/validation/typical-section-lpw.json"));
-    lpw = new OpenLoopSweep(1).run(l, n -> { });
+    lpw = new CaseSweep(1).run(l, n -> { });
     lpwFindings = Findings.of(lpw, new PlannedPath(l.sweep()).at(0));
   }
 
@@ -190,7 +190,7 @@ class FlutterChartsTest {
     AnalysisCase l = lpw.analysisCase();
     AnalysisCase k = new AnalysisCase(l.format(), l.name(), l.description(), l.configurations(), l.sweep(),
         l.options().withMethod(org.flexmargin.model.FlutterMethodKind.K), l.inputs());
-    SweepResult r = new OpenLoopSweep(1).run(k, n -> { });
+    SweepResult r = new CaseSweep(1).run(k, n -> { });
     for (ReportChart chart : FlutterCharts.of(r, r.configurations().get(0), SpeedAxisUnit.METRES_PER_SECOND)) {
       byte[] png = chart.png();
       assertTrue(png.length > 1000, "drawn");

@@ -33,7 +33,7 @@ import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.model.TypicalSection;
 import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Findings;
-import org.flexmargin.sweep.OpenLoopSweep;
+import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.SweepResult;
 import org.junit.jupiter.api.BeforeAll;
@@ -67,7 +67,7 @@ class ReportWriterTest {
   }
 
   static Report write(AnalysisCase c, String name) throws IOException {
-    SweepResult result = new OpenLoopSweep(1).run(c, n -> { });
+    SweepResult result = new CaseSweep(1).run(c, n -> { });
     List<Finding> findings = Findings.of(result, new PlannedPath(c.sweep()).at(0));
     Path folder = Files.createDirectories(tmp.resolve(name));
     ResultFiles.write(folder, result, findings, "test");
