@@ -45,6 +45,41 @@ public record BranchCurve(
     converged = converged.clone();
   }
 
+  /**
+   * Curve of branch j from tracked roots at the grid points of a path.
+   *
+   * @param name branch name
+   * @param path the path (grid point p is parameter p)
+   * @param roots roots[p][j]
+   * @param j branch index
+   * @param semichordM reference semichord for the reduced frequency (m)
+   * @return the curve; unconverged points are NaN
+   */
+  static BranchCurve of(String name, FlightPath path, FlutterWorkspace.Root[][] roots, int j, double semichordM) {
+    int np = roots.length;
+    double[] t = new double[np];
+    double[] eas = new double[np];
+    double[] tas = new double[np];
+    double[] f = new double[np];
+    double[] g = new double[np];
+    double[] z = new double[np];
+    double[] k = new double[np];
+    boolean[] ok = new boolean[np];
+    for (int p = 0; p < np; p++) {
+      org.flexmargin.atmosphere.FlightCondition fc = path.at(p);
+      FlutterWorkspace.Root r = roots[p][j];
+      t[p] = p;
+      eas[p] = fc.speedEasMps();
+      tas[p] = fc.speedTasMps();
+      ok[p] = r.converged();
+      f[p] = ok[p] ? r.frequencyHz() : Double.NaN;
+      g[p] = ok[p] ? r.dampingG() : Double.NaN;
+      z[p] = ok[p] ? r.dampingRatio() : Double.NaN;
+      k[p] = ok[p] && fc.speedTasMps() > 0 ? Math.abs(r.si()) * semichordM / fc.speedTasMps() : Double.NaN;
+    }
+    return new BranchCurve(name, t, eas, tas, f, g, z, k, ok);
+  }
+
   /** @return number of points */
   public int size() {
     return pathParameter.length;

@@ -13,6 +13,7 @@ import org.flexmargin.model.FlutterMethodKind;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.numerics.ComplexEigen;
 import org.flexmargin.numerics.ComplexEigenResult;
+import org.flexmargin.numerics.GreedyAssignment;
 
 /**
  * The k method (V-g method; Smilg &amp; Wasserman, USAF ACTR-4798, 1942; Bisplinghoff, Ashley
@@ -177,29 +178,15 @@ public final class KMethod implements FlutterMethod {
         mac[j][c] = FlutterWorkspace.mac(prev[j], cols[c]);
       }
     }
-    int[] match = new int[n];
-    boolean[] rowDone = new boolean[n];
-    boolean[] colDone = new boolean[n];
-    for (int step = 0; step < n; step++) {
-      double best = -1;
-      int bj = -1;
-      int bc = -1;
-      for (int j = 0; j < n; j++) {
-        if (rowDone[j]) {
-          continue;
-        }
-        for (int c = 0; c < n; c++) {
-          if (!colDone[c] && mac[j][c] > best) {
-            best = mac[j][c];
-            bj = j;
-            bc = c;
-          }
-        }
+    double[][] cost = new double[n][n];
+    for (int j = 0; j < n; j++) {
+      for (int c = 0; c < n; c++) {
+        cost[j][c] = -mac[j][c];
       }
-      match[bj] = bc;
-      rowDone[bj] = true;
-      colDone[bc] = true;
-      counters.minMac = Math.min(counters.minMac, best);
+    }
+    int[] match = GreedyAssignment.minimumCost(cost);
+    for (int j = 0; j < n; j++) {
+      counters.minMac = Math.min(counters.minMac, mac[j][match[j]]);
     }
     return match;
   }

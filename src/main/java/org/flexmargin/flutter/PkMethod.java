@@ -89,7 +89,7 @@ public final class PkMethod implements FlutterMethod {
     }
     List<BranchCurve> curves = new ArrayList<>();
     for (int j = 0; j < n; j++) {
-      curves.add(curve(names.get(j), path, roots, j, system.aero().referenceSemichordM()));
+      curves.add(BranchCurve.of(names.get(j), path, roots, j, system.aero().referenceSemichordM()));
     }
     List<FlutterCrossing> crossings = new ArrayList<>();
     double[] levels = options.dampingLimitG() > 0
@@ -300,31 +300,5 @@ public final class PkMethod implements FlutterMethod {
     }
     return new FlutterCrossing(branch, name, kind, t, path.at(t), at.frequencyHz(), level, evaluations,
         absAccuracy);
-  }
-
-  private static BranchCurve curve(
-      String name, FlightPath path, Root[][] roots, int j, double semichordM) {
-    int np = roots.length;
-    double[] t = new double[np];
-    double[] eas = new double[np];
-    double[] tas = new double[np];
-    double[] f = new double[np];
-    double[] g = new double[np];
-    double[] z = new double[np];
-    double[] k = new double[np];
-    boolean[] ok = new boolean[np];
-    for (int p = 0; p < np; p++) {
-      FlightCondition fc = path.at(p);
-      Root r = roots[p][j];
-      t[p] = p;
-      eas[p] = fc.speedEasMps();
-      tas[p] = fc.speedTasMps();
-      ok[p] = r.converged();
-      f[p] = ok[p] ? r.frequencyHz() : Double.NaN;
-      g[p] = ok[p] ? r.dampingG() : Double.NaN;
-      z[p] = ok[p] ? r.dampingRatio() : Double.NaN;
-      k[p] = ok[p] ? Math.abs(r.si()) * semichordM / fc.speedTasMps() : Double.NaN;
-    }
-    return new BranchCurve(name, t, eas, tas, f, g, z, k, ok);
   }
 }

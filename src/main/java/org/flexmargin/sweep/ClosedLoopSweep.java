@@ -20,6 +20,7 @@ import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.LoopSpec;
+import org.flexmargin.numerics.GreedyAssignment;
 
 /**
  * Closed-loop (aeroservoelastic) eigenvalues along the sweep, and the speeds at which a
@@ -140,9 +141,6 @@ public final class ClosedLoopSweep {
   /** Greedy nearest-neighbour assignment of the new eigenvalues to the branches. */
   private static int[] match(double[] reA, double[] imA, int[] orderA, double[] reB, double[] imB) {
     int n = orderA.length;
-    int[] out = new int[n];
-    boolean[] rowDone = new boolean[n];
-    boolean[] colDone = new boolean[n];
     double[][] d = new double[n][n];
     for (int j = 0; j < n; j++) {
       int a = orderA[j];
@@ -151,27 +149,7 @@ public final class ClosedLoopSweep {
         d[j][c] = Math.hypot(reB[c] - reA[a], imB[c] - imA[a]) / scale;
       }
     }
-    for (int step = 0; step < n; step++) {
-      double best = Double.MAX_VALUE;
-      int bj = -1;
-      int bc = -1;
-      for (int j = 0; j < n; j++) {
-        if (rowDone[j]) {
-          continue;
-        }
-        for (int c = 0; c < n; c++) {
-          if (!colDone[c] && d[j][c] < best) {
-            best = d[j][c];
-            bj = j;
-            bc = c;
-          }
-        }
-      }
-      out[bj] = bc;
-      rowDone[bj] = true;
-      colDone[bc] = true;
-    }
-    return out;
+    return GreedyAssignment.minimumCost(d);
   }
 
   /** Nearest open-loop root: p-k structural root at grid point p, or the rigid short period. */
