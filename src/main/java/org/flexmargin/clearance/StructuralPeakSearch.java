@@ -27,7 +27,7 @@ import org.flexmargin.model.InvalidInputException;
  * frequency); every interval whose phase changes by more than 5 deg or whose gain changes by more
  * than 0.5 dB is bisected until neither holds (up to 30 levels, 20 000 points), so a narrow
  * resonance between grid points is resolved. The largest sample is refined by Brent's
- * maximisation on its two neighbouring intervals; the edges of the region |L| &gt;= limit are
+ * maximisation on its two neighbouring intervals and added to the samples; the edges of the region |L| &gt;= limit are
  * solved by Brent's root finder; local minima of the phase distance inside that region are refined
  * by Brent's minimisation (Brent, <i>Algorithms for Minimization without Derivatives</i>, 1973;
  * Commons Math). Instances hold no state; the frequency function is called from the calling thread.
@@ -83,6 +83,10 @@ public final class StructuralPeakSearch {
         peakDb = p.getValue();
       }
     }
+
+    // the refined peak becomes a sample, so that a region above the limit narrower than the
+    // grid spacing is bracketed on both sides of it
+    g.insert(xPeak, s);
 
     // least phase distance over {|L| >= limit} plus the peak
     double bestX = xPeak;
@@ -212,6 +216,27 @@ public final class StructuralPeakSearch {
       ph[n] = Math.toDegrees(Math.atan2(im, re));
       d[n] = Math.abs(wrapDeg(ph[n] + 180));
       n++;
+    }
+
+    /** Inserts a sample at {@code xv} in order, unless one is already there. */
+    void insert(double xv, Sampler s) {
+      int i = Arrays.binarySearch(x, 0, n, xv);
+      if (i >= 0) {
+        return;
+      }
+      int at = -i - 1;
+      add(xv, s);
+      double dbv = db[n - 1];
+      double phv = ph[n - 1];
+      double dv = d[n - 1];
+      System.arraycopy(x, at, x, at + 1, n - 1 - at);
+      System.arraycopy(db, at, db, at + 1, n - 1 - at);
+      System.arraycopy(ph, at, ph, at + 1, n - 1 - at);
+      System.arraycopy(d, at, d, at + 1, n - 1 - at);
+      x[at] = xv;
+      db[at] = dbv;
+      ph[at] = phv;
+      d[at] = dv;
     }
 
     boolean coarse(int i) {
