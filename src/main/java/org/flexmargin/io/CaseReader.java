@@ -18,6 +18,7 @@ import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.Altitudes;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.AnalysisOptions;
+import org.flexmargin.model.ClearanceRequirements;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FeedbackPath;
@@ -87,8 +88,7 @@ public final class CaseReader {
   public static final double METRES_PER_FOOT = 0.3048;
 
   private static final List<String> CASE_KEYS =
-      List.of("format", "name", "description", "configurations", "sweep", "options", "loop");
-  private static final List<String> RESERVED = List.of("requirements");
+      List.of("format", "name", "description", "configurations", "sweep", "options", "loop", "requirements");
   private static final List<String> CONFIG_KEYS =
       List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
   private static final List<String> RIGID_BODY_KEYS = List.of("mass_kg", "pitch_inertia_kg_m2",
@@ -125,7 +125,6 @@ public final class CaseReader {
   public static AnalysisCase read(Path caseFile) {
     SourceFile src = SourceFile.read(caseFile, caseFile.toString());
     JsonField root = JsonInput.parse(src).root().object("a case file");
-    rejectReserved(root);
     root.allowOnly(CASE_KEYS);
     int format = readFormat(root);
     String name = root.required("name", "a case name").text();
@@ -151,9 +150,11 @@ public final class CaseReader {
     AnalysisOptions options = opts == null ? AnalysisOptions.defaults() : readOptions(opts.object("options"));
     JsonField loopField = root.optional("loop");
     LoopSpec loop = loopField == null ? null : readLoop(loopField.object("a loop section"), configs, configurations);
+    JsonField rq = root.optional("requirements");
+    ClearanceRequirements requirements = rq == null ? null : RequirementsReader.readSection(rq);
     List<InputFile> inputs = new ArrayList<>(ctx.inputs.values());
-    return root.build(
-        () -> new AnalysisCase(format, name, description, configurations, sweep, options, inputs, loop));
+    return root.build(() -> new AnalysisCase(format, name, description, configurations, sweep, options, inputs,
+        loop, requirements));
   }
 
   /**
@@ -211,17 +212,6 @@ public final class CaseReader {
       Path cwd = Path.of("").toAbsolutePath();
       Path p = resolve(relative);
       return p.startsWith(cwd) ? cwd.relativize(p).toString() : p.toString();
-    }
-  }
-
-  private static void rejectReserved(JsonField root) {
-    for (String r : RESERVED) {
-      JsonField f = root.optional(r);
-      if (f != null) {
-        throw f.fail("only the sections " + String.join(", ", CASE_KEYS),
-            "a \"" + r + "\" section, which is reserved for a later format and not supported in format "
-                + FORMAT + " yet");
-      }
     }
   }
 

@@ -16,6 +16,8 @@ import java.util.Set;
  * @param inputs provenance of every file read (case file first)
  * @param loop the flight-control loop; {@code null} for an open-loop analysis. When present, every
  *     configuration needs rigid-body data and every sensor station must exist in its mode table.
+ * @param requirements clearance requirements table; {@code null} when none is given (results are
+ *     then reported without pass/fail)
  */
 public record AnalysisCase(
     int format,
@@ -25,7 +27,8 @@ public record AnalysisCase(
     SweepPlan sweep,
     AnalysisOptions options,
     List<InputFile> inputs,
-    LoopSpec loop) {
+    LoopSpec loop,
+    ClearanceRequirements requirements) {
   /** Validates and copies. */
   public AnalysisCase {
     Checks.atLeast("format", format, 1);
@@ -70,6 +73,12 @@ public record AnalysisCase(
   /** Open-loop case without a flight-control loop. */
   public AnalysisCase(int format, String name, String description, List<Configuration> configurations,
       SweepPlan sweep, AnalysisOptions options, List<InputFile> inputs) {
-    this(format, name, description, configurations, sweep, options, inputs, null);
+    this(format, name, description, configurations, sweep, options, inputs, null, null);
+  }
+
+  /** Case with a loop but no requirements table. */
+  public AnalysisCase(int format, String name, String description, List<Configuration> configurations,
+      SweepPlan sweep, AnalysisOptions options, List<InputFile> inputs, LoopSpec loop) {
+    this(format, name, description, configurations, sweep, options, inputs, loop, null);
   }
 }

@@ -80,13 +80,19 @@ class LayeringTest {
   }
 
   @Test
+  void clearanceJudgesLoopResultsAgainstTheModel() {
+    onlyDependsOn("clearance", "model", "loop");
+  }
+
+  @Test
   void aseCombinesAircraftAndLoop() {
     onlyDependsOn("ase", "model", "numerics", "aero", "structure", "atmosphere", "loop");
   }
 
   @Test
   void sweepDependsOnlyOnLowerLayers() {
-    onlyDependsOn("sweep", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase");
+    onlyDependsOn("sweep", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase",
+        "clearance");
   }
 
   @Test
@@ -96,7 +102,7 @@ class LayeringTest {
 
   @Test
   void reportReadsOnlyResults() {
-    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase");
+    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase", "clearance");
   }
 
   @Test
