@@ -94,10 +94,46 @@ final class SweepCommand implements Callable<Integer> {
           out.println("  warning: " + w);
         }
       }
+      clearance(out, result, terminal);
       out.println();
       out.println("results written to " + written + " (report: " + written.resolve("report.html") + ")");
       Tables.cautions(out);
     }
-    return FlexMargin.EXIT_OK;
+    boolean failed = result.configurations().stream()
+        .anyMatch(r -> r.clearance() != null && !r.clearance().passed());
+    return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
+  }
+
+  private static void clearance(PrintWriter out, SweepResult result, boolean colour) {
+    boolean any = false;
+    for (ConfigurationResult r : result.configurations()) {
+      if (r.clearance() == null) {
+        continue;
+      }
+      if (!any) {
+        out.println();
+        out.println("Clearance against the requirements table:");
+        any = true;
+      }
+      boolean pass = r.clearance().passed();
+      String verdict = pass ? "PASS" : "FAIL";
+      if (colour) {
+        verdict = (pass ? "\u001b[1;32m" : "\u001b[1;31m") + verdict + "\u001b[0m";
+      }
+      out.printf(Locale.ROOT, "  %s: %s", r.configuration(), verdict);
+      r.clearance().governing().ifPresent(g -> out.printf(Locale.ROOT,
+          "; governing: %s (required %.4g %s, achieved %.4g %s)", g.description(), g.requiredValue(),
+          g.unit().symbol(), g.achievedValue(), g.unit().symbol()));
+      out.println();
+      long failing = r.clearance().points().stream().filter(p -> !p.passed()).count();
+      if (failing > 0) {
+        out.printf(Locale.ROOT, "    %d of %d sweep points fail at least one loop requirement%n", failing,
+            r.clearance().points().size());
+      }
+    }
+    if (any) {
+      out.println("  requirements: " + result.configurations().stream().filter(r -> r.clearance() != null)
+          .findFirst().orElseThrow().clearance().requirementsSource());
+    }
   }
 }

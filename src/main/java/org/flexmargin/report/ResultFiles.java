@@ -21,7 +21,12 @@ import org.flexmargin.loop.DiskMargin;
 import org.flexmargin.loop.GainCrossover;
 import org.flexmargin.loop.LoopMarginResult;
 import org.flexmargin.loop.PhaseCrossover;
+import org.flexmargin.clearance.ClearanceCheck;
+import org.flexmargin.clearance.PointAssessment;
+import org.flexmargin.clearance.StructuralModeAssessment;
+import org.flexmargin.sweep.ClearanceResult;
 import org.flexmargin.sweep.ClosedLoopPoint;
+import org.flexmargin.sweep.MarginOnset;
 import org.flexmargin.sweep.ClosedLoopResult;
 import org.flexmargin.sweep.ClosedLoopRoot;
 import org.flexmargin.sweep.ServoPoint;
@@ -158,6 +163,9 @@ public final class ResultFiles {
     if (c.servo() != null) {
       loop(o.putObject("loop"), c.servo());
     }
+    if (c.clearance() != null) {
+      clearance(o.putObject("clearance"), c.clearance());
+    }
     ArrayNode br = fl.putArray("branches");
     for (BranchCurve b : s.branches()) {
       ObjectNode bo = br.addObject();
@@ -239,6 +247,66 @@ public final class ResultFiles {
         num(ro, "damping_ratio", r.dampingRatio());
       }
     }
+  }
+
+  private static void clearance(ObjectNode o, ClearanceResult r) {
+    o.put("passed", r.passed());
+    o.put("requirements_source", r.requirementsSource());
+    r.governing().ifPresent(g -> check(o.putObject("governing"), g));
+    ObjectNode fl = o.putObject("flutter_rule");
+    fl.put("passed", r.flutter().passed());
+    num(fl, "limit_speed_eas_mps", r.flutter().limitSpeedEasMps());
+    num(fl, "required_flutter_speed_eas_mps", r.flutter().requiredFlutterSpeedEasMps());
+    ArrayNode fc = fl.putArray("checks");
+    r.flutter().checks().forEach(c -> check(fc.addObject(), c));
+    ArrayNode on = o.putArray("margin_onsets");
+    for (MarginOnset m : r.marginOnsets()) {
+      ObjectNode mo = on.addObject();
+      mo.put("requirement", m.key().kind().key());
+      mo.put("subject", m.key().subject());
+      mo.put("description", m.description());
+      num(mo, "speed_eas_mps", m.condition().speedEasMps());
+      num(mo, "speed_tas_mps", m.condition().speedTasMps());
+      num(mo, "mach", m.condition().mach());
+      num(mo, "required_value", m.requiredValue());
+      mo.put("unit", m.unit());
+      mo.put("refined", m.refined());
+      mo.put("evaluations", m.evaluations());
+    }
+    ArrayNode pts = o.putArray("points");
+    for (PointAssessment p : r.points()) {
+      ObjectNode po = pts.addObject();
+      num(po, "speed_eas_mps", p.speedEasMps());
+      po.put("regime", p.regime().key());
+      po.put("passed", p.passed());
+      num(po, "first_aeroelastic_frequency_hz", p.firstAeroelasticFrequencyHz());
+      ArrayNode cs = po.putArray("checks");
+      p.checks().forEach(c -> check(cs.addObject(), c));
+      ArrayNode sm = po.putArray("structural_modes");
+      for (StructuralModeAssessment s : p.structuralModes()) {
+        ObjectNode so = sm.addObject();
+        so.put("mode", s.modeName());
+        num(so, "frequency_hz", s.modeFrequencyHz());
+        num(so, "band_low_hz", s.bandLowHz());
+        num(so, "band_high_hz", s.bandHighHz());
+        num(so, "peak_db", s.peakDb());
+        num(so, "peak_frequency_hz", s.peakFrequencyHz());
+        num(so, "phase_distance_deg", s.phaseDistanceDeg());
+        so.put("status", s.status().name().toLowerCase(Locale.ROOT));
+      }
+    }
+  }
+
+  private static void check(ObjectNode o, ClearanceCheck c) {
+    o.put("requirement", c.kind().key());
+    o.put("subject", c.subject());
+    o.put("description", c.description());
+    num(o, "required", c.requiredValue());
+    num(o, "achieved", c.achievedValue());
+    o.put("unit", c.unit().symbol());
+    num(o, "frequency_hz", c.frequencyHz());
+    o.put("passed", c.passed());
+    num(o, "normalised_excess", c.normalisedExcess());
   }
 
   private static void writeMarginsCsv(Path file, ServoResult servo) throws IOException {

@@ -96,7 +96,10 @@ public final class CaseSweep {
           analysisCase.options());
       servo = new ServoResult(margins, closed);
     }
+    ClearanceResult clearance = analysisCase.requirements() == null ? null
+        : new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, servo,
+            analysisCase.requirements(), Math.max(0.05, analysisCase.options().onsetSpeedToleranceMps()));
     return new ConfigurationResult(c.name(), model.modes().modeNames(), f, system.aero().description(),
-        divergence, confirmed, tasDiv, flutter, (System.nanoTime() - start) * 1e-9, servo);
+        divergence, confirmed, tasDiv, flutter, (System.nanoTime() - start) * 1e-9, servo, clearance);
   }
 }

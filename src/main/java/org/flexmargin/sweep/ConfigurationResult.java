@@ -19,6 +19,7 @@ import org.flexmargin.flutter.FlutterSolution;
  * @param flutter flutter solution (curves, crossings, diagnostics)
  * @param elapsedSeconds wall time of this configuration's analysis (s)
  * @param servo loop margins and closed-loop results; {@code null} when the case has no loop
+ * @param clearance verdict against the requirements table; {@code null} when the case has none
  */
 public record ConfigurationResult(
     String configuration,
@@ -30,7 +31,8 @@ public record ConfigurationResult(
     double divergenceTasAtSweepStartMps,
     FlutterSolution flutter,
     double elapsedSeconds,
-    ServoResult servo) {
+    ServoResult servo,
+    ClearanceResult clearance) {
   /** Copies. */
   public ConfigurationResult {
     modeNames = List.copyOf(modeNames);
@@ -42,7 +44,7 @@ public record ConfigurationResult(
       String aeroDescription, DivergenceResult divergence, OptionalDouble divergenceConfirmedPa,
       double divergenceTasAtSweepStartMps, FlutterSolution flutter, double elapsedSeconds) {
     this(configuration, modeNames, modeFrequenciesHz, aeroDescription, divergence, divergenceConfirmedPa,
-        divergenceTasAtSweepStartMps, flutter, elapsedSeconds, null);
+        divergenceTasAtSweepStartMps, flutter, elapsedSeconds, null, null);
   }
 
   @Override

@@ -52,6 +52,15 @@ public final class Findings {
       if (c.servo() != null) {
         closedLoop(out, c);
       }
+      if (c.clearance() != null) {
+        for (MarginOnset m : c.clearance().marginOnsets()) {
+          FlightCondition fc = m.condition();
+          String subject = m.key().subject().isEmpty() ? "closed loop" : m.key().subject().replace('_', ' ');
+          out.add(new Finding(c.configuration(), m.key().kind().key().replace('_', ' ') + " lost", subject,
+              fc.speedEasMps(), fc.speedTasMps(), fc.mach(), fc.altitudeM(), 0.0,
+              m.description() + (m.refined() ? "" : " (not refined: the check vanished between grid points)")));
+        }
+      }
       out.sort(Comparator.comparingDouble(f -> Double.isNaN(f.speedEasMps()) ? -1 : f.speedEasMps()));
       all.addAll(out);
     }

@@ -1,0 +1,202 @@
+package org.flexmargin.sweep;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.flexmargin.ase.ServoLoop;
+import org.flexmargin.atmosphere.FlightCondition;
+import org.flexmargin.clearance.CheckKind;
+import org.flexmargin.clearance.ClearanceCheck;
+import org.flexmargin.clearance.FlutterClearance;
+import org.flexmargin.clearance.FlutterClearanceRule;
+import org.flexmargin.clearance.MarginOnsets;
+import org.flexmargin.clearance.ModeFrequency;
+import org.flexmargin.clearance.OnsetSearch;
+import org.flexmargin.clearance.PointAssessment;
+import org.flexmargin.clearance.PointAssessor;
+import org.flexmargin.flutter.BranchCurve;
+import org.flexmargin.flutter.CrossingKind;
+import org.flexmargin.flutter.FlutterCrossing;
+import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.loop.ClosedLoopStability;
+import org.flexmargin.loop.LoopMarginResult;
+import org.flexmargin.model.ClearanceRequirements;
+import org.flexmargin.model.Configuration;
+import org.flexmargin.model.LoopSpec;
+
+/**
+ * Judges one configuration's sweep against the requirements table: every grid point's loop
+ * margins and structural modes (with the closed-loop stability from the closed-loop eigenvalues),
+ * the speed at which each requirement is first violated (refined by Brent's method on airspeed,
+ * re-analysing the loop between the bracketing grid points), and the flutter speed margin and
+ * minimum damping rule (open and closed loop). Stateless and thread-safe.
+ */
+public final class ClearanceSweep {
+  private static final int BRENT_MAX_EVALUATIONS = 30;
+
+  /**
+   * @param model configuration model
+   * @param configuration configuration
+   * @param loop loop, or null (flutter rule only)
+   * @param path sweep path
+   * @param flutter open-loop flutter solution
+   * @param servo loop results, or null
+   * @param requirements the table
+   * @param speedToleranceMps onset refinement tolerance (m/s EAS)
+   * @return the verdict
+   */
+  public ClearanceResult assess(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      PlannedPath path, FlutterSolution flutter, ServoResult servo, ClearanceRequirements requirements,
+      double speedToleranceMps) {
+    List<PointAssessment> points = new ArrayList<>();
+    List<MarginOnset> onsets = new ArrayList<>();
+    if (servo != null) {
+      double maxHz = ServoMargins.bandTopHz(model);
+      for (int p = 0; p < servo.points().size(); p++) {
+        ServoPoint sp = servo.points().get(p);
+        ServoLoop sl = ServoMargins.loopAt(model, configuration, loop, sp.condition());
+        ClosedLoopStability stability = servo.closedLoop().points().get(p).maxRealPart() < 0
+            ? ClosedLoopStability.STABLE : ClosedLoopStability.UNSTABLE;
+        points.add(assessAt(requirements, sp.condition(), sp.margins(), stability, modesAt(flutter, p), sl));
+      }
+      for (MarginOnsets.Bracket b : MarginOnsets.brackets(points)) {
+        if (b.key().kind() == CheckKind.CLOSED_LOOP_STABILITY) {
+          onsets.add(stabilityOnset(b, servo, points, requirements));
+          continue;
+        }
+        onsets.add(refine(b, model, configuration, loop, path, flutter, points, requirements, maxHz,
+            speedToleranceMps));
+      }
+    }
+    List<OnsetSearch> searches = new ArrayList<>();
+    double top = path.at(path.gridPoints() - 1).speedEasMps();
+    searches.add(OnsetSearch.openLoop(firstOnset(flutter.crossings()), top));
+    if (servo != null) {
+      searches.add(OnsetSearch.closedLoop(firstOnset(servo.closedLoop().crossings()), top));
+    }
+    FlutterClearance fc = FlutterClearanceRule.assess(requirements, searches,
+        highestG(flutter, servo, requirements.limitSpeedEasMps()));
+    return new ClearanceResult(points, onsets, fc, requirements.source());
+  }
+
+  private static OptionalDouble firstOnset(List<FlutterCrossing> crossings) {
+    return crossings.stream().filter(c -> c.kind() == CrossingKind.FLUTTER_ONSET)
+        .mapToDouble(c -> c.condition().speedEasMps()).min();
+  }
+
+  /** Highest g of any open-loop root, and of any closed-loop oscillatory root, up to V_L. */
+  private static double highestG(FlutterSolution flutter, ServoResult servo, double limitEas) {
+    double g = -1.0;
+    for (BranchCurve b : flutter.branches()) {
+      double[] eas = b.speedEasMps();
+      double[] gg = b.dampingG();
+      for (int i = 0; i < b.size(); i++) {
+        if (b.converged()[i] && eas[i] <= limitEas && Double.isFinite(gg[i])) {
+          g = Math.max(g, gg[i]);
+        }
+      }
+    }
+    if (servo != null) {
+      for (ClosedLoopPoint p : servo.closedLoop().points()) {
+        if (p.condition().speedEasMps() <= limitEas) {
+          for (ClosedLoopRoot r : p.roots()) {
+            if (r.imagRadPerS() > 1e-6 && Double.isFinite(r.dampingG())) {
+              g = Math.max(g, r.dampingG());
+            }
+          }
+        }
+      }
+    }
+    return g;
+  }
+
+  /** Structural modes and their current (p-k) frequencies at grid point p. */
+  private static List<ModeFrequency> modesAt(FlutterSolution flutter, double t) {
+    List<ModeFrequency> modes = new ArrayList<>();
+    for (BranchCurve b : flutter.branches()) {
+      int p = (int) Math.floor(t);
+      int q = Math.min(p + 1, b.size() - 1);
+      double w = t - p;
+      double[] f = b.frequencyHz();
+      double fp = b.converged()[p] ? f[p] : Double.NaN;
+      double fq = b.converged()[q] ? f[q] : fp;
+      double freq = Double.isNaN(fp) ? fq : fp + w * (fq - fp);
+      if (Double.isFinite(freq) && freq > 0) {
+        modes.add(new ModeFrequency(b.name(), freq));
+      }
+    }
+    return modes;
+  }
+
+  private static PointAssessment assessAt(ClearanceRequirements requirements, FlightCondition fc,
+      LoopMarginResult margins, ClosedLoopStability stability, List<ModeFrequency> modes, ServoLoop loop) {
+    double f1 = modes.stream().mapToDouble(ModeFrequency::frequencyHz).min().orElse(1.0);
+    return PointAssessor.assess(requirements, fc.speedEasMps(), f1, margins, stability, modes, loop.brokenLoop());
+  }
+
+  private static MarginOnset stabilityOnset(MarginOnsets.Bracket b, ServoResult servo, List<PointAssessment> points,
+      ClearanceRequirements requirements) {
+    // the closed-loop onset itself is refined by the closed-loop sweep: take the first refined
+    // closed-loop flutter onset inside the bracket, else the failing grid point
+    for (FlutterCrossing x : servo.closedLoop().crossings()) {
+      double v = x.condition().speedEasMps();
+      if (x.kind() == CrossingKind.FLUTTER_ONSET && v >= b.passingSpeedEasMps() - 1e-9
+          && v <= b.failingSpeedEasMps() + 1e-9) {
+        return new MarginOnset(b.key(), "closed-loop stability (" + x.branchName() + ")", x.condition(), 0.0, "",
+            x.evaluations(), true);
+      }
+    }
+    FlightCondition at = servo.points().stream().filter(p -> p.condition().speedEasMps() == b.failingSpeedEasMps())
+        .findFirst().orElseThrow().condition();
+    return new MarginOnset(b.key(), "closed-loop stability", at, 0.0, "", 0, false);
+  }
+
+  private MarginOnset refine(MarginOnsets.Bracket b, ConfigurationModel model, Configuration configuration,
+      LoopSpec loop, PlannedPath path, FlutterSolution flutter, List<PointAssessment> points,
+      ClearanceRequirements requirements, double maxHz, double tolMps) {
+    int p = indexOfSpeed(points, b.passingSpeedEasMps());
+    ServoMargins margins = ServoMargins.withDefaults();
+    int[] evaluations = {0};
+    PointAssessment[] last = {null};
+    DoubleUnaryOperator excess = MarginOnsets.excessAlongSpeed(v -> {
+      evaluations[0]++;
+      double t = p + (v - b.passingSpeedEasMps()) / (b.failingSpeedEasMps() - b.passingSpeedEasMps());
+      FlightCondition fc = path.at(t);
+      ServoLoop sl = ServoMargins.loopAt(model, configuration, loop, fc);
+      LoopMarginResult m = margins.at(sl, ServoMargins.seeds(flutter, p), maxHz);
+      last[0] = assessAt(requirements, fc, m, ClosedLoopStability.NOT_CHECKED, modesAt(flutter, t), sl);
+      return last[0];
+    }, b.key());
+    double onset;
+    boolean refined = true;
+    try {
+      BrentSolver solver = new BrentSolver(1e-12, tolMps);
+      onset = solver.solve(BRENT_MAX_EVALUATIONS, v -> {
+        double e = excess.applyAsDouble(v);
+        // a check that disappears inside the bracket is treated as still met (left side)
+        return Double.isNaN(e) ? Math.abs(b.passingExcess()) : e;
+      }, b.passingSpeedEasMps(), b.failingSpeedEasMps());
+    } catch (TooManyEvaluationsException | MathIllegalArgumentException e) {
+      onset = b.failingSpeedEasMps();
+      refined = false;
+    }
+    double t = p + (onset - b.passingSpeedEasMps()) / (b.failingSpeedEasMps() - b.passingSpeedEasMps());
+    ClearanceCheck failing = points.get(p + 1).checks().stream().filter(c -> c.key().equals(b.key()))
+        .min((x, y) -> Double.compare(x.excess(), y.excess())).orElseThrow();
+    return new MarginOnset(b.key(), failing.description(), path.at(t), failing.requiredValue(),
+        failing.unit().symbol(), evaluations[0], refined);
+  }
+
+  private static int indexOfSpeed(List<PointAssessment> points, double eas) {
+    for (int i = 0; i < points.size(); i++) {
+      if (points.get(i).speedEasMps() == eas) {
+        return i;
+      }
+    }
+    throw new IllegalStateException("bracket speed " + eas + " is not a grid point");
+  }
+}
