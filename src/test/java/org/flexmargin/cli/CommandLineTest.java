@@ -91,6 +91,15 @@ class CommandLineTest {
   }
 
   @Test
+  void demoWithFailingRequirementsExitsWithThree(@TempDir Path tmp) throws IOException {
+    Run r = run("demo", "--out", tmp.resolve("demo").toString(), "--quiet");
+    assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, r.code(), r.err());
+    JsonNode json = new ObjectMapper().readTree(tmp.resolve("demo/results.json").toFile());
+    assertFalse(json.get("configurations").get(0).get("clearance").get("passed").asBoolean());
+    assertTrue(Files.exists(tmp.resolve("demo/margins-full_payload.csv")));
+  }
+
+  @Test
   void everyCommandHasHelpWithExamples() {
     for (String cmd : new String[] {"check", "sweep", "demo", "bench"}) {
       Run r = run(cmd, "--help");
