@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import java.util.concurrent.atomic.AtomicInteger;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
@@ -17,6 +16,7 @@ import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Findings;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
+import org.flexmargin.sweep.SweepProgress;
 import org.flexmargin.sweep.SweepResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -51,25 +51,9 @@ final class SweepCommand implements Callable<Integer> {
     PrintWriter err = spec.commandLine().getErr();
     AnalysisCase c = CaseReader.read(caseFile);
     boolean terminal = System.console() != null && !common.quiet;
-    int total = c.configurations().size();
-    AtomicInteger done = new AtomicInteger();
-    long start = System.nanoTime();
-    if (!common.quiet) {
-      err.printf(Locale.ROOT, "analysing %d configuration(s) of case %s ...%n", total, c.name());
-      err.flush();
-    }
-    SweepResult result = new CaseSweep(common.threads).run(c, name -> {
-      if (!common.quiet) {
-        synchronized (err) {
-          int d = done.incrementAndGet();
-          double elapsed = (System.nanoTime() - start) * 1e-9;
-          double eta = d < total ? elapsed / d * (total - d) : 0;
-          err.printf(Locale.ROOT, "%s[%d/%d] %s done, %.1f s elapsed, ETA %.1f s%n",
-              terminal ? "\r" : "", d, total, name, elapsed, eta);
-          err.flush();
-        }
-      }
-    });
+    ProgressBar bar = new ProgressBar(err, c.configurations().size() * SweepProgress.stagesPerConfiguration(c),
+        terminal);
+    SweepResult result = new CaseSweep(common.threads).run(c, bar);
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
     Path target = outDir != null ? outDir : Path.of("reports", ResultFiles.fileSafe(c.name()));

@@ -7,7 +7,6 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
-import java.util.function.Consumer;
 import org.flexmargin.flutter.AeroelasticSystem;
 import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.DivergenceSolver;
@@ -40,19 +39,32 @@ public final class CaseSweep {
 
   /**
    * @param analysisCase validated case
-   * @param progress called with each configuration name when it completes (from worker threads)
+   * @param configurationDone told of each configuration when all its stages are done
    * @return results in case order
    */
-  public SweepResult run(AnalysisCase analysisCase, Consumer<String> progress) {
+  public SweepResult run(AnalysisCase analysisCase, java.util.function.Consumer<String> configurationDone) {
+    int stages = SweepProgress.stagesPerConfiguration(analysisCase);
+    java.util.Map<String, Integer> done = new java.util.concurrent.ConcurrentHashMap<>();
+    return run(analysisCase, (c, stage) -> {
+      if (done.merge(c, 1, Integer::sum) == stages) {
+        configurationDone.accept(c);
+      }
+    });
+  }
+
+  /**
+   * @param analysisCase validated case
+   * @param progress told of every completed stage (from worker threads)
+   * @return results in case order
+   */
+  public SweepResult run(AnalysisCase analysisCase, SweepProgress progress) {
     PlannedPath path = new PlannedPath(analysisCase.sweep());
     ExecutorService pool = Executors.newFixedThreadPool(Math.min(threads, analysisCase.configurations().size()));
     try {
       List<Future<ConfigurationResult>> futures = new ArrayList<>();
       for (Configuration c : analysisCase.configurations()) {
         futures.add(pool.submit(() -> {
-          ConfigurationResult r = analyse(c, path, analysisCase);
-          progress.accept(c.name());
-          return r;
+          return analyse(c, path, analysisCase, progress);
         }));
       }
       List<ConfigurationResult> results = new ArrayList<>();
@@ -73,8 +85,22 @@ public final class CaseSweep {
     }
   }
 
-  /** Analyses one configuration along a path. */
+  /** Analyses one configuration along a path, without progress reports. */
   public static ConfigurationResult analyse(Configuration c, PlannedPath path, AnalysisCase analysisCase) {
+    return analyse(c, path, analysisCase, SweepProgress.NONE);
+  }
+
+  /**
+   * Analyses one configuration along a path.
+   *
+   * @param c configuration
+   * @param path sweep path
+   * @param analysisCase the case (options, loop, requirements)
+   * @param progress told of each completed stage
+   * @return the configuration's results
+   */
+  public static ConfigurationResult analyse(Configuration c, PlannedPath path, AnalysisCase analysisCase,
+      SweepProgress progress) {
     long start = System.nanoTime();
     ConfigurationModel model = ConfigurationModel.of(c);
     AeroelasticSystem system = model.system();
@@ -89,16 +115,22 @@ public final class CaseSweep {
     FlutterSolution flutter = method.solve(system, path, analysisCase.options());
     double[] f = model.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).toArray();
     double tasDiv = divergence.speedTasMps(path.at(0).densityKgPerM3());
+    progress.stageDone(c.name(), "divergence and flutter");
     ServoResult servo = null;
     if (analysisCase.loop() != null) {
       List<ServoPoint> margins = ServoMargins.withDefaults().along(model, c, analysisCase.loop(), path, flutter);
+      progress.stageDone(c.name(), "loop margins");
       ClosedLoopResult closed = new ClosedLoopSweep().analyse(model, c, analysisCase.loop(), path, flutter,
           analysisCase.options());
+      progress.stageDone(c.name(), "closed loop");
       servo = new ServoResult(margins, closed);
     }
-    ClearanceResult clearance = analysisCase.requirements() == null ? null
-        : new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, servo,
-            analysisCase.requirements(), Math.max(0.05, analysisCase.options().onsetSpeedToleranceMps()));
+    ClearanceResult clearance = null;
+    if (analysisCase.requirements() != null) {
+      clearance = new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, servo,
+          analysisCase.requirements(), Math.max(0.05, analysisCase.options().onsetSpeedToleranceMps()));
+      progress.stageDone(c.name(), "clearance");
+    }
     return new ConfigurationResult(c.name(), model.modes().modeNames(), f, system.aero().description(),
         divergence, confirmed, tasDiv, flutter, (System.nanoTime() - start) * 1e-9, servo, clearance);
   }
