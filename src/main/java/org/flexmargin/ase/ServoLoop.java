@@ -72,6 +72,57 @@ public final class ServoLoop {
   }
 
   /**
+   * Loop-at-a-time at one feedback path, the other paths closed: broken at the output of path p,
+   * {@code L_p = -C_p P_p F / (1 - sum_{q != p} C_q P_q F)} (negative-feedback convention, exact
+   * aerodynamics and delays). Not thread-safe (one per thread).
+   *
+   * @param path index of the path to break
+   * @return L_p as a frequency function
+   */
+  public SisoFrequencyFunction brokenAtPath(int path) {
+    AircraftPlant.FrequencyEvaluator eval = plant.frequencyEvaluator();
+    int ns = plant.sensors().size();
+    double[] sensorResponse = new double[2 * ns];
+    double[] block = new double[2];
+    double[] fwd = new double[2];
+    int[] index = law.pathSensorIndex();
+    if (path < 0 || path >= index.length) {
+      throw new IllegalArgumentException("path " + path + " of " + index.length);
+    }
+    return (w, reIm) -> {
+      eval.response(w, sensorResponse);
+      law.forward().response(w, fwd);
+      double ownR = 0;
+      double ownI = 0;
+      double restR = 0;
+      double restI = 0;
+      for (int p = 0; p < index.length; p++) {
+        law.paths().get(p).response(w, block);
+        double pr = sensorResponse[2 * index[p]];
+        double pi = sensorResponse[2 * index[p] + 1];
+        // C_p P_p F
+        double cr = block[0] * pr - block[1] * pi;
+        double ci = block[0] * pi + block[1] * pr;
+        double gr = cr * fwd[0] - ci * fwd[1];
+        double gi = cr * fwd[1] + ci * fwd[0];
+        if (p == path) {
+          ownR = gr;
+          ownI = gi;
+        } else {
+          restR += gr;
+          restI += gi;
+        }
+      }
+      // -own / (1 - rest)
+      double dr = 1 - restR;
+      double di = -restI;
+      double d2 = dr * dr + di * di;
+      reIm[0] = -(ownR * dr + ownI * di) / d2;
+      reIm[1] = -(ownI * dr - ownR * di) / d2;
+    };
+  }
+
+  /**
    * The open chain G (actuator command to law output) as a state space, with the aerodynamics in
    * rational form and delays by Pade.
    *

@@ -27,6 +27,7 @@ import org.flexmargin.clearance.StructuralModeAssessment;
 import org.flexmargin.sweep.ClearanceResult;
 import org.flexmargin.sweep.ClosedLoopPoint;
 import org.flexmargin.sweep.MarginOnset;
+import org.flexmargin.sweep.NotchCheck;
 import org.flexmargin.sweep.ClosedLoopResult;
 import org.flexmargin.sweep.ClosedLoopRoot;
 import org.flexmargin.sweep.ServoPoint;
@@ -235,6 +236,35 @@ public final class ResultFiles {
       num(po, "peak_gain_frequency_hz", m.peakGain().frequencyHz());
       po.put("margin_grid_points", m.diagnostics().gridPoints());
       po.put("unresolved_intervals", m.diagnostics().unresolvedIntervals());
+      ArrayNode paths = po.putArray("loop_at_a_time");
+      for (int k = 0; k < p.pathMargins().size(); k++) {
+        LoopMarginResult pm = p.pathMargins().get(k);
+        ObjectNode ko = paths.addObject();
+        ko.put("path", k);
+        num(ko, "min_phase_margin_deg", pm.governingPhaseMargin().map(GainCrossover::phaseMarginDeg).orElse(Double.NaN));
+        num(ko, "gain_increase_margin_db",
+            pm.governingGainIncreaseMargin().map(PhaseCrossover::gainMarginDb).orElse(Double.NaN));
+        num(ko, "gain_reduction_margin_db",
+            pm.governingGainReductionMargin().map(PhaseCrossover::gainMarginDb).orElse(Double.NaN));
+        num(ko, "disk_margin_alpha", pm.diskMargin().alpha());
+      }
+      ArrayNode notches = po.putArray("notches");
+      for (NotchCheck n : p.notches()) {
+        ObjectNode no = notches.addObject();
+        no.put("path", n.path());
+        no.put("sensor", n.sensor());
+        num(no, "centre_hz", n.centreHz());
+        num(no, "depth_db", n.depthDb());
+        num(no, "crossover_hz", n.crossoverHz());
+        num(no, "phase_loss_at_crossover_deg", n.phaseLossDeg());
+        ArrayNode at = no.putArray("attenuation_at_modes");
+        for (NotchCheck.ModeAttenuation a : n.modes()) {
+          ObjectNode ao = at.addObject();
+          ao.put("mode", a.mode());
+          num(ao, "frequency_hz", a.frequencyHz());
+          num(ao, "attenuation_db", a.attenuationDb());
+        }
+      }
       ClosedLoopPoint cp = cl.points().get(i);
       num(po, "closed_loop_max_real_per_s", cp.maxRealPart());
       ArrayNode roots = po.putArray("closed_loop_roots");

@@ -3,7 +3,6 @@ package org.flexmargin.sweep;
 import java.util.ArrayList;
 import java.util.List;
 import org.flexmargin.ase.AircraftPlant;
-import org.flexmargin.ase.FlightControlLaw;
 import org.flexmargin.ase.ServoLoop;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.flutter.BranchCurve;
@@ -12,7 +11,13 @@ import org.flexmargin.loop.Eigenvalues;
 import org.flexmargin.loop.LoopMargins;
 import org.flexmargin.loop.MarginOptions;
 import org.flexmargin.model.Configuration;
+import org.flexmargin.ase.FlightControlLaw;
+import org.flexmargin.loop.LinearBlock;
+import org.flexmargin.loop.LoopMarginResult;
+import org.flexmargin.model.FeedbackPath;
+import org.flexmargin.model.FilterSpec;
 import org.flexmargin.model.LoopSpec;
+import org.flexmargin.model.NotchFilterSpec;
 
 /**
  * Broken-loop margins of a configuration at flight conditions along the sweep path, from the
@@ -81,9 +86,54 @@ public final class ServoMargins {
     for (int p = 0; p < path.gridPoints(); p++) {
       FlightCondition fc = path.at(p);
       ServoLoop servo = loopAt(model, configuration, loop, fc);
-      points.add(new ServoPoint(p, fc, at(servo, seeds(openLoop, p), maxHz)));
+      Eigenvalues seeds = seeds(openLoop, p);
+      LoopMarginResult main = at(servo, seeds, maxHz);
+      List<LoopMarginResult> perPath = new ArrayList<>();
+      for (int k = 0; k < loop.paths().size(); k++) {
+        perPath.add(margins.analyse(servo.brokenAtPath(k), 2 * Math.PI * MIN_FREQUENCY_HZ, 2 * Math.PI * maxHz, seeds));
+      }
+      points.add(new ServoPoint(p, fc, main, perPath, notchChecks(loop, openLoop, p, main)));
     }
     return points;
+  }
+
+  /** Attenuation of each notch at the modes' current frequencies and its phase cost at crossover. */
+  static List<NotchCheck> notchChecks(LoopSpec loop, FlutterSolution openLoop, int p, LoopMarginResult margins) {
+    double firstMode = Double.MAX_VALUE;
+    for (BranchCurve b : openLoop.branches()) {
+      if (b.converged()[p]) {
+        firstMode = Math.min(firstMode, b.frequencyHz()[p]);
+      }
+    }
+    double limit = 0.5 * firstMode;
+    double crossover = margins.gainCrossovers().stream().mapToDouble(g -> g.frequencyHz())
+        .filter(f -> f < limit).max().orElse(Double.NaN);
+    List<NotchCheck> out = new ArrayList<>();
+    double[] v = new double[2];
+    for (int k = 0; k < loop.paths().size(); k++) {
+      FeedbackPath path = loop.paths().get(k);
+      for (FilterSpec f : path.filters()) {
+        if (!(f instanceof NotchFilterSpec n)) {
+          continue;
+        }
+        LinearBlock block = FlightControlLaw.filter(n);
+        List<NotchCheck.ModeAttenuation> modes = new ArrayList<>();
+        for (BranchCurve b : openLoop.branches()) {
+          if (b.converged()[p]) {
+            double hz = b.frequencyHz()[p];
+            block.response(2 * Math.PI * hz, v);
+            modes.add(new NotchCheck.ModeAttenuation(b.name(), hz, 20 * Math.log10(Math.hypot(v[0], v[1]))));
+          }
+        }
+        double loss = Double.NaN;
+        if (Double.isFinite(crossover)) {
+          block.response(2 * Math.PI * crossover, v);
+          loss = -Math.toDegrees(Math.atan2(v[1], v[0]));
+        }
+        out.add(new NotchCheck(k, path.sensor(), n.centreHz(), n.depthDb(), modes, crossover, loss));
+      }
+    }
+    return out;
   }
 
   /** @return 1.5 x the highest in-vacuo mode frequency, at least 50 Hz */

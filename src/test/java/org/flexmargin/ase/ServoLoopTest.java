@@ -107,4 +107,42 @@ class ServoLoopTest {
       assertEquals(im, v[1], 1e-9 * scale, "im at " + w[k]);
     }
   }
+
+  @Test
+  void loopAtATimeSatisfiesTheReturnDifferenceIdentity() {
+    // Algebraic identity (no approximation): with G = sum_q C_q P_q F and G_rest = G - C_p P_p F,
+    // 1 + L_p = (1 - G) / (1 - G_rest) and 1 + L = 1 - G, so (1 + L_p)(1 - G_rest) = 1 + L.
+    RigidBody rb = AircraftPlantTest.navion(0.3, Map.of("bend", new org.flexmargin.model.ModeCoupling(0.01, -0.02, 0.4, 0.5)));
+    AircraftPlant plant = AircraftPlantTest.plant(rb, AircraftPlantTest.oneMode(7.5, new ShapeValue(0.3, 0.15)),
+        AircraftPlantTest.zeroAero(1), AircraftPlantTest.SENSORS);
+    LoopSpec loop = new LoopSpec(new ActuatorSpec(ActuatorOrder.SECOND, 12, 0.7), AircraftPlantTest.SENSORS,
+        List.of(new FeedbackPath("gyro", 0.3, 0.6, List.of(new NotchFilterSpec(8.6, 0.05, 0.5)), null),
+            new FeedbackPath("accel", 0.05, 0, List.of(), null)), 0.01, 0.0125, 2);
+    ServoLoop servo = new ServoLoop(plant, FlightControlLaw.of(loop, plant.condition().dynamicPressurePa()));
+    SisoFrequencyFunction l = servo.brokenLoop();
+    SisoFrequencyFunction l0 = servo.brokenAtPath(0);
+    SisoFrequencyFunction l1 = servo.brokenAtPath(1);
+    double[] a = new double[2];
+    double[] b = new double[2];
+    double[] c = new double[2];
+    for (double w : new double[] {0.2, 1.5, 9.0, 47.0, 120.0}) {
+      l.response(w, a);
+      l0.response(w, b);
+      l1.response(w, c);
+      // L = -(G_0 + G_1) and L_0 = -G_0/(1 - G_1), L_1 = -G_1/(1 - G_0): recover G_0, G_1 from L_0, L_1
+      // via G_0 = -L_0 (1 - G_1) and check G_0 + G_1 = -L with the solution of the 2x2 linear system
+      // g0 + L0 (1 - g1) = 0, g1 + L1 (1 - g0) = 0  =>  g0 = -L0 (1 + L1) / (1 - L0 L1)
+      org.apache.commons.math3.complex.Complex L0 = new org.apache.commons.math3.complex.Complex(b[0], b[1]);
+      org.apache.commons.math3.complex.Complex L1 = new org.apache.commons.math3.complex.Complex(c[0], c[1]);
+      org.apache.commons.math3.complex.Complex one = org.apache.commons.math3.complex.Complex.ONE;
+      org.apache.commons.math3.complex.Complex den = one.subtract(L0.multiply(L1));
+      org.apache.commons.math3.complex.Complex g0 = L0.negate().multiply(one.add(L1)).divide(den);
+      org.apache.commons.math3.complex.Complex g1 = L1.negate().multiply(one.add(L0)).divide(den);
+      org.apache.commons.math3.complex.Complex sum = g0.add(g1);
+      double scale = Math.max(1e-9, Math.hypot(a[0], a[1]));
+      // 1e-9 relative: exact algebra in double precision
+      assertEquals(-a[0], sum.getReal(), 1e-9 * scale, "at " + w);
+      assertEquals(-a[1], sum.getImaginary(), 1e-9 * scale, "at " + w);
+    }
+  }
 }
