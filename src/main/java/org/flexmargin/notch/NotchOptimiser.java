@@ -22,7 +22,8 @@ import org.flexmargin.loop.NotchFilter;
  * (deg) plus {@link #PENALTY_WEIGHT} times the sum of squared violations: structural peaks above
  * (limit - design margin) in dB over all modes and samples, and rigid-body phase (deg) and gain (dB)
  * margins below the requirement at the samples that met it without the notches. Minimised by
- * BOBYQA (Powell 2009) from Commons Math, then restarted once from its result.
+ * BOBYQA (Powell 2009) from Commons Math, then restarted three times from its result with
+ * smaller initial trust regions.
  *
  * <p>Start: one notch per cluster of offending modes (modes whose peak exceeds the limit anywhere;
  * modes whose offending peak frequencies lie within 15 % of each other form one cluster, clusters
@@ -42,7 +43,9 @@ public final class NotchOptimiser {
   private static final double ZP_MAX = 1.5;
   private static final double R_MIN = 0.01;
   private static final double R_MAX = 0.7;
-  private static final int MAX_EVALUATIONS = 2500;
+  private static final int MAX_EVALUATIONS = 1500;
+  /** Final trust-region radius in the scaled variables (1e-4 of a variable's range). */
+  private static final double STOPPING_RADIUS = 1e-4;
   private static final int START_STEPS = 8;
 
   /**
@@ -155,8 +158,8 @@ public final class NotchOptimiser {
     double[] best = start;
     double bestValue = f.value(start);
     int runs = 0;
-    for (double radius : new double[] {0.15, 0.04}) {
-      BOBYQAOptimizer opt = new BOBYQAOptimizer(2 * 3 * n + 1, radius, 1e-7);
+    for (double radius : new double[] {0.2, 0.05, 0.02, 0.01}) {
+      BOBYQAOptimizer opt = new BOBYQAOptimizer(2 * 3 * n + 1, radius, STOPPING_RADIUS);
       runs++;
       try {
         PointValuePair r = opt.optimize(new MaxEval(MAX_EVALUATIONS), new ObjectiveFunction(f), GoalType.MINIMIZE,
