@@ -15,8 +15,9 @@ import org.flexmargin.model.LoopSpec;
  * @param peaks worst structural peak per mode before (case's own filters) and after, over all
  *     samples (configurations, points, shifts)
  * @param phaseCost worst phase loss over all samples, then per configuration
- * @param originalPhaseCost phase loss of the case's own notches in the carrying paths (for
- *     comparison), worst over all samples
+ * @param originalPhaseCost phase lag of the case's own notches (those of the first carrying path
+ *     that has any; zero when they are kept) at the rigid-body crossovers, worst over all samples,
+ *     for comparison
  * @param diagnostics optimiser statistics
  * @param violations requirements still missed (empty when feasible)
  * @param reasons why no feasible set was found (empty when feasible)

@@ -33,12 +33,21 @@ public final class NotchDesigner {
     LoopSpec base = PathFilters.baseLoop(loop, paths, spec.existingNotches());
     LoopSamples samples = CaseLoopSampler.sample(analysisCase, base, paths, spec);
     OptimisedNotches opt = new NotchOptimiser().optimise(samples, spec);
-    NotchEvaluator ev = new NotchEvaluator(samples);
-    List<NotchFilter> own = spec.existingNotches() == ExistingNotches.REPLACE
-        ? PathFilters.existingNotches(loop, paths) : List.of();
-    SampleEvaluation original = ev.evaluate(own);
+    // before: the case's own loop sampled as it is (its notches may differ from path to path)
+    LoopSamples originalSamples = CaseLoopSampler.sample(analysisCase, loop, paths, spec);
+    SampleEvaluation original = new NotchEvaluator(originalSamples).evaluate(List.of());
+    // phase lag of the case's own notches: those of the first carrying path that has any
+    List<NotchFilter> own = List.of();
+    for (int p : paths) {
+      List<NotchFilter> n = PathFilters.existingNotches(loop, List.of(p));
+      if (!n.isEmpty() && spec.existingNotches() == ExistingNotches.REPLACE) {
+        own = n;
+        break;
+      }
+    }
+    SampleEvaluation ownCost = new NotchEvaluator(samples).evaluate(own);
     List<ModePeakChange> peaks = new ArrayList<>();
-    List<ModePeak> b = worstPeaks(samples, original);
+    List<ModePeak> b = worstPeaks(originalSamples, original);
     List<ModePeak> a = worstPeaks(samples, opt.after());
     for (int m = 0; m < b.size(); m++) {
       peaks.add(new ModePeakChange(b.get(m).mode(), b.get(m), a.get(m)));
@@ -82,7 +91,7 @@ public final class NotchDesigner {
       }
     }
     return new NotchDesignResult(analysisCase.name(), spec, paths, feasible,
-        opt.notches().stream().map(DesignedNotch::of).toList(), peaks, cost, phaseCost(samples, original, null),
+        opt.notches().stream().map(DesignedNotch::of).toList(), peaks, cost, phaseCost(samples, ownCost, null),
         opt.diagnostics(), opt.violations(), reasons, margins, checked, designed);
   }
 
