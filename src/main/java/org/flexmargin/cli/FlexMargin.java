@@ -18,7 +18,7 @@ import picocli.CommandLine.Command;
       "Analysis only: results support, and never replace, ground vibration tests, structural-coupling "
           + "tests, flight flutter testing and the approval of the airworthiness authority."
     },
-    subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class,
+    subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
         CommandLine.HelpCommand.class},
     footer = {
       "",

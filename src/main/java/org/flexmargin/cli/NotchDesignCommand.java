@@ -1,0 +1,230 @@
+package org.flexmargin.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.flexmargin.io.CaseReader;
+import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.notch.CheckedPeak;
+import org.flexmargin.notch.DesignedNotch;
+import org.flexmargin.notch.ExistingNotches;
+import org.flexmargin.notch.MarginComparison;
+import org.flexmargin.notch.ModePeak;
+import org.flexmargin.notch.ModePeakChange;
+import org.flexmargin.notch.NotchDesignResult;
+import org.flexmargin.notch.NotchDesignSpec;
+import org.flexmargin.notch.NotchDesigner;
+import org.flexmargin.notch.NotchJson;
+import org.flexmargin.notch.PhaseCost;
+import org.flexmargin.notch.RigidMargins;
+import org.flexmargin.notch.RobustnessCheckResult;
+import org.flexmargin.report.Cautions;
+import org.flexmargin.report.ReportFolder;
+import org.flexmargin.report.ResultFiles;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code flexmargin notch-design CASE}: structural notch placement, or a robustness check of the case's own. */
+@Command(name = "notch-design", mixinStandardHelpOptions = true,
+    description = {"Place structural notch filters so every structural loop-gain peak stays below the "
+        + "gain-stabilisation limit over all configurations, sweep points and the modal frequency uncertainty, "
+        + "at the least phase loss at the rigid-body crossover; or (--check-only) check the case's own filters.",
+        "Writes notch-design.json and notch-filters.json (the filters list to paste into the case file) "
+            + "into the output folder. Exit 0 if a feasible set was found (or the check passes), 3 if not."},
+    footer = {"", "Examples:",
+        "  flexmargin notch-design mode-tables/demo/demo-case.json --max-eas 70",
+        "  flexmargin notch-design mode-tables/demo/demo-case.json --uncertainty 0.05 --limit-db -6 --notches 2",
+        "  flexmargin notch-design mode-tables/demo/demo-case.json --check-only"})
+final class NotchDesignCommand implements Callable<Integer> {
+  @Parameters(index = "0", paramLabel = "CASE", description = "Case file (JSON) with a loop.")
+  Path caseFile;
+
+  @Option(names = "--out", paramLabel = "DIR",
+      description = "Output folder (default: reports/<case name>/notch-design).")
+  Path out;
+
+  @Option(names = "--notches", paramLabel = "N", description = "Maximum number of notches (default: ${DEFAULT-VALUE}).")
+  int notches = 3;
+
+  @Option(names = "--uncertainty", paramLabel = "U",
+      description = "Relative modal frequency uncertainty; modes shifted by 1-U, 1, 1+U (default: ${DEFAULT-VALUE}).")
+  double uncertainty = 0.10;
+
+  @Option(names = "--limit-db", paramLabel = "DB",
+      description = "Gain-stabilisation limit on structural peaks, dB (default: ${DEFAULT-VALUE}).")
+  double limitDb = -6.0;
+
+  @Option(names = "--phase-margin", paramLabel = "DEG",
+      description = "Rigid-body phase margin to keep, deg (default: ${DEFAULT-VALUE}).")
+  double phaseMarginDeg = 45.0;
+
+  @Option(names = "--gain-margin", paramLabel = "DB",
+      description = "Rigid-body gain margin to keep, dB (default: ${DEFAULT-VALUE}).")
+  double gainMarginDb = 6.0;
+
+  @Option(names = "--path", paramLabel = "PATH",
+      description = "Path to carry the notches, by index or sensor name (repeatable; default: every path "
+          + "whose sensor sees the structure).")
+  List<String> paths = new ArrayList<>();
+
+  @Option(names = "--keep-existing", description = "Keep the path's existing notches (default: replace them).")
+  boolean keepExisting;
+
+  @Option(names = "--max-eas", paramLabel = "M/S",
+      description = "Design and check only sweep points at or below this EAS, m/s (default: all).")
+  double maxEasMps = Double.POSITIVE_INFINITY;
+
+  @Option(names = "--stride", paramLabel = "N", description = "Use every N-th sweep grid point (default: ${DEFAULT-VALUE}).")
+  int stride = 1;
+
+  @Option(names = "--check-only", description = "Only check the case's own filters over the uncertainty range.")
+  boolean checkOnly;
+
+  @Option(names = "--quiet", description = "No summary on the terminal; errors only.")
+  boolean quiet;
+
+  @Option(names = "--debug", description = "Print stack traces of errors.")
+  boolean debug;
+
+  @Spec picocli.CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public Integer call() {
+    PrintWriter pw = spec.commandLine().getOut();
+    AnalysisCase c = CaseReader.read(caseFile);
+    if (c.loop() == null) {
+      throw new InvalidInputException("loop", "a flight-control loop (notch design needs one)", "none");
+    }
+    List<Integer> idx = new ArrayList<>();
+    for (String p : paths) {
+      idx.add(NotchDesignSpec.pathIndex(c.loop(), p));
+    }
+    NotchDesignSpec s = NotchDesignSpec.defaults().withNotchPaths(idx).withMaxNotches(notches)
+        .withFrequencyUncertainty(uncertainty).withPeakLimitDb(limitDb)
+        .withRequiredMargins(phaseMarginDeg, gainMarginDb)
+        .withExistingNotches(keepExisting ? ExistingNotches.KEEP : ExistingNotches.REPLACE)
+        .withPoints(stride, maxEasMps);
+    Path target = out != null ? out : Path.of("reports", ResultFiles.fileSafe(c.name()), "notch-design");
+    NotchDesigner designer = new NotchDesigner();
+    if (checkOnly) {
+      RobustnessCheckResult r = designer.check(c, s);
+      Path written = ReportFolder.writeAtomically(target,
+          folder -> Files.writeString(folder.resolve("notch-check.json"), NotchJson.check(r, Cautions.TEXT)));
+      if (!quiet) {
+        printCheck(pw, r);
+        pw.println();
+        pw.println("written to " + written.resolve("notch-check.json"));
+        Tables.cautions(pw);
+      }
+      return r.passes() ? FlexMargin.EXIT_OK : FlexMargin.EXIT_REQUIREMENTS_VIOLATED;
+    }
+    NotchDesignResult r = designer.design(c, s);
+    Path written = ReportFolder.writeAtomically(target, folder -> {
+      Files.writeString(folder.resolve("notch-design.json"), NotchJson.design(r, Cautions.TEXT));
+      Files.writeString(folder.resolve("notch-filters.json"), NotchJson.filters(r));
+    });
+    if (!quiet) {
+      printDesign(pw, r);
+      pw.println();
+      pw.println("written to " + written.resolve("notch-design.json") + " and " + written.resolve("notch-filters.json"));
+      Tables.cautions(pw);
+    }
+    return r.feasible() ? FlexMargin.EXIT_OK : FlexMargin.EXIT_REQUIREMENTS_VIOLATED;
+  }
+
+  private static String where(ModePeak p) {
+    if (p.where() == null) {
+      return "-";
+    }
+    return String.format(Locale.ROOT, "%s %.0f m/s x%.2f", p.where().configuration(), p.where().speedEasMps(),
+        p.where().shiftFactor());
+  }
+
+  private static void printDesign(PrintWriter pw, NotchDesignResult r) {
+    NotchDesignSpec s = r.spec();
+    pw.printf(Locale.ROOT, "case %s: notch design, limit %.1f dB, frequency uncertainty +-%.0f %%, rigid margins "
+        + "%.0f deg / %.0f dB, paths %s%n", r.caseName(), s.peakLimitDb(), 100 * s.frequencyUncertainty(),
+        s.requiredPhaseMarginDeg(), s.requiredGainMarginDb(), r.notchPaths());
+    pw.println(r.feasible() ? "result: feasible notch set found" : "result: NO FEASIBLE NOTCH SET");
+    pw.println();
+    pw.println("notches (in every carrying path):");
+    for (DesignedNotch n : r.notches()) {
+      pw.printf(Locale.ROOT, "  centre %7.3f Hz  zeta_z %.4f  zeta_p %.4f  depth %5.1f dB  width %5.2f Hz%n",
+          n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio(), n.depthDb(), n.widthHz());
+    }
+    pw.println();
+    String h = String.format(Locale.ROOT, "%-22s %10s %-26s %10s %-26s", "mode", "before dB", "where", "after dB",
+        "where");
+    pw.println(h);
+    pw.println("-".repeat(h.length()));
+    for (ModePeakChange c : r.peaks()) {
+      pw.printf(Locale.ROOT, "%-22s %10.2f %-26s %10.2f %-26s%n", c.mode(), c.before().peakDb(), where(c.before()),
+          c.after().peakDb(), where(c.after()));
+    }
+    pw.println();
+    for (PhaseCost pc : r.phaseCost()) {
+      pw.printf(Locale.ROOT, "phase cost at the rigid-body crossover, %s: %.2f deg (at %.2f Hz%s)%n",
+          pc.configuration(), pc.worstLossDeg(), pc.crossoverHz(), pc.where() == null ? "" : String.format(Locale.ROOT,
+              ", %s %.0f m/s x%.2f", pc.where().configuration(), pc.where().speedEasMps(), pc.where().shiftFactor()));
+    }
+    pw.printf(Locale.ROOT, "(the case's own notches in these paths cost %.2f deg)%n", r.originalPhaseCost().worstLossDeg());
+    pw.println();
+    pw.println("rigid-body margins re-run independently (nominal frequencies): before -> after");
+    String m = String.format(Locale.ROOT, "%-14s %8s %17s %17s %17s", "configuration", "EAS m/s", "PM deg",
+        "GM+ dB", "GM- dB");
+    pw.println(m);
+    pw.println("-".repeat(m.length()));
+    for (MarginComparison mc : r.margins()) {
+      RigidMargins b = mc.before();
+      RigidMargins a = mc.after();
+      pw.printf(Locale.ROOT, "%-14s %8.1f %17s %17s %17s%n", b.configuration(), b.speedEasMps(),
+          pair(b.phaseMarginDeg(), a.phaseMarginDeg()), pair(b.gainIncreaseMarginDb(), a.gainIncreaseMarginDb()),
+          pair(b.gainReductionMarginDb(), a.gainReductionMarginDb()));
+    }
+    double worst = Double.NEGATIVE_INFINITY;
+    for (CheckedPeak cp : r.checkedPeaks()) {
+      worst = Math.max(worst, cp.peakDb());
+    }
+    pw.printf(Locale.ROOT, "worst structural peak after, independent re-run at those speeds: %.2f dB%n", worst);
+    pw.printf(Locale.ROOT, "optimiser: %s, %d evaluations, %d runs, final objective %.4g, %d violations%n",
+        r.diagnostics().method(), r.diagnostics().evaluations(), r.diagnostics().runs(),
+        r.diagnostics().finalObjective(), r.diagnostics().violations());
+    if (!r.reasons().isEmpty()) {
+      pw.println();
+      pw.println("why no feasible set:");
+      for (String reason : r.reasons()) {
+        pw.println("  - " + reason);
+      }
+    }
+  }
+
+  private static String pair(double a, double b) {
+    return fmt(a) + " -> " + fmt(b);
+  }
+
+  private static String fmt(double v) {
+    return Double.isFinite(v) ? String.format(Locale.ROOT, "%.1f", v) : "none";
+  }
+
+  private static void printCheck(PrintWriter pw, RobustnessCheckResult r) {
+    pw.printf(Locale.ROOT, "case %s: check of the case's own filters, limit %.1f dB, uncertainty +-%.0f %%%n",
+        r.caseName(), r.spec().peakLimitDb(), 100 * r.spec().frequencyUncertainty());
+    pw.println(r.passes() ? "result: passes" : "result: DOES NOT PASS");
+    String h = String.format(Locale.ROOT, "%-22s %10s %10s  %-26s", "mode", "worst dB", "at Hz", "where");
+    pw.println(h);
+    pw.println("-".repeat(h.length()));
+    for (ModePeak p : r.peaks()) {
+      pw.printf(Locale.ROOT, "%-22s %10.2f %10.2f  %-26s%n", p.mode(), p.peakDb(), p.frequencyHz(), where(p));
+    }
+    pw.printf(Locale.ROOT, "worst rigid-body margins over all samples: PM %s deg, GM+ %s dB, GM- %s dB%n",
+        fmt(r.worstPhaseMarginDeg()), fmt(r.worstGainIncreaseMarginDb()), fmt(r.worstGainReductionMarginDb()));
+    pw.printf(Locale.ROOT, "%d requirement(s) missed%n", r.violations().size());
+  }
+}
