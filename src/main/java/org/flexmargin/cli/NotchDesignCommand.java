@@ -9,6 +9,10 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.ClearanceRequirements;
+import org.flexmargin.model.FrequencyBand;
+import org.flexmargin.model.MarginCell;
+import org.flexmargin.model.SpeedRegime;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.notch.CheckedPeak;
 import org.flexmargin.notch.DesignedNotch;
@@ -39,7 +43,9 @@ import picocli.CommandLine.Spec;
         "Writes notch-design.json and notch-filters.json (the filters list to paste into the case file) "
             + "into the output folder. Exit 0 if a feasible set was found (or the check passes), 3 if not."},
     footer = {"", "Examples:",
-        "  flexmargin notch-design mode-tables/demo/demo-case.json --max-eas 70",
+        "  flexmargin notch-design mode-tables/demo/demo-case.json",
+        "  flexmargin notch-design mode-tables/demo/demo-case.json --check-only",
+        "  flexmargin notch-design mode-tables/demo/demo-case.json --max-eas 70 --notches 2",
         "  flexmargin notch-design mode-tables/demo/demo-case.json --uncertainty 0.05 --limit-db -6 --notches 2",
         "  flexmargin notch-design mode-tables/demo/demo-case.json --check-only"})
 final class NotchDesignCommand implements Callable<Integer> {
@@ -54,20 +60,24 @@ final class NotchDesignCommand implements Callable<Integer> {
   int notches = 3;
 
   @Option(names = "--uncertainty", paramLabel = "U",
-      description = "Relative modal frequency uncertainty; modes shifted by 1-U, 1, 1+U (default: ${DEFAULT-VALUE}).")
-  double uncertainty = 0.10;
+      description = "Relative modal frequency uncertainty; modes shifted by 1-U, 1, 1+U (default: the "
+          + "case's requirements table, else 0.10).")
+  Double uncertainty;
 
   @Option(names = "--limit-db", paramLabel = "DB",
-      description = "Gain-stabilisation limit on structural peaks, dB (default: ${DEFAULT-VALUE}).")
-  double limitDb = -6.0;
+      description = "Gain-stabilisation limit on structural peaks, dB (default: the case's requirements "
+          + "table, else -6).")
+  Double limitDb;
 
   @Option(names = "--phase-margin", paramLabel = "DEG",
-      description = "Rigid-body phase margin to keep, deg (default: ${DEFAULT-VALUE}).")
-  double phaseMarginDeg = 45.0;
+      description = "Rigid-body phase margin to keep, deg (default: the requirements table's rigid-body "
+          + "normal-envelope cell, else 45).")
+  Double phaseMarginDeg;
 
   @Option(names = "--gain-margin", paramLabel = "DB",
-      description = "Rigid-body gain margin to keep, dB (default: ${DEFAULT-VALUE}).")
-  double gainMarginDb = 6.0;
+      description = "Rigid-body gain margin to keep, dB (default: the requirements table's rigid-body "
+          + "normal-envelope cell, else 6).")
+  Double gainMarginDb;
 
   @Option(names = "--path", paramLabel = "PATH",
       description = "Path to carry the notches, by index or sensor name (repeatable; default: every path "
@@ -78,8 +88,9 @@ final class NotchDesignCommand implements Callable<Integer> {
   boolean keepExisting;
 
   @Option(names = "--max-eas", paramLabel = "M/S",
-      description = "Design and check only sweep points at or below this EAS, m/s (default: all).")
-  double maxEasMps = Double.POSITIVE_INFINITY;
+      description = "Design and check only sweep points at or below this EAS, m/s (default: the limit "
+          + "speed V_L of the requirements table, where structural checks stop; else all points).")
+  Double maxEasMps;
 
   @Option(names = "--stride", paramLabel = "N", description = "Use every N-th sweep grid point (default: ${DEFAULT-VALUE}).")
   int stride = 1;
@@ -106,11 +117,21 @@ final class NotchDesignCommand implements Callable<Integer> {
     for (String p : paths) {
       idx.add(NotchDesignSpec.pathIndex(c.loop(), p));
     }
+    ClearanceRequirements req = c.requirements();
+    MarginCell rigid = req == null ? null : req.cell(FrequencyBand.RIGID_BODY, SpeedRegime.NORMAL_ENVELOPE);
+    double u = uncertainty != null ? uncertainty : req != null ? req.frequencyUncertainty() : 0.10;
+    double lim = limitDb != null ? limitDb : req != null ? req.structuralPeakLimitDb() : -6.0;
+    double pm = phaseMarginDeg != null ? phaseMarginDeg : rigid != null ? rigid.phaseMarginDeg() : 45.0;
+    double gm = gainMarginDb != null ? gainMarginDb : rigid != null ? rigid.gainMarginDb() : 6.0;
+    double vmax = maxEasMps != null ? maxEasMps : req != null ? req.limitSpeedEasMps() : Double.POSITIVE_INFINITY;
     NotchDesignSpec s = NotchDesignSpec.defaults().withNotchPaths(idx).withMaxNotches(notches)
-        .withFrequencyUncertainty(uncertainty).withPeakLimitDb(limitDb)
-        .withRequiredMargins(phaseMarginDeg, gainMarginDb)
+        .withFrequencyUncertainty(u).withPeakLimitDb(lim)
+        .withRequiredMargins(pm, gm)
         .withExistingNotches(keepExisting ? ExistingNotches.KEEP : ExistingNotches.REPLACE)
-        .withPoints(stride, maxEasMps);
+        .withPoints(stride, vmax);
+    if (req != null && phaseMarginDeg == null && gainMarginDb == null) {
+      s = s.withMarginTable(req);
+    }
     Path target = out != null ? out : Path.of("reports", ResultFiles.fileSafe(c.name()), "notch-design");
     NotchDesigner designer = new NotchDesigner();
     if (checkOnly) {
@@ -149,9 +170,14 @@ final class NotchDesignCommand implements Callable<Integer> {
 
   private static void printDesign(PrintWriter pw, NotchDesignResult r) {
     NotchDesignSpec s = r.spec();
-    pw.printf(Locale.ROOT, "case %s: notch design, limit %.1f dB, frequency uncertainty +-%.0f %%, rigid margins "
-        + "%.0f deg / %.0f dB, paths %s%n", r.caseName(), s.peakLimitDb(), 100 * s.frequencyUncertainty(),
-        s.requiredPhaseMarginDeg(), s.requiredGainMarginDb(), r.notchPaths());
+    String rigid = s.marginTable() != null
+        ? "rigid-body margins from the requirements table by speed regime"
+        : String.format(Locale.ROOT, "rigid-body margins %.0f deg / %.0f dB", s.requiredPhaseMarginDeg(),
+            s.requiredGainMarginDb());
+    String envelope = Double.isFinite(s.maxSpeedEasMps())
+        ? String.format(Locale.ROOT, ", up to %.1f m/s EAS", s.maxSpeedEasMps()) : "";
+    pw.printf(Locale.ROOT, "case %s: notch design, limit %.1f dB, frequency uncertainty +-%.0f %%, %s%s, paths %s%n",
+        r.caseName(), s.peakLimitDb(), 100 * s.frequencyUncertainty(), rigid, envelope, r.notchPaths());
     pw.println(r.feasible() ? "result: feasible notch set found" : "result: NO FEASIBLE NOTCH SET");
     pw.println();
     pw.println("notches (in every carrying path):");

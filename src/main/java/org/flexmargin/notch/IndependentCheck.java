@@ -89,8 +89,9 @@ public final class IndependentCheck {
             b.peakGain().frequencyHz()));
       }
     }
-    boolean meets = pm >= spec.requiredPhaseMarginDeg() && gi >= spec.requiredGainMarginDb()
-        && gr <= -spec.requiredGainMarginDb();
+    double eas = fc.speedEasMps();
+    boolean meets = pm >= spec.requiredPhaseMarginDeg(eas) && gi >= spec.requiredGainMarginDb(eas)
+        && gr <= -spec.requiredGainMarginDb(eas);
     return new RigidMargins(configuration.name(), gridPoint, fc.speedEasMps(), pm, wc, gi, gr, meets);
   }
 

@@ -1,7 +1,12 @@
 package org.flexmargin.notch;
 
 import java.util.List;
+import org.flexmargin.clearance.RequirementLookup;
+import org.flexmargin.model.ClearanceRequirements;
+import org.flexmargin.model.FrequencyBand;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.MarginCell;
+import org.flexmargin.model.SpeedRegime;
 import org.flexmargin.model.LoopSpec;
 
 /**
@@ -27,6 +32,10 @@ import org.flexmargin.model.LoopSpec;
  *     peaks, dB (&gt;= 0); feasibility is judged against the limit itself
  * @param modeBandFraction structural peaks of a mode are searched within +-this fraction of its
  *     (shifted) in-vacuo frequency (0.3), in (0, 0.6]
+ * @param marginTable when not null, the rigid-body margins to keep at each speed are the table's
+ *     rigid-body cell for that speed's regime (e.g. 45 deg / 6 dB in the normal envelope, 30 deg /
+ *     4.5 dB up to the limit speed); {@code requiredPhaseMarginDeg}/{@code requiredGainMarginDb}
+ *     apply only without a table
  */
 public record NotchDesignSpec(
     List<Integer> notchPaths,
@@ -40,7 +49,37 @@ public record NotchDesignSpec(
     int pointStride,
     double maxSpeedEasMps,
     double designMarginDb,
-    double modeBandFraction) {
+    double modeBandFraction,
+    ClearanceRequirements marginTable) {
+
+  /**
+   * @param speedEasMps equivalent airspeed (m/s)
+   * @return rigid-body phase margin to keep there (deg)
+   */
+  public double requiredPhaseMarginDeg(double speedEasMps) {
+    return marginTable == null ? requiredPhaseMarginDeg : rigidCell(speedEasMps).phaseMarginDeg();
+  }
+
+  /**
+   * @param speedEasMps equivalent airspeed (m/s)
+   * @return rigid-body gain margin to keep there, both directions (dB)
+   */
+  public double requiredGainMarginDb(double speedEasMps) {
+    return marginTable == null ? requiredGainMarginDb : rigidCell(speedEasMps).gainMarginDb();
+  }
+
+  private MarginCell rigidCell(double speedEasMps) {
+    SpeedRegime regime = RequirementLookup.regime(marginTable, speedEasMps);
+    return regime == SpeedRegime.BEYOND ? new MarginCell(FrequencyBand.RIGID_BODY,
+        SpeedRegime.UP_TO_115_LIMIT_SPEED, 0.0, 0.0) : marginTable.cell(FrequencyBand.RIGID_BODY, regime);
+  }
+
+  /** @return a copy taking the rigid-body margins from a requirements table, speed by speed */
+  public NotchDesignSpec withMarginTable(ClearanceRequirements table) {
+    return new NotchDesignSpec(notchPaths, maxNotches, peakLimitDb, frequencyUncertainty, requiredPhaseMarginDeg,
+        requiredGainMarginDb, rigidBandFraction, existingNotches, pointStride, maxSpeedEasMps, designMarginDb,
+        modeBandFraction, table);
+  }
 
   /** Validates and copies. */
   public NotchDesignSpec {
@@ -99,55 +138,55 @@ public record NotchDesignSpec(
    */
   public static NotchDesignSpec defaults() {
     return new NotchDesignSpec(List.of(), 3, -6.0, 0.10, 45.0, 6.0, 0.5, ExistingNotches.REPLACE, 1,
-        Double.POSITIVE_INFINITY, 0.5, 0.1);
+        Double.POSITIVE_INFINITY, 0.5, 0.1, null);
   }
 
   /** @return a copy carrying the notches in the given paths */
   public NotchDesignSpec withNotchPaths(List<Integer> paths) {
     return new NotchDesignSpec(paths, maxNotches, peakLimitDb, frequencyUncertainty, requiredPhaseMarginDeg,
         requiredGainMarginDb, rigidBandFraction, existingNotches, pointStride, maxSpeedEasMps, designMarginDb,
-        modeBandFraction);
+        modeBandFraction, marginTable);
   }
 
   /** @return a copy with another maximum number of notches */
   public NotchDesignSpec withMaxNotches(int n) {
     return new NotchDesignSpec(notchPaths, n, peakLimitDb, frequencyUncertainty, requiredPhaseMarginDeg,
         requiredGainMarginDb, rigidBandFraction, existingNotches, pointStride, maxSpeedEasMps, designMarginDb,
-        modeBandFraction);
+        modeBandFraction, marginTable);
   }
 
   /** @return a copy with another gain-stabilisation limit (dB) */
   public NotchDesignSpec withPeakLimitDb(double limitDb) {
     return new NotchDesignSpec(notchPaths, maxNotches, limitDb, frequencyUncertainty, requiredPhaseMarginDeg,
         requiredGainMarginDb, rigidBandFraction, existingNotches, pointStride, maxSpeedEasMps, designMarginDb,
-        modeBandFraction);
+        modeBandFraction, marginTable);
   }
 
   /** @return a copy with another relative frequency uncertainty */
   public NotchDesignSpec withFrequencyUncertainty(double u) {
     return new NotchDesignSpec(notchPaths, maxNotches, peakLimitDb, u, requiredPhaseMarginDeg,
         requiredGainMarginDb, rigidBandFraction, existingNotches, pointStride, maxSpeedEasMps, designMarginDb,
-        modeBandFraction);
+        modeBandFraction, marginTable);
   }
 
   /** @return a copy with other required rigid-body margins (deg, dB) */
   public NotchDesignSpec withRequiredMargins(double phaseDeg, double gainDb) {
     return new NotchDesignSpec(notchPaths, maxNotches, peakLimitDb, frequencyUncertainty, phaseDeg, gainDb,
-        rigidBandFraction, existingNotches, pointStride, maxSpeedEasMps, designMarginDb, modeBandFraction);
+        rigidBandFraction, existingNotches, pointStride, maxSpeedEasMps, designMarginDb, modeBandFraction, marginTable);
   }
 
   /** @return a copy with another treatment of existing notches */
   public NotchDesignSpec withExistingNotches(ExistingNotches treatment) {
     return new NotchDesignSpec(notchPaths, maxNotches, peakLimitDb, frequencyUncertainty, requiredPhaseMarginDeg,
         requiredGainMarginDb, rigidBandFraction, treatment, pointStride, maxSpeedEasMps, designMarginDb,
-        modeBandFraction);
+        modeBandFraction, marginTable);
   }
 
   /** @return a copy using every n-th grid point up to the given EAS (m/s) */
   public NotchDesignSpec withPoints(int stride, double maxEasMps) {
     return new NotchDesignSpec(notchPaths, maxNotches, peakLimitDb, frequencyUncertainty, requiredPhaseMarginDeg,
         requiredGainMarginDb, rigidBandFraction, existingNotches, stride, maxEasMps, designMarginDb,
-        modeBandFraction);
+        modeBandFraction, marginTable);
   }
 
   /** @return the frequency shift factors {1 - u, 1, 1 + u} (just {1} for u = 0) */

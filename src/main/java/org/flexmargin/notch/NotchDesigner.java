@@ -86,7 +86,8 @@ public final class NotchDesigner {
           reasons.add(String.format(Locale.ROOT, "independent re-run: rigid-body margins PM %.1f deg, GM %+.1f/%+.1f dB"
               + " in configuration %s at %.1f m/s EAS no longer meet %.0f deg / %.0f dB", mc.after().phaseMarginDeg(),
               mc.after().gainIncreaseMarginDb(), mc.after().gainReductionMarginDb(), mc.after().configuration(),
-              mc.after().speedEasMps(), spec.requiredPhaseMarginDeg(), spec.requiredGainMarginDb()));
+              mc.after().speedEasMps(), spec.requiredPhaseMarginDeg(mc.after().speedEasMps()),
+              spec.requiredGainMarginDb(mc.after().speedEasMps())));
         }
       }
     }

@@ -57,10 +57,15 @@ public final class NotchOptimiser {
     NotchEvaluator ev = new NotchEvaluator(samples);
     SampleEvaluation before = ev.evaluate(List.of());
     boolean[] constrained = new boolean[samples.size()];
+    double[] speeds = new double[samples.size()];
     for (int s = 0; s < samples.size(); s++) {
-      constrained[s] = before.phaseMarginDeg()[s] >= spec.requiredPhaseMarginDeg()
-          && before.gainIncreaseMarginDb()[s] >= spec.requiredGainMarginDb()
-          && before.gainReductionMarginDb()[s] <= -spec.requiredGainMarginDb();
+      speeds[s] = samples.label(s).speedEasMps();
+    }
+    for (int s = 0; s < samples.size(); s++) {
+      double eas = samples.label(s).speedEasMps();
+      constrained[s] = before.phaseMarginDeg()[s] >= spec.requiredPhaseMarginDeg(eas)
+          && before.gainIncreaseMarginDb()[s] >= spec.requiredGainMarginDb(eas)
+          && before.gainReductionMarginDb()[s] <= -spec.requiredGainMarginDb(eas);
     }
     List<double[]> clusters = clusters(samples, before, spec);
     if (clusters.isEmpty()) {
@@ -70,7 +75,7 @@ public final class NotchOptimiser {
           new OptimiserDiagnostics("none needed", 1, 0, 0.0, PENALTY_WEIGHT, worstExcess(before, spec), v.size(),
               samples.size(), samples.storedValues()));
     }
-    Run run = run(ev, clusters, spec, constrained, true);
+    Run run = run(ev, clusters, spec, constrained, true, speeds);
     SampleEvaluation after = ev.evaluate(run.notches);
     List<ConstraintViolation> v = violations(samples, after, constrained, spec);
     List<String> reasons = new ArrayList<>();
@@ -81,7 +86,7 @@ public final class NotchOptimiser {
       boolean peaksFailed = v.stream().anyMatch(x -> x.kind() == ConstraintKind.STRUCTURAL_PEAK);
       if (peaksFailed) {
         // would the peaks be met if the rigid-body margins were ignored? then the phase cost is the reason
-        Run free = run(ev, clusters, spec, constrained, false);
+        Run free = run(ev, clusters, spec, constrained, false, speeds);
         evaluations += free.evaluations;
         runs += free.runs;
         SampleEvaluation fe = ev.evaluate(free.notches);
@@ -111,7 +116,7 @@ public final class NotchOptimiser {
   private record Run(List<NotchFilter> notches, double value, int evaluations, int runs) {}
 
   private Run run(NotchEvaluator ev, List<double[]> clusters, NotchDesignSpec spec, boolean[] constrained,
-      boolean holdRigid) {
+      boolean holdRigid, double[] speeds) {
     int n = clusters.size();
     double[] lo = new double[3 * n];
     double[] hi = new double[3 * n];
@@ -150,7 +155,7 @@ public final class NotchOptimiser {
     int[] count = {0};
     org.apache.commons.math3.analysis.MultivariateFunction f = u -> {
       count[0]++;
-      return objective(ev, decode(u, lo, hi), spec, constrained, holdRigid);
+      return objective(ev, decode(u, lo, hi), spec, constrained, holdRigid, speeds);
     };
     double[] zeros = new double[3 * n];
     double[] ones = new double[3 * n];
@@ -190,7 +195,7 @@ public final class NotchOptimiser {
   }
 
   private static double objective(NotchEvaluator ev, List<NotchFilter> notches, NotchDesignSpec spec,
-      boolean[] constrained, boolean holdRigid) {
+      boolean[] constrained, boolean holdRigid, double[] speeds) {
     SampleEvaluation e = ev.evaluate(notches);
     double target = spec.peakLimitDb() - spec.designMarginDb();
     double pen = 0;
@@ -205,9 +210,10 @@ public final class NotchOptimiser {
         }
       }
       if (holdRigid && constrained[s]) {
-        pen += sq(Math.max(0, spec.requiredPhaseMarginDeg() - pm[s]));
-        pen += sq(Math.max(0, spec.requiredGainMarginDb() - gi[s]));
-        pen += sq(Math.max(0, gr[s] + spec.requiredGainMarginDb()));
+        double eas = speeds[s];
+        pen += sq(Math.max(0, spec.requiredPhaseMarginDeg(eas) - pm[s]));
+        pen += sq(Math.max(0, spec.requiredGainMarginDb(eas) - gi[s]));
+        pen += sq(Math.max(0, gr[s] + spec.requiredGainMarginDb(eas)));
       }
     }
     return e.worstPhaseLossDeg() + PENALTY_WEIGHT * pen;
@@ -316,20 +322,23 @@ public final class NotchOptimiser {
         }
       }
       if (constrained[s]) {
+        double eas = l.speedEasMps();
+        double rpm = spec.requiredPhaseMarginDeg(eas);
+        double rgm = spec.requiredGainMarginDb(eas);
         double pm = e.phaseMarginDeg()[s];
-        if (spec.requiredPhaseMarginDeg() - pm > FEASIBILITY_TOLERANCE) {
+        if (rpm - pm > FEASIBILITY_TOLERANCE) {
           out.add(new ConstraintViolation(ConstraintKind.RIGID_PHASE_MARGIN, "rigid body", l, pm,
-              spec.requiredPhaseMarginDeg(), spec.requiredPhaseMarginDeg() - pm, e.phaseLossCrossoverHz()[s]));
+              rpm, rpm - pm, e.phaseLossCrossoverHz()[s]));
         }
         double gi = e.gainIncreaseMarginDb()[s];
-        if (spec.requiredGainMarginDb() - gi > FEASIBILITY_TOLERANCE) {
+        if (rgm - gi > FEASIBILITY_TOLERANCE) {
           out.add(new ConstraintViolation(ConstraintKind.RIGID_GAIN_INCREASE_MARGIN, "rigid body", l, gi,
-              spec.requiredGainMarginDb(), spec.requiredGainMarginDb() - gi, Double.NaN));
+              rgm, rgm - gi, Double.NaN));
         }
         double gr = e.gainReductionMarginDb()[s];
-        if (gr + spec.requiredGainMarginDb() > FEASIBILITY_TOLERANCE) {
+        if (gr + rgm > FEASIBILITY_TOLERANCE) {
           out.add(new ConstraintViolation(ConstraintKind.RIGID_GAIN_REDUCTION_MARGIN, "rigid body", l, gr,
-              -spec.requiredGainMarginDb(), gr + spec.requiredGainMarginDb(), Double.NaN));
+              -rgm, gr + rgm, Double.NaN));
         }
       }
     }
