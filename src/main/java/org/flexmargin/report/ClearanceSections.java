@@ -218,8 +218,20 @@ public final class ClearanceSections {
       if (onset >= 0) {
         numCell(w, base + "/margin_onsets/" + onset + "/speed_eas_mps",
             r.marginOnsets().get(onset).condition().speedEasMps(), 2);
+      } else if (a[2] == 0) {
+        w.element("td", "never", "class", "num");
       } else {
-        w.element("td", a[2] == 0 ? "never" : "at a grid point without a bracket", "class", "num");
+        int first = -1;
+        for (int p2 = 0; p2 < r.points().size() && first < 0; p2++) {
+          if (r.points().get(p2).worstExcess(e.getKey()).orElse(0) < 0) {
+            first = p2;
+          }
+        }
+        w.open("td", "class", "num");
+        w.element("span", fmt(r.points().get(first).speedEasMps(), 2), "data-json", base + "/points/" + first
+            + "/speed_eas_mps", "data-value", value(r.points().get(first).speedEasMps()));
+        w.text(" (from its first grid point, no bracket)");
+        w.close("td");
       }
       w.close("tr");
     }

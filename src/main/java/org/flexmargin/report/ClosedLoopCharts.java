@@ -108,7 +108,7 @@ public final class ClosedLoopCharts {
       }
     }
     double xLo = -LOCUS_MAX_DAMPING_RATIO * yMax;
-    double xHi = Math.max(maxRe, 0) + 0.04 * yMax;
+    double xHi = Math.max(maxRe, 0) + 0.02 * yMax;
     double step = FlutterCharts.niceStep((xHi - xLo) / 10);
     xLo = Math.floor(xLo / step) * step;
     xHi = Math.ceil(xHi / step) * step;
@@ -177,10 +177,23 @@ public final class ClosedLoopCharts {
       for (int i = 0; i < x.length; i++) {
         y[i] = 2 * Math.PI * onsets.get(i).frequencyHz();
         chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f %s", unit.fromMps(
-            onsets.get(i).condition().speedEasMps()), unit.symbol()), x[i] + 0.06 * (xHi - xLo), y[i], false));
+            onsets.get(i).condition().speedEasMps()), unit.symbol()), x[i] + 0.075 * (xHi - xLo), y[i], false));
       }
       ChartSeries.markers(chart, used, markerSeries(CrossingKind.FLUTTER_ONSET), x, y, ReportStyle.ONSET,
-          SeriesMarkers.DIAMOND).setMarker(SeriesMarkers.DIAMOND);
+          SeriesMarkers.DIAMOND);
+      // the dots of the locus hide a marker of their own size: ring each onset with a larger outline
+      double hx = 0.018 * (xHi - xLo);
+      double hy = 0.03 * yMax;
+      double[] ox = new double[6 * x.length];
+      double[] oy = new double[6 * x.length];
+      for (int i = 0; i < x.length; i++) {
+        double[] px = {x[i] - hx, x[i], x[i] + hx, x[i], x[i] - hx, Double.NaN};
+        double[] py = {y[i], y[i] + hy, y[i], y[i] - hy, y[i], Double.NaN};
+        System.arraycopy(px, 0, ox, 6 * i, 6);
+        System.arraycopy(py, 0, oy, 6 * i, 6);
+      }
+      ChartSeries.line(chart, used, markerSeries(CrossingKind.FLUTTER_ONSET) + " (outline)", ox, oy,
+          ReportStyle.ONSET, ReportStyle.referenceStroke(2.2f, null)).setShowInLegend(false);
       chart.getStyler().setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.BOLD, 12));
       chart.getStyler().setAnnotationTextFontColor(ReportStyle.ONSET);
     }
@@ -246,6 +259,7 @@ public final class ClosedLoopCharts {
     List<double[]> ys = new ArrayList<>();
     Map<String, double[]> curves = new LinkedHashMap<>();
     int aperiodic = 0;
+    int hidden = 0;
     for (Map.Entry<String, List<double[]>> e : series.entrySet()) {
       if (e.getValue().isEmpty()) {
         continue;
@@ -257,6 +271,14 @@ public final class ClosedLoopCharts {
           aperiodic++;
         }
         y[i] = Double.isFinite(v) ? v : Double.NaN;
+      }
+      int finite = 0;
+      for (double v : y) {
+        finite += Double.isFinite(v) ? 1 : 0;
+      }
+      if (finite < 2) {
+        hidden++; // a real (aperiodic) root nearly all along: no line to draw
+        continue;
       }
       curves.put(e.getKey(), y);
       ys.add(y);
@@ -318,9 +340,16 @@ public final class ClosedLoopCharts {
       if (damping && e.getKey() == CrossingKind.FLUTTER_ONSET) {
         double dx = 0.035 * (x1 - x0);
         double dy = 0.06 * (yr[1] - yr[0]);
+        double[] sorted = mx.clone();
+        java.util.Arrays.sort(sorted);
         for (int i = 0; i < mx.length; i++) {
+          // labels of onsets closer than 6 % of the axis stack upwards so that they do not overlap
+          int stack = 0;
+          for (int k = 1; k < sorted.length && sorted[k] <= mx[i]; k++) {
+            stack = sorted[k] - sorted[k - 1] < 0.06 * (x1 - x0) ? stack + 1 : 0;
+          }
           chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f", mx[i]), mx[i] - dx,
-              my[i] + dy, false));
+              my[i] + dy * (1 + stack), false));
         }
         chart.getStyler().setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.BOLD, 12));
         chart.getStyler().setAnnotationTextFontColor(ReportStyle.ONSET);
@@ -335,6 +364,10 @@ public final class ClosedLoopCharts {
     }
     if (damping && aperiodic > 0) {
       notes.add(aperiodic + " points are real (aperiodic) roots with g infinite; they are left as gaps.");
+    }
+    if (hidden > 0) {
+      notes.add(hidden + " labelled roots are real (or present at fewer than two grid points) all along and have no "
+          + "line; they are in the root locus and in results.json.");
     }
     if (!clipped.isEmpty()) {
       notes.add("Points outside the plotted range (per line): " + String.join(", ", clipped) + ".");

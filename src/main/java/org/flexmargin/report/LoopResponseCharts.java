@@ -421,7 +421,7 @@ public final class LoopResponseCharts {
       }
       double[][] xy = phase ? wrapped(r.frequencyHz(), r.phaseDeg(), r.phaseDeg())
           : new double[][] {r.frequencyHz(), finite(r.gainDb())};
-      ChartSeries.line(chart, used, responseSeries(r.speed(), r.notches(), unit), xy[0], phase ? xy[2] : xy[1],
+      ChartSeries.line(chart, used, responseSeries(r.speed(), r.notches(), unit), xy[0], xy[1],
           speedColor(si), responseStroke(r.notches()));
     }
   }
@@ -622,13 +622,22 @@ public final class LoopResponseCharts {
       double bh = fm[m] * (1 + u);
       Color base = ReportStyle.seriesColor(m);
       Color fill = new Color(base.getRed(), base.getGreen(), base.getBlue(), 46);
+      // an area series fills between its line and y = 0: one above and one below 0 cover the band
       XYSeries s = chart.addSeries(ChartSeries.unique(bandSeries(c.modeNames().get(m), bl, bh), used),
           new double[] {bl, bh}, new double[] {yHi, yHi});
       s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Area);
       s.setMarker(SeriesMarkers.NONE);
       s.setFillColor(fill);
-      s.setLineColor(fill);
-      s.setLineStyle(new BasicStroke(0.5f));
+      s.setLineColor(new Color(base.getRed(), base.getGreen(), base.getBlue(), 150));
+      s.setLineStyle(new BasicStroke(8f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER));
+      XYSeries below = chart.addSeries(ChartSeries.unique(bandSeries(c.modeNames().get(m), bl, bh) + " (lower half)",
+          used), new double[] {bl, bh}, new double[] {yLo, yLo});
+      below.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Area);
+      below.setMarker(SeriesMarkers.NONE);
+      below.setFillColor(fill);
+      below.setLineColor(fill);
+      below.setLineStyle(new BasicStroke(0.5f));
+      below.setShowInLegend(false);
     }
     for (int i = 0; i < curves.size(); i++) {
       ChartSeries.line(chart, used, names.get(i), f, curves.get(i), ReportStyle.ZERO_LINE,

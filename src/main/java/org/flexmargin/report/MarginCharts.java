@@ -69,12 +69,11 @@ public final class MarginCharts {
   }
 
   /**
-   * @param increase gain increase (true) or reduction
    * @param band frequency band
-   * @return name of the required gain margin step line
+   * @return name of the required gain margin step lines (+GM, a gap, then -GM)
    */
-  public static String requiredGainSeries(boolean increase, FrequencyBand band) {
-    return "required " + (increase ? "+" : "-") + "GM, " + bandWords(band) + " band";
+  public static String requiredGainSeries(FrequencyBand band) {
+    return "required +-GM, " + bandWords(band) + " band";
   }
 
   /**
@@ -237,10 +236,15 @@ public final class MarginCharts {
             cell -> cell.gainMarginDb());
         double[][] down = requirementSteps(d.req, band, d.eas[0], d.eas[d.eas.length - 1], unit,
             cell -> -cell.gainMarginDb());
-        reqLines.put(requiredGainSeries(true, band), up);
-        reqLines.put(requiredGainSeries(false, band), down);
-        colors.put(requiredGainSeries(true, band), ReportStyle.seriesColor(ci));
-        colors.put(requiredGainSeries(false, band), ReportStyle.seriesColor(ci));
+        // +GM and -GM as one series with a gap between them: one legend entry per band
+        double[][] both = new double[2][up[0].length + 1 + down[0].length];
+        for (int k = 0; k < 2; k++) {
+          System.arraycopy(up[k], 0, both[k], 0, up[k].length);
+          both[k][up[k].length] = Double.NaN;
+          System.arraycopy(down[k], 0, both[k], up[k].length + 1, down[k].length);
+        }
+        reqLines.put(requiredGainSeries(band), both);
+        colors.put(requiredGainSeries(band), ReportStyle.seriesColor(ci));
         required.add(up[1]);
         required.add(down[1]);
       }
