@@ -342,15 +342,17 @@ public final class ClearanceSections {
           w.element("td", OpenLoopSections.MISSING);
           w.element("td", OpenLoopSections.MISSING);
         } else if (pa.checks().isEmpty()) {
-          w.element("td", "no requirement");
+          w.element("td", "none", "title", "no requirement beyond the extended speed");
           w.element("td", OpenLoopSections.MISSING);
         } else {
           int failing = pa.failures().size();
           w.open("td").element("span", failing == 0 ? "pass" : "fail (" + failing + ")", "class",
               failing == 0 ? "ok" : "warn").close("td");
           ClearanceCheck g = pa.governing().orElseThrow();
-          w.element("td", requirementWords(g.key()) + ": " + fmt(g.achievedValue(), decimals(g)) + " vs "
-              + fmt(g.requiredValue(), decimals(g)) + " " + g.unit().symbol());
+          w.element("td", g.kind() == CheckKind.CLOSED_LOOP_STABILITY
+              ? (g.passed() ? "closed loop stable" : "closed loop unstable")
+              : requirementWords(g.key()) + ": " + fmt(g.achievedValue(), decimals(g)) + " vs "
+                  + fmt(g.requiredValue(), decimals(g)) + " " + g.unit().symbol());
         }
         w.close("tr");
       }

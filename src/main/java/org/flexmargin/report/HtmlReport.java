@@ -61,7 +61,8 @@ public final class HtmlReport {
       ".badge.ok{background:#2f6b3a;color:#fff}",
       ".badge.warn{background:var(--accent);color:#fff}",
       "table.compact{font-size:12px}",
-      "table.compact td,table.compact th{padding:2px 6px}",
+      "table.compact td,table.compact th{padding:2px 6px;white-space:nowrap}",
+      "table.compact td:last-child{white-space:normal}",
       "tr.fail td{background:#fdf1f0}",
       "footer{color:var(--muted);font-size:12px;margin-top:24px}");
 

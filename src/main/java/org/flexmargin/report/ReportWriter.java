@@ -15,8 +15,9 @@ import org.flexmargin.sweep.SweepResult;
 
 /**
  * Writes the human-readable part of a report folder: {@code charts/} (V-g and V-f diagrams of
- * every configuration, PNG and optionally SVG) and {@code report.html} (self-contained, charts
- * embedded). The data files ({@link ResultFiles}) are written separately into the same folder.
+ * every configuration and, with a loop, closed-loop V-g and V-f, margins against airspeed, root
+ * locus, Bode, Nichols and notch charts; PNG and optionally SVG) and {@code report.html}
+ * (self-contained, charts embedded, clearance verdicts in the findings summary). The data files ({@link ResultFiles}) are written separately into the same folder.
  *
  * <p>Drawing needs no display: if {@code java.awt.headless} is not set, it is set to true.
  */
