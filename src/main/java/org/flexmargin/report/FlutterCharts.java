@@ -265,16 +265,34 @@ public final class FlutterCharts {
 
   /** g axis: the data in range, always including 0 and -limit, padded, limited, rounded. */
   private static double[] dampingRange(FlutterSolution s, double[] easRange, double limitG) {
-    double lo = -limitG;
-    double hi = 0.0;
+    List<double[]> ys = new ArrayList<>();
     for (BranchCurve b : s.branches()) {
       double[] eas = b.speedEasMps();
       double[] g = b.dampingG();
       boolean[] ok = b.converged();
+      double[] y = new double[b.size()];
       for (int i = 0; i < b.size(); i++) {
-        if (ok[i] && Double.isFinite(g[i]) && eas[i] >= easRange[0] && eas[i] <= easRange[1]) {
-          lo = Math.min(lo, g[i]);
-          hi = Math.max(hi, g[i]);
+        y[i] = ok[i] && eas[i] >= easRange[0] && eas[i] <= easRange[1] ? g[i] : Double.NaN;
+      }
+      ys.add(y);
+    }
+    return dampingRange(ys, limitG);
+  }
+
+  /**
+   * @param values damping values g (non-finite ignored)
+   * @param limitG damping limit
+   * @return g axis limits: the data, always including 0 and -limit, padded, limited to
+   *     [{@link #G_AXIS_FLOOR}, {@link #G_AXIS_CEILING}], rounded
+   */
+  static double[] dampingRange(List<double[]> values, double limitG) {
+    double lo = -limitG;
+    double hi = 0.0;
+    for (double[] g : values) {
+      for (double v : g) {
+        if (Double.isFinite(v)) {
+          lo = Math.min(lo, v);
+          hi = Math.max(hi, v);
         }
       }
     }
@@ -325,7 +343,7 @@ public final class FlutterCharts {
     series.setLineStyle(stroke);
   }
 
-  private static Marker marker(CrossingKind k) {
+  static Marker marker(CrossingKind k) {
     return switch (k) {
       case FLUTTER_ONSET -> SeriesMarkers.DIAMOND;
       case FLUTTER_RECOVERY -> SeriesMarkers.TRIANGLE_DOWN;
@@ -334,7 +352,7 @@ public final class FlutterCharts {
     };
   }
 
-  private static Color markerColor(CrossingKind k) {
+  static Color markerColor(CrossingKind k) {
     return switch (k) {
       case FLUTTER_ONSET -> ReportStyle.ONSET;
       case FLUTTER_RECOVERY -> ReportStyle.RECOVERY;

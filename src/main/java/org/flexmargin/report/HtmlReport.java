@@ -53,6 +53,17 @@ public final class HtmlReport {
       "section.cautions{margin-top:34px;padding:14px 20px;border:3px solid var(--accent);background:#fff8f6}",
       "section.cautions h2{border-bottom-color:var(--accent);color:var(--accent)}",
       "section.cautions li{margin:6px 0;font-size:15px}",
+      ".verdict{margin:10px 0;padding:8px 14px;border:1px solid var(--rule);border-left:6px solid #2f6b3a}",
+      ".verdict.fail{border-left-color:var(--accent);background:#fffafa}",
+      ".verdict p{margin:4px 0}",
+      ".verdict ul{margin:4px 0;padding-left:22px}",
+      ".badge{display:inline-block;padding:0 8px;border-radius:3px;color:#fff;font-weight:700}",
+      ".badge.ok{background:#2f6b3a;color:#fff}",
+      ".badge.warn{background:var(--accent);color:#fff}",
+      "table.compact{font-size:12px}",
+      "table.compact td,table.compact th{padding:2px 6px;white-space:nowrap}",
+      "table.compact td:last-child{white-space:normal}",
+      "tr.fail td{background:#fdf1f0}",
       "footer{color:var(--muted);font-size:12px;margin-top:24px}");
 
   /**

@@ -75,6 +75,11 @@ public final class OpenLoopSections {
       for (ConfigurationResult c : result.configurations()) {
         headline(w, c);
       }
+      if (result.analysisCase().requirements() != null || result.configurations().stream()
+          .anyMatch(c -> c.servo() != null)) {
+        ClearanceSections.writeVerdicts(w, result);
+        w.element("h3", "All findings");
+      }
       w.open("table", "id", "findings");
       w.open("thead").open("tr");
       for (String h : List.of("configuration", "finding", "mode", "EAS (m/s)", "EAS (kt)", "TAS (m/s)", "Mach",

@@ -47,10 +47,42 @@ public final class ReportStyle {
   /** The divergence speed line. */
   public static final Color DIVERGENCE_LINE = new Color(0x000000);
 
+  /** Speed-regime lines (V0max, V_L, factor x V_L). */
+  public static final Color REGIME_LINE = new Color(0x4A5A6A);
+  /** Requirement lines (required margins, structural peak limit). */
+  public static final Color REQUIREMENT = new Color(0xB0121B);
+  /** Margin-onset markers (a requirement first violated). */
+  public static final Color MARGIN_ONSET = new Color(0x6A0DAD);
+  /** Frequency bands of the structural modes (translucent fill). */
+  public static final Color MODE_BAND = new Color(0x1F, 0x5F, 0x8B, 38);
+
+  /** Anchor colours of the airspeed ramp, low speed first: pale gold, orange, crimson, deep violet. */
+  private static final Color[] SPEED_RAMP = {
+    new Color(0xE3C14B), new Color(0xE07B2A), new Color(0xB8283F), new Color(0x5A1E6E), new Color(0x1B1340)
+  };
+
   /** Chart width (px), sized for a report column about 1000 px wide. */
   public static final int CHART_WIDTH_PX = 1100;
   /** Chart height (px). */
   public static final int CHART_HEIGHT_PX = 620;
+
+  /**
+   * A colour on our airspeed ramp (pale gold at the lowest speed through orange and crimson to
+   * deep violet at the highest), linear in sRGB between the anchors.
+   *
+   * @param fraction position on the ramp, 0 (lowest speed) to 1 (highest); clamped
+   * @return the colour
+   */
+  public static Color speedRamp(double fraction) {
+    double f = Math.min(Math.max(Double.isFinite(fraction) ? fraction : 0, 0), 1) * (SPEED_RAMP.length - 1);
+    int i = Math.min((int) Math.floor(f), SPEED_RAMP.length - 2);
+    double w = f - i;
+    Color a = SPEED_RAMP[i];
+    Color b = SPEED_RAMP[i + 1];
+    return new Color((int) Math.round(a.getRed() + w * (b.getRed() - a.getRed())),
+        (int) Math.round(a.getGreen() + w * (b.getGreen() - a.getGreen())),
+        (int) Math.round(a.getBlue() + w * (b.getBlue() - a.getBlue())));
+  }
 
   /**
    * @param index mode index (0-based)

@@ -15,8 +15,9 @@ import org.flexmargin.sweep.SweepResult;
 
 /**
  * Writes the human-readable part of a report folder: {@code charts/} (V-g and V-f diagrams of
- * every configuration, PNG and optionally SVG) and {@code report.html} (self-contained, charts
- * embedded). The data files ({@link ResultFiles}) are written separately into the same folder.
+ * every configuration and, with a loop, closed-loop V-g and V-f, margins against airspeed, root
+ * locus, Bode, Nichols and notch charts; PNG and optionally SVG) and {@code report.html}
+ * (self-contained, charts embedded, clearance verdicts in the findings summary). The data files ({@link ResultFiles}) are written separately into the same folder.
  *
  * <p>Drawing needs no display: if {@code java.awt.headless} is not set, it is set to true.
  */
@@ -59,25 +60,54 @@ public final class ReportWriter {
     }
     Path chartDir = Files.createDirectories(folder.resolve(CHARTS_FOLDER));
     Map<String, List<EmbeddedChart>> charts = new LinkedHashMap<>();
+    Map<String, List<EmbeddedChart>> loopCharts = new LinkedHashMap<>();
+    SpeedAxisUnit unit = options.chartSpeedUnit();
+    boolean anyLoop = false;
     for (ConfigurationResult c : result.configurations()) {
-      List<EmbeddedChart> list = new ArrayList<>();
-      for (ReportChart chart : FlutterCharts.of(result, c, options.chartSpeedUnit())) {
-        byte[] png = chart.png();
-        List<String> names = new ArrayList<>();
-        for (Path p : chart.writeTo(chartDir, png, options.vectorCharts())) {
-          names.add(CHARTS_FOLDER + "/" + p.getFileName());
-        }
-        list.add(new EmbeddedChart(chart, png, names));
+      List<ReportChart> open = new ArrayList<>(FlutterCharts.of(result, c, unit));
+      List<ReportChart> loop = new ArrayList<>();
+      if (c.servo() != null) {
+        anyLoop = true;
+        List<ReportChart> closed = ClosedLoopCharts.of(result, c, unit);
+        // the closed-loop V-g and V-f go beside the open-loop ones, the root locus with the loop charts
+        open.add(closed.get(1));
+        open.add(closed.get(2));
+        loop.addAll(MarginCharts.of(result, c, unit));
+        loop.add(closed.get(0));
+        loop.addAll(LoopResponseCharts.of(result, c, unit));
       }
-      charts.put(c.configuration(), list);
+      charts.put(c.configuration(), embed(open, chartDir, options));
+      loopCharts.put(c.configuration(), embed(loop, chartDir, options));
     }
     Instant now = Instant.now();
-    String page = HtmlReport.render("Flutter and divergence report: " + result.analysisCase().name(),
+    List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(result, findings, charts, toolVersion, now));
+    if (anyLoop || result.analysisCase().requirements() != null) {
+      // loop and clearance sections go after the configurations, before diagnostics and provenance
+      int at = sections.size() - 2;
+      sections.addAll(at, ClearanceSections.of(result, loopCharts, unit));
+    }
+    String title = (anyLoop ? "Aeroservoelastic clearance report: " : "Flutter and divergence report: ")
+        + result.analysisCase().name();
+    String page = HtmlReport.render(title,
         java.util.stream.Stream.of(result.analysisCase().description(), result.pathDescription())
             .filter(s -> !s.isBlank()).toList(),
-        OpenLoopSections.of(result, findings, charts, toolVersion, now));
+        sections);
     Path html = folder.resolve(REPORT_FILE);
     Files.writeString(html, page, StandardCharsets.UTF_8);
     return html;
+  }
+
+  private static List<EmbeddedChart> embed(List<ReportChart> charts, Path chartDir, ReportOptions options)
+      throws IOException {
+    List<EmbeddedChart> list = new ArrayList<>();
+    for (ReportChart chart : charts) {
+      byte[] png = chart.png();
+      List<String> names = new ArrayList<>();
+      for (Path p : chart.writeTo(chartDir, png, options.vectorCharts())) {
+        names.add(CHARTS_FOLDER + "/" + p.getFileName());
+      }
+      list.add(new EmbeddedChart(chart, png, names));
+    }
+    return list;
   }
 }

@@ -38,12 +38,10 @@ class FlutterChartsTest {
 
   @BeforeAll
   static void solve() {
-    AnalysisCase d = CaseReader.read(Path.of("mode-tables/demo/demo-case.json"));
-    demo = new CaseSweep(1).run(d, n -> { });
-    demoFindings = Findings.of(demo, new PlannedPath(d.sweep()).at(0));
-    AnalysisCase l = CaseReader.read(Path.of("mode-tables/validation/typical-section-lpw.json"));
-    lpw = new CaseSweep(1).run(l, n -> { });
-    lpwFindings = Findings.of(lpw, new PlannedPath(l.sweep()).at(0));
+    demo = SharedResults.demo().result();
+    demoFindings = SharedResults.demo().findings();
+    lpw = SharedResults.lpw().result();
+    lpwFindings = SharedResults.lpw().findings();
   }
 
   @Test

@@ -62,13 +62,18 @@ class ReportWriterTest {
 
   @BeforeAll
   static void writeReports() throws IOException {
-    lpw = write(CaseReader.read(Path.of("mode-tables/validation/typical-section-lpw.json")), "lpw");
-    demo = write(CaseReader.read(Path.of("mode-tables/demo/demo-case.json")), "demo");
+    lpw = write(SharedResults.lpw(), "lpw");
+    demo = write(SharedResults.demo(), "demo");
   }
 
   static Report write(AnalysisCase c, String name) throws IOException {
     SweepResult result = new CaseSweep(1).run(c, n -> { });
-    List<Finding> findings = Findings.of(result, new PlannedPath(c.sweep()).at(0));
+    return write(new SharedResults.Solved(result, Findings.of(result, new PlannedPath(c.sweep()).at(0))), name);
+  }
+
+  static Report write(SharedResults.Solved solved, String name) throws IOException {
+    SweepResult result = solved.result();
+    List<Finding> findings = solved.findings();
     Path folder = Files.createDirectories(tmp.resolve(name));
     ResultFiles.write(folder, result, findings, "test");
     Path html = ReportWriter.write(folder, result, findings, "test");
@@ -93,7 +98,10 @@ class ReportWriterTest {
         assertTrue(src.group(1).startsWith("data:image/png;base64,"), "embedded image only");
         images++;
       }
-      assertEquals(2 * r.result().configurations().size(), images, "a V-g and a V-f chart per configuration");
+      // open loop: V-g and V-f per configuration; with a loop also closed-loop V-g and V-f, four margin
+      // charts, the root locus, Bode gain and phase, Nichols and (the demo has a notch) the notch chart
+      int perConfiguration = r.result().analysisCase().loop() == null ? 2 : 2 + 2 + 4 + 1 + 3 + 1;
+      assertEquals(perConfiguration * r.result().configurations().size(), images, "charts per configuration");
       Matcher href = Pattern.compile("href=\"([^\"]*)\"").matcher(h);
       while (href.find()) {
         assertTrue(href.group(1).startsWith("#"), "only links inside the page: " + href.group(1));
@@ -110,8 +118,8 @@ class ReportWriterTest {
     for (int i = 0; i < sections.getLength(); i++) {
       ids.add(((Element) sections.item(i)).getAttribute("id"));
     }
-    assertEquals(List.of("summary", "configuration-1", "configuration-2", "diagnostics", "provenance", "cautions"),
-        ids);
+    assertEquals(List.of("summary", "configuration-1", "configuration-2", "loop-1", "loop-2", "requirements",
+        "diagnostics", "provenance", "cautions"), ids);
     Element cautions = (Element) sections.item(sections.getLength() - 1);
     NodeList items = cautions.getElementsByTagName("li");
     assertEquals(Cautions.TEXT.size(), items.getLength());
@@ -165,6 +173,72 @@ class ReportWriterTest {
   }
 
   /**
+   * Every clearance number of the page (verdicts, governing requirement, flutter rule, margin onsets,
+   * the per-requirement and per-speed tables) names its place in results.json by a JSON pointer;
+   * the value there must be the page's full value exactly, and the shown text a correct rounding.
+   */
+  @Test
+  void clearanceNumbersAreTheNumbersOfResultsJson() throws Exception {
+    Document doc = parse(demo.html());
+    NodeList all = doc.getElementsByTagName("*");
+    int checked = 0;
+    List<String> pointers = new ArrayList<>();
+    for (int i = 0; i < all.getLength(); i++) {
+      Element e = (Element) all.item(i);
+      if (!e.hasAttribute("data-json")) {
+        continue;
+      }
+      String pointer = e.getAttribute("data-json");
+      pointers.add(pointer);
+      JsonNode expected = demo.json().at(pointer);
+      assertFalse(expected.isMissingNode(), "results.json has " + pointer);
+      if (expected.isBoolean()) {
+        assertEquals(Boolean.toString(expected.asBoolean()), e.getAttribute("data-value"), pointer);
+        assertEquals(expected.asBoolean() ? "PASS" : "FAIL", e.getTextContent().toUpperCase(), pointer);
+      } else {
+        checkNumber(e, expected, pointer);
+      }
+      checked++;
+    }
+    for (int c = 0; c < demo.result().configurations().size(); c++) {
+      String base = "/configurations/" + c + "/clearance";
+      for (String p : List.of(base + "/passed", base + "/governing/required", base + "/governing/achieved")) {
+        assertTrue(pointers.contains(p), "the summary quotes " + p);
+      }
+      int onsets = demo.json().at(base + "/margin_onsets").size();
+      assertTrue(onsets > 0, "the demo has margin onsets");
+      for (int k = 0; k < onsets; k++) {
+        assertTrue(pointers.contains(base + "/margin_onsets/" + k + "/speed_eas_mps"), "onset " + k + " quoted");
+      }
+      int flutterChecks = demo.json().at(base + "/flutter_rule/checks").size();
+      for (int k = 0; k < flutterChecks; k++) {
+        assertTrue(pointers.contains(base + "/flutter_rule/checks/" + k + "/achieved"), "flutter check quoted");
+        assertTrue(pointers.contains(base + "/flutter_rule/checks/" + k + "/required"), "flutter check quoted");
+      }
+    }
+    assertTrue(checked > 100, "per-speed table and summary carry pointers: " + checked);
+  }
+
+  private static void checkNumber(Element cell, JsonNode expected, String what) {
+    String text = cell.getTextContent();
+    if (expected.isNull()) {
+      assertEquals("null", cell.getAttribute("data-value"), what);
+      return;
+    }
+    double value = Double.parseDouble(cell.getAttribute("data-value"));
+    assertEquals(expected.asDouble(), value, 0.0, what);
+    Matcher m = Pattern.compile("^-?[0-9]+(\\.[0-9]+)?").matcher(text);
+    assertTrue(m.find(), what + ": number shown, got " + text);
+    String shownText = m.group();
+    double shown = Double.parseDouble(shownText);
+    int dot = shownText.indexOf('.');
+    int decimals = dot < 0 ? 0 : shownText.length() - dot - 1;
+    // half a unit of the last shown digit, plus 1e-9 relative for the decimal conversion
+    assertTrue(Math.abs(shown - value) <= 0.5 * Math.pow(10, -decimals) + 1e-9 * Math.abs(value),
+        what + ": shown " + text + " for " + value);
+  }
+
+  /**
    * The cell's full value must be results.json's value exactly (both are Java's shortest
    * round-trip decimal of the same double), and the shown text a correct rounding of it: within
    * half a unit of its last shown digit (plus 1e-9 relative for the decimal conversion).
@@ -198,7 +272,10 @@ class ReportWriterTest {
   void chartFilesAreThePngImagesEmbeddedInThePage() throws IOException {
     for (Report r : List.of(lpw, demo)) {
       for (var c : r.result().configurations()) {
-        for (String kind : List.of("vg-", "vf-")) {
+        List<String> kinds = r.result().analysisCase().loop() == null ? List.of("vg-", "vf-")
+          : List.of("vg-", "vf-", "cl-vg-", "cl-vf-", "margins-gain-", "margins-phase-", "margins-delay-",
+              "margins-structural-", "root-locus-", "bode-gain-", "bode-phase-", "nichols-", "notches-");
+      for (String kind : kinds) {
           Path png = r.folder().resolve("charts").resolve(kind + ResultFiles.fileSafe(c.configuration()) + ".png");
           byte[] bytes = Files.readAllBytes(png);
           // PNG signature, ISO/IEC 15948 (PNG specification), section 5.2

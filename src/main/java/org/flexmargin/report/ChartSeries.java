@@ -1,0 +1,199 @@
+package org.flexmargin.report;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import org.flexmargin.model.ClearanceRequirements;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.Marker;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * Building blocks shared by the loop and clearance charts: a styled chart, line and marker
+ * series with unique names, the vertical speed-regime lines and tidy axis limits. Package
+ * private; the public names of the series are constants of the chart classes.
+ */
+final class ChartSeries {
+  private ChartSeries() {}
+
+  /** Start of the name of the V0max line series. */
+  static final String V0MAX_PREFIX = "V0max";
+  /** Start of the name of the V_L line series. */
+  static final String VL_PREFIX = "V_L";
+
+  /**
+   * @param title chart title
+   * @param xTitle x-axis title with unit
+   * @param yTitle y-axis title with unit
+   * @return an empty chart in the house style
+   */
+  static XYChart chart(String title, String xTitle, String yTitle) {
+    XYChart chart = new XYChartBuilder()
+        .width(ReportStyle.CHART_WIDTH_PX)
+        .height(ReportStyle.CHART_HEIGHT_PX)
+        .title(title)
+        .xAxisTitle(xTitle)
+        .yAxisTitle(yTitle)
+        .build();
+    ReportStyle.apply(chart);
+    return chart;
+  }
+
+  /** Adds a line series without markers; NaN values are gaps. */
+  static XYSeries line(XYChart chart, Set<String> used, String name, double[] x, double[] y, Color color,
+      BasicStroke stroke) {
+    XYSeries s = chart.addSeries(unique(name, used), x, y);
+    s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+    s.setMarker(SeriesMarkers.NONE);
+    s.setLineColor(color);
+    s.setLineStyle(stroke);
+    return s;
+  }
+
+  /** Adds a marker-only series. */
+  static XYSeries markers(XYChart chart, Set<String> used, String name, double[] x, double[] y, Color color,
+      Marker marker) {
+    XYSeries s = chart.addSeries(unique(name, used), x, y);
+    s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+    s.setMarker(marker);
+    s.setMarkerColor(color);
+    return s;
+  }
+
+  /**
+   * Vertical lines at V0max, V_L and the extended speed (factor x V_L) where they lie inside the
+   * plotted speed range; a note for each one outside.
+   *
+   * @param chart chart
+   * @param used series names taken
+   * @param req requirements table
+   * @param unit speed axis unit
+   * @param xRange plotted speed range, display unit
+   * @param yRange plotted y range
+   * @param notes notes to extend
+   */
+  static void regimeLines(XYChart chart, Set<String> used, ClearanceRequirements req, SpeedAxisUnit unit,
+      double[] xRange, double[] yRange, List<String> notes) {
+    double[] speeds = {req.maxOperatingSpeedEasMps(), req.limitSpeedEasMps(), req.extendedSpeedEasMps()};
+    String[] names = regimeLineNames(req, unit);
+    float[][] dash = {{2f, 3f}, {10f, 4f}, {10f, 3f, 2f, 3f}};
+    for (int i = 0; i < 3; i++) {
+      double x = unit.fromMps(speeds[i]);
+      if (x >= xRange[0] && x <= xRange[1]) {
+        line(chart, used, names[i], new double[] {x, x}, new double[] {yRange[0], yRange[1]},
+            ReportStyle.REGIME_LINE, ReportStyle.referenceStroke(1.4f, dash[i]));
+      } else {
+        notes.add(names[i] + " lies outside the plotted speed range.");
+      }
+    }
+  }
+
+  /**
+   * @param req requirements table
+   * @param unit display unit
+   * @return the names of the V0max, V_L and factor x V_L line series
+   */
+  static String[] regimeLineNames(ClearanceRequirements req, SpeedAxisUnit unit) {
+    return new String[] {
+      String.format(Locale.ROOT, "%s = %.1f %s EAS", V0MAX_PREFIX, unit.fromMps(req.maxOperatingSpeedEasMps()),
+          unit.symbol()),
+      String.format(Locale.ROOT, "%s = %.1f %s EAS", VL_PREFIX, unit.fromMps(req.limitSpeedEasMps()), unit.symbol()),
+      String.format(Locale.ROOT, "%.4g %s = %.1f %s EAS", req.extendedSpeedFactor(), VL_PREFIX,
+          unit.fromMps(req.extendedSpeedEasMps()), unit.symbol())
+    };
+  }
+
+  /** @return the name, or the name with " (2)", " (3)"... if taken; records it as taken */
+  static String unique(String name, Set<String> used) {
+    String n = name;
+    for (int i = 2; !used.add(n); i++) {
+      n = name + " (" + i + ")";
+    }
+    return n;
+  }
+
+  /**
+   * Axis limits around data: padded by 6 % of the span, widened to include {@code include},
+   * limited to [floor, ceiling], rounded outwards to a tidy step.
+   *
+   * @param values data (NaN and infinities ignored)
+   * @param include values that must be inside (e.g. requirement values)
+   * @param floor lowest allowed limit
+   * @param ceiling highest allowed limit
+   * @return [low, high]
+   */
+  static double[] range(List<double[]> values, double[] include, double floor, double ceiling) {
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    for (double[] a : values) {
+      for (double v : a) {
+        if (Double.isFinite(v)) {
+          lo = Math.min(lo, v);
+          hi = Math.max(hi, v);
+        }
+      }
+    }
+    for (double v : include) {
+      if (Double.isFinite(v)) {
+        lo = Math.min(lo, v);
+        hi = Math.max(hi, v);
+      }
+    }
+    if (!Double.isFinite(lo)) {
+      lo = 0;
+      hi = 1;
+    }
+    lo = Math.max(lo, floor);
+    hi = Math.min(hi, ceiling);
+    if (!(hi > lo)) {
+      hi = lo + 1;
+    }
+    double pad = 0.06 * (hi - lo);
+    lo = Math.max(lo - pad, floor);
+    hi = Math.min(hi + pad, ceiling);
+    double step = FlutterCharts.niceStep((hi - lo) / 10);
+    return new double[] {Math.floor(lo / step + 1e-9) * step, Math.ceil(hi / step - 1e-9) * step};
+  }
+
+  /**
+   * Counts values outside [lo, hi] (finite only).
+   *
+   * @param y values
+   * @param lo low limit
+   * @param hi high limit
+   * @return {below, above}
+   */
+  static int[] outside(double[] y, double lo, double hi) {
+    int below = 0;
+    int above = 0;
+    for (double v : y) {
+      if (Double.isFinite(v)) {
+        if (v < lo) {
+          below++;
+        } else if (v > hi) {
+          above++;
+        }
+      }
+    }
+    return new int[] {below, above};
+  }
+
+  /** @return x converted to the display unit */
+  static double[] speeds(double[] easMps, SpeedAxisUnit unit) {
+    double[] out = new double[easMps.length];
+    for (int i = 0; i < out.length; i++) {
+      out[i] = unit.fromMps(easMps[i]);
+    }
+    return out;
+  }
+
+  /** @return a list of one array, for {@link #range} */
+  static List<double[]> of(double[]... arrays) {
+    return new ArrayList<>(List.of(arrays));
+  }
+}
