@@ -9,10 +9,6 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
-import org.flexmargin.model.ClearanceRequirements;
-import org.flexmargin.model.FrequencyBand;
-import org.flexmargin.model.MarginCell;
-import org.flexmargin.model.SpeedRegime;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.notch.CheckedPeak;
 import org.flexmargin.notch.DesignedNotch;
@@ -117,21 +113,19 @@ final class NotchDesignCommand implements Callable<Integer> {
     for (String p : paths) {
       idx.add(NotchDesignSpec.pathIndex(c.loop(), p));
     }
-    ClearanceRequirements req = c.requirements();
-    MarginCell rigid = req == null ? null : req.cell(FrequencyBand.RIGID_BODY, SpeedRegime.NORMAL_ENVELOPE);
-    double u = uncertainty != null ? uncertainty : req != null ? req.frequencyUncertainty() : 0.10;
-    double lim = limitDb != null ? limitDb : req != null ? req.structuralPeakLimitDb() : -6.0;
-    double pm = phaseMarginDeg != null ? phaseMarginDeg : rigid != null ? rigid.phaseMarginDeg() : 45.0;
-    double gm = gainMarginDb != null ? gainMarginDb : rigid != null ? rigid.gainMarginDb() : 6.0;
-    double vmax = maxEasMps != null ? maxEasMps : req != null ? req.limitSpeedEasMps() : Double.POSITIVE_INFINITY;
-    NotchDesignSpec s = NotchDesignSpec.defaults().withNotchPaths(idx).withMaxNotches(notches)
-        .withFrequencyUncertainty(u).withPeakLimitDb(lim)
-        .withRequiredMargins(pm, gm)
-        .withExistingNotches(keepExisting ? ExistingNotches.KEEP : ExistingNotches.REPLACE)
-        .withPoints(stride, vmax);
-    if (req != null && phaseMarginDeg == null && gainMarginDb == null) {
-      s = s.withMarginTable(req);
+    NotchDesignSpec s = NotchDesignSpec.forRequirements(c.requirements()).withNotchPaths(idx).withMaxNotches(notches)
+        .withExistingNotches(keepExisting ? ExistingNotches.KEEP : ExistingNotches.REPLACE);
+    if (uncertainty != null) {
+      s = s.withFrequencyUncertainty(uncertainty);
     }
+    if (limitDb != null) {
+      s = s.withPeakLimitDb(limitDb);
+    }
+    if (phaseMarginDeg != null || gainMarginDb != null) {
+      s = s.withRequiredMargins(phaseMarginDeg != null ? phaseMarginDeg : 45.0, gainMarginDb != null ? gainMarginDb : 6.0)
+          .withMarginTable(null);
+    }
+    s = s.withPoints(stride, maxEasMps != null ? maxEasMps : s.maxSpeedEasMps());
     Path target = out != null ? out : Path.of("reports", ResultFiles.fileSafe(c.name()), "notch-design");
     NotchDesigner designer = new NotchDesigner();
     if (checkOnly) {

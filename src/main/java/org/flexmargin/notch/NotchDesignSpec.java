@@ -141,6 +141,25 @@ public record NotchDesignSpec(
         Double.POSITIVE_INFINITY, 0.5, 0.1, null);
   }
 
+  /**
+   * The defaults, with the limit, uncertainty, design envelope (up to the limit speed, where
+   * structural checks stop) and rigid-body margins by speed regime taken from the case's
+   * requirements table when it has one.
+   *
+   * @param requirements the case's table, or null
+   * @return the specification
+   */
+  public static NotchDesignSpec forRequirements(ClearanceRequirements requirements) {
+    NotchDesignSpec d = defaults();
+    if (requirements == null) {
+      return d;
+    }
+    return d.withPeakLimitDb(requirements.structuralPeakLimitDb())
+        .withFrequencyUncertainty(requirements.frequencyUncertainty())
+        .withPoints(d.pointStride(), requirements.limitSpeedEasMps())
+        .withMarginTable(requirements);
+  }
+
   /** @return a copy carrying the notches in the given paths */
   public NotchDesignSpec withNotchPaths(List<Integer> paths) {
     return new NotchDesignSpec(paths, maxNotches, peakLimitDb, frequencyUncertainty, requiredPhaseMarginDeg,

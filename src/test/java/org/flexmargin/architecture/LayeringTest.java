@@ -96,6 +96,12 @@ class LayeringTest {
   }
 
   @Test
+  void notchDesignSitsOnTopOfTheSweep() {
+    onlyDependsOn("notch", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase",
+        "clearance", "sweep");
+  }
+
+  @Test
   void ioReadsIntoModelOnly() {
     onlyDependsOn("io", "model", "atmosphere");
   }
