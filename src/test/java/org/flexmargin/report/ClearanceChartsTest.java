@@ -247,7 +247,7 @@ class ClearanceChartsTest {
           r -> req.cell(b, r).gainMarginDb(), req.extendedSpeedEasMps());
       n += checkSteps(positive(g.getXData(), g.getYData(), false), positiveY(g.getYData(), false),
           r -> -req.cell(b, r).gainMarginDb(), req.extendedSpeedEasMps());
-      // the sweep (20 to 170 m/s) covers all three regimes, two halves each; a zero requirement
+      // the sweep (35 to 170 m/s) covers all three regimes, two halves each; a zero requirement
       // (1.15 V_L column) is counted in both halves
       assertTrue(n >= 5, b + ": segments " + n);
     }

@@ -116,8 +116,8 @@ class FlutterChartsTest {
       // same product speedEasMps * 3600/1852; 1e-12 relative allows a different rounding order
       assertEquals(expected[i], x[i], 1e-12 * expected[i]);
     }
-    // the axis spans the sweep: 20 to 170 m/s EAS (demo-case.json) in knots, 1 kt = 1852/3600 m/s
-    assertEquals(20.0 * 3600 / 1852, chart.getStyler().getXAxisMin(), 1e-9);
+    // the axis spans the sweep: 35 to 170 m/s EAS (demo-case.json) in knots, 1 kt = 1852/3600 m/s
+    assertEquals(35.0 * 3600 / 1852, chart.getStyler().getXAxisMin(), 1e-9);
     assertEquals(170.0 * 3600 / 1852, chart.getStyler().getXAxisMax(), 1e-9);
   }
 
