@@ -9,7 +9,10 @@ import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.report.ReportFolder;
+import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
+import org.flexmargin.report.SpeedAxisUnit;
 import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
@@ -49,6 +52,7 @@ final class SweepCommand implements Callable<Integer> {
   static int run(picocli.CommandLine.Model.CommandSpec spec, Path caseFile, Path outDir, CommonOptions common) {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
+    ReportOptions reportOptions = reportOptions(common);
     AnalysisCase c = CaseReader.read(caseFile);
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, c.configurations().size() * SweepProgress.stagesPerConfiguration(c),
@@ -59,7 +63,7 @@ final class SweepCommand implements Callable<Integer> {
     Path target = outDir != null ? outDir : Path.of("reports", ResultFiles.fileSafe(c.name()));
     Path written = ReportFolder.writeAtomically(target, folder -> {
       ResultFiles.write(folder, result, findings, Version.get());
-      ReportWriter.write(folder, result, findings, Version.get());
+      ReportWriter.write(folder, result, findings, Version.get(), reportOptions);
     });
     if (!common.quiet) {
       out.println("case " + c.name() + ": " + result.pathDescription());
@@ -86,6 +90,15 @@ final class SweepCommand implements Callable<Integer> {
     boolean failed = result.configurations().stream()
         .anyMatch(r -> r.clearance() != null && !r.clearance().passed());
     return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
+  }
+
+  static ReportOptions reportOptions(CommonOptions common) {
+    SpeedAxisUnit unit = switch (common.speedUnit) {
+      case "mps" -> SpeedAxisUnit.METRES_PER_SECOND;
+      case "kt" -> SpeedAxisUnit.KNOTS;
+      default -> throw new InvalidInputException("--speed-unit", "mps or kt", "\"" + common.speedUnit + "\"");
+    };
+    return new ReportOptions(unit, !common.noSvg);
   }
 
   private static void clearance(PrintWriter out, SweepResult result, boolean colour) {
