@@ -9,7 +9,11 @@ import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.InputFile;
+import org.flexmargin.model.FeedbackPath;
+import org.flexmargin.model.LoopSpec;
+import org.flexmargin.model.SensorSpec;
 import org.flexmargin.sweep.ConfigurationModel;
+import org.flexmargin.sweep.ServoMargins;
 import org.flexmargin.sweep.PlannedPath;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -37,8 +41,8 @@ final class CheckCommand implements Callable<Integer> {
     out.println("sweep: " + path.describe());
     out.printf(Locale.ROOT, "  first point: %s%n", Tables.condition(path.at(0)));
     out.printf(Locale.ROOT, "  last point:  %s%n", Tables.condition(path.at(path.gridPoints() - 1)));
-    out.printf(Locale.ROOT, "method: %s, damping limit g = %.3f%n",
-        c.options().method().name().toLowerCase(Locale.ROOT), c.options().dampingLimitG());
+    out.printf(Locale.ROOT, "method: %s, damping limit g = %.3f%n", c.options().method().label(),
+        c.options().dampingLimitG());
     for (Configuration cfg : c.configurations()) {
       ConfigurationModel m = ConfigurationModel.of(cfg);
       out.printf(Locale.ROOT, "configuration %s: %d elastic modes; aerodynamics: %s%n",
@@ -47,6 +51,35 @@ final class CheckCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "  %-28s %9.3f Hz  zeta %.4f  generalized mass %.4g kg%n",
             mode.name(), mode.frequencyHz(), mode.dampingRatio(), mode.generalizedMassKg());
       }
+    }
+    if (c.loop() != null) {
+      LoopSpec loop = c.loop();
+      out.printf(Locale.ROOT, "loop: %s actuator %.1f Hz, delay %.4f s, sample period %.4f s, Pade order %d%n",
+          loop.actuator().order().name().toLowerCase(Locale.ROOT), loop.actuator().bandwidthHz(),
+          loop.computationDelayS(), loop.samplePeriodS(), loop.padeOrder());
+      for (SensorSpec sensor : loop.sensors()) {
+        out.printf(Locale.ROOT, "  sensor %-16s %-22s at %-12s bandwidth %s%n", sensor.name(),
+            sensor.kind().name().toLowerCase(Locale.ROOT), sensor.station(),
+            sensor.bandwidthHz() > 0 ? String.format(Locale.ROOT, "%.1f Hz", sensor.bandwidthHz()) : "ideal");
+      }
+      for (FeedbackPath fp : loop.paths()) {
+        out.printf(Locale.ROOT, "  path from %-12s Kp %.4g, Ki %.4g 1/s, %d filter(s), schedule %s%n", fp.sensor(),
+            fp.proportionalGain(), fp.integralGainPerS(), fp.filters().size(),
+            fp.schedule().dynamicPressurePa().length > 1 ? "on dynamic pressure" : "constant");
+      }
+      for (Configuration cfg : c.configurations()) {
+        double[] sp = ServoMargins.loopAt(ConfigurationModel.of(cfg), cfg, loop, path.at(0)).plant().shortPeriodRoots();
+        out.printf(Locale.ROOT, "  %s airframe alone at the first point: short-period roots %.3f%+.3fi and %.3f%+.3fi 1/s%s%n",
+            cfg.name(), sp[0], sp[1], sp[2], sp[3], Math.max(sp[0], sp[2]) > 0 ? " (unstable: the loop must stabilise it)" : "");
+      }
+    }
+    if (c.requirements() != null) {
+      out.printf(Locale.ROOT, "requirements: V0max %.1f m/s EAS, V_L %.1f m/s EAS, flutter-free to %.3f x V_L, "
+          + "damping g >= %.3f, structural limit %.1f dB, uncertainty +-%.0f %%%n",
+          c.requirements().maxOperatingSpeedEasMps(), c.requirements().limitSpeedEasMps(),
+          c.requirements().flutterSpeedFactor(), c.requirements().minimumDampingG(),
+          c.requirements().structuralPeakLimitDb(), 100 * c.requirements().frequencyUncertainty());
+      out.println("  source: " + c.requirements().source());
     }
     out.println("inputs:");
     for (InputFile f : c.inputs()) {
