@@ -310,26 +310,8 @@ public final class StateSpaceMethod implements FlutterMethod {
     for (int j = 0; j < n; j++) {
       curves.add(BranchCurve.of(tr.names.get(j), path, roots, j, f.referenceSemichordM()));
     }
-    List<FlutterCrossing> crossings = new ArrayList<>();
-    double[] levels = options.dampingLimitG() > 0
-        ? new double[] {0.0, -options.dampingLimitG()} : new double[] {0.0};
-    for (int j = 0; j < n; j++) {
-      for (int p = 0; p + 1 < np; p++) {
-        Root a = roots[p][j];
-        Root b = roots[p + 1][j];
-        if (!a.converged() || !b.converged()) {
-          continue;
-        }
-        for (double level : levels) {
-          double fa = a.crossingFunction(level);
-          double fb = b.crossingFunction(level);
-          if ((fa < 0 && fb >= 0) || (fa > 0 && fb <= 0)) {
-            crossings.add(tr.refine(j, p, roots[p], fa, level, options));
-          }
-        }
-      }
-    }
-    crossings.sort(Comparator.comparingDouble(FlutterCrossing::pathParameter));
+    List<FlutterCrossing> crossings = CrossingScan.scan(roots, options,
+        (j, p, fa, level) -> tr.refine(j, p, roots[p], fa, level, options));
     tr.staticCrossings(spectra, roots);
     tr.finishWarnings();
     return new FlutterSolution(FlutterMethodKind.STATE_SPACE, curves, crossings, tr.counters.toDiagnostics(),
