@@ -1,7 +1,6 @@
 package org.flexmargin.flutter;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;

@@ -18,7 +18,6 @@ import org.flexmargin.flutter.StateSpaceMethod;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
-import org.flexmargin.model.FlutterMethodKind;
 
 /**
  * Runs the analysis of every configuration of a case: divergence (direct and confirmed over the
