@@ -473,28 +473,41 @@ public final class StateSpaceMethod implements FlutterMethod {
           pairs.add(new double[] {-share / (1 + distance), j, c});
         }
       }
-      pairs.sort(Comparator.comparingDouble(x -> x[0]));
+      boolean[] taken = new boolean[sp.size()];
+      int[] assigned = assignCheapestFirst(pairs, n, taken);
       Root[] roots = new Root[n];
+      for (int j = 0; j < n; j++) {
+        if (assigned[j] < 0) {
+          roots[j] = lost();
+        } else {
+          roots[j] = root(sp, assigned[j]);
+          counters.rootSolves++;
+        }
+      }
+      return new Match(roots, assigned, sp, 1.0, true);
+    }
+
+    /**
+     * Sorts candidate (cost, branch, root) triples and assigns each branch its cheapest free root.
+     *
+     * @param pairs candidates {cost, branch, root index}. Modified (sorted).
+     * @param n number of branches
+     * @param taken roots already taken. Modified.
+     * @return root index per branch, -1 where none was left
+     */
+    private static int[] assignCheapestFirst(List<double[]> pairs, int n, boolean[] taken) {
+      pairs.sort(Comparator.comparingDouble(x -> x[0]));
       int[] assigned = new int[n];
       Arrays.fill(assigned, -1);
-      boolean[] taken = new boolean[sp.size()];
       for (double[] pr : pairs) {
         int j = (int) pr[1];
         int c = (int) pr[2];
         if (assigned[j] < 0 && !taken[c]) {
           assigned[j] = c;
           taken[c] = true;
-          roots[j] = root(sp, c);
         }
       }
-      for (int j = 0; j < n; j++) {
-        if (roots[j] == null) {
-          roots[j] = lost();
-        } else {
-          counters.rootSolves++;
-        }
-      }
-      return new Match(roots, assigned, sp, 1.0, true);
+      return assigned;
     }
 
     private Match failed(ArithmeticException e) {
@@ -558,18 +571,8 @@ public final class StateSpaceMethod implements FlutterMethod {
           pairs.add(new double[] {d + (1 - mac), j, c});
         }
       }
-      pairs.sort(Comparator.comparingDouble(x -> x[0]));
-      int[] assigned = new int[n];
-      Arrays.fill(assigned, -1);
       boolean[] taken = new boolean[sp.size()];
-      for (double[] pr : pairs) {
-        int j = (int) pr[1];
-        int c = (int) pr[2];
-        if (assigned[j] < 0 && !taken[c]) {
-          assigned[j] = c;
-          taken[c] = true;
-        }
-      }
+      int[] assigned = assignCheapestFirst(pairs, n, taken);
       // split rule: a pair that has just reached the real axis is followed along its larger root
       for (int j = 0; j < n; j++) {
         int c = assigned[j];
