@@ -13,7 +13,9 @@ import picocli.CommandLine.Command;
     mixinStandardHelpOptions = true,
     versionProvider = Version.class,
     description = {
-      "Aeroelastic stability analysis: divergence and flutter versus airspeed.",
+      "Aeroelastic and aeroservoelastic clearance: divergence, flutter (open and closed loop), loop "
+          + "margins against a requirements table, structural notch placement, and the report of margin "
+          + "versus airspeed.",
       "",
       "Analysis only: results support, and never replace, ground vibration tests, structural-coupling "
           + "tests, flight flutter testing and the approval of the airworthiness authority."
@@ -26,6 +28,7 @@ import picocli.CommandLine.Command;
       "  flexmargin demo",
       "  flexmargin check mode-tables/validation/goland-wing.json",
       "  flexmargin sweep mode-tables/demo/demo-case.json --out reports/demo",
+      "  flexmargin notch-design mode-tables/demo/demo-case.json",
       "",
       "Exit codes: 0 done, 1 internal error, 2 bad input, 3 done with requirements violated."
     })

@@ -29,8 +29,10 @@ import picocli.CommandLine.Spec;
 
 /** {@code flexmargin sweep CASE}: the main job. */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
-    description = {"Sweep airspeed: divergence speed and every flutter onset (refined between grid points), "
-        + "written as JSON and CSV under reports/<case>/."},
+    description = {"Sweep airspeed: divergence speed and every open-loop flutter onset; with a loop, the loop "
+        + "margins at every speed and the closed-loop onsets; with a requirements table, pass/fail and the "
+        + "speed at which each requirement is first lost. Onsets are refined between grid points. Writes "
+        + "report.html, charts, JSON and CSV under reports/<case>/ (exit 3 when a requirement is violated)."},
     footer = {"", "Examples:", "  flexmargin sweep mode-tables/demo/demo-case.json",
         "  flexmargin sweep mode-tables/validation/goland-wing.json --out /tmp/goland --quiet"})
 final class SweepCommand implements Callable<Integer> {
