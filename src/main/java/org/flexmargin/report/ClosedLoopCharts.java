@@ -176,8 +176,16 @@ public final class ClosedLoopCharts {
       double[] y = new double[onsets.size()];
       for (int i = 0; i < x.length; i++) {
         y[i] = 2 * Math.PI * onsets.get(i).frequencyHz();
+        // a root crossing the axis twice at nearly the same frequency: stack its labels downwards
+        int stacked = 0;
+        for (int k = 0; k < i; k++) {
+          if (Math.abs(y[k] - y[i]) < 0.05 * yMax) {
+            stacked++;
+          }
+        }
         chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f %s", unit.fromMps(
-            onsets.get(i).condition().speedEasMps()), unit.symbol()), x[i] + 0.075 * (xHi - xLo), y[i], false));
+            onsets.get(i).condition().speedEasMps()), unit.symbol()), x[i] + 0.075 * (xHi - xLo),
+            y[i] - stacked * 0.045 * yMax, false));
       }
       ChartSeries.markers(chart, used, markerSeries(CrossingKind.FLUTTER_ONSET), x, y, ReportStyle.ONSET,
           SeriesMarkers.DIAMOND);
