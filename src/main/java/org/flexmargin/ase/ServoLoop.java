@@ -49,25 +49,18 @@ public final class ServoLoop {
    * @return L as a frequency function
    */
   public SisoFrequencyFunction brokenLoop() {
-    AircraftPlant.FrequencyEvaluator eval = plant.frequencyEvaluator();
-    int ns = plant.sensors().size();
-    double[] sensorResponse = new double[2 * ns];
-    double[] block = new double[2];
-    int[] index = law.pathSensorIndex();
+    PathTerms terms = new PathTerms();
+    double[] g = new double[2 * terms.count()];
     return (w, reIm) -> {
-      eval.response(w, sensorResponse);
+      terms.evaluate(w, g);
       double sumR = 0;
       double sumI = 0;
-      for (int p = 0; p < index.length; p++) {
-        law.paths().get(p).response(w, block);
-        double pr = sensorResponse[2 * index[p]];
-        double pi = sensorResponse[2 * index[p] + 1];
-        sumR += block[0] * pr - block[1] * pi;
-        sumI += block[0] * pi + block[1] * pr;
+      for (int p = 0; p < terms.count(); p++) {
+        sumR += g[2 * p];
+        sumI += g[2 * p + 1];
       }
-      law.forward().response(w, block);
-      reIm[0] = -(block[0] * sumR - block[1] * sumI);
-      reIm[1] = -(block[0] * sumI + block[1] * sumR);
+      reIm[0] = -sumR;
+      reIm[1] = -sumI;
     };
   }
 
@@ -80,39 +73,23 @@ public final class ServoLoop {
    * @return L_p as a frequency function
    */
   public SisoFrequencyFunction brokenAtPath(int path) {
-    AircraftPlant.FrequencyEvaluator eval = plant.frequencyEvaluator();
-    int ns = plant.sensors().size();
-    double[] sensorResponse = new double[2 * ns];
-    double[] block = new double[2];
-    double[] fwd = new double[2];
-    int[] index = law.pathSensorIndex();
-    if (path < 0 || path >= index.length) {
-      throw new IllegalArgumentException("path " + path + " of " + index.length);
+    PathTerms terms = new PathTerms();
+    if (path < 0 || path >= terms.count()) {
+      throw new IllegalArgumentException("path " + path + " of " + terms.count());
     }
+    double[] g = new double[2 * terms.count()];
     return (w, reIm) -> {
-      eval.response(w, sensorResponse);
-      law.forward().response(w, fwd);
-      double ownR = 0;
-      double ownI = 0;
+      terms.evaluate(w, g);
       double restR = 0;
       double restI = 0;
-      for (int p = 0; p < index.length; p++) {
-        law.paths().get(p).response(w, block);
-        double pr = sensorResponse[2 * index[p]];
-        double pi = sensorResponse[2 * index[p] + 1];
-        // C_p P_p F
-        double cr = block[0] * pr - block[1] * pi;
-        double ci = block[0] * pi + block[1] * pr;
-        double gr = cr * fwd[0] - ci * fwd[1];
-        double gi = cr * fwd[1] + ci * fwd[0];
-        if (p == path) {
-          ownR = gr;
-          ownI = gi;
-        } else {
-          restR += gr;
-          restI += gi;
+      for (int p = 0; p < terms.count(); p++) {
+        if (p != path) {
+          restR += g[2 * p];
+          restI += g[2 * p + 1];
         }
       }
+      double ownR = g[2 * path];
+      double ownI = g[2 * path + 1];
       // -own / (1 - rest)
       double dr = 1 - restR;
       double di = -restI;
@@ -120,6 +97,37 @@ public final class ServoLoop {
       reIm[0] = -(ownR * dr + ownI * di) / d2;
       reIm[1] = -(ownI * dr - ownR * di) / d2;
     };
+  }
+
+  /**
+   * Workspace evaluating each path's contribution C_p(jw) P_p(jw) F(jw) to the chain from the
+   * actuator command back to the law's output. Not thread-safe.
+   */
+  private final class PathTerms {
+    private final AircraftPlant.FrequencyEvaluator eval = plant.frequencyEvaluator();
+    private final double[] sensorResponse = new double[2 * plant.sensors().size()];
+    private final double[] block = new double[2];
+    private final double[] fwd = new double[2];
+    private final int[] index = law.pathSensorIndex();
+
+    int count() {
+      return index.length;
+    }
+
+    /** Writes C_p P_p F at w (rad/s) into g[2p], g[2p+1]. */
+    void evaluate(double w, double[] g) {
+      eval.response(w, sensorResponse);
+      law.forward().response(w, fwd);
+      for (int p = 0; p < index.length; p++) {
+        law.paths().get(p).response(w, block);
+        double pr = sensorResponse[2 * index[p]];
+        double pi = sensorResponse[2 * index[p] + 1];
+        double cr = block[0] * pr - block[1] * pi;
+        double ci = block[0] * pi + block[1] * pr;
+        g[2 * p] = cr * fwd[0] - ci * fwd[1];
+        g[2 * p + 1] = cr * fwd[1] + ci * fwd[0];
+      }
+    }
   }
 
   /**

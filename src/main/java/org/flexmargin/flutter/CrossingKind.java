@@ -19,6 +19,18 @@ public enum CrossingKind {
   /** g falls through minus the damping limit: the damping is back above the required minimum. */
   DAMPING_ABOVE_LIMIT;
 
+  /**
+   * @param levelG the g level crossed: 0, or minus the damping limit
+   * @param rising whether g rises through the level with speed
+   * @return the kind of that crossing
+   */
+  public static CrossingKind of(double levelG, boolean rising) {
+    if (levelG == 0) {
+      return rising ? FLUTTER_ONSET : FLUTTER_RECOVERY;
+    }
+    return rising ? DAMPING_BELOW_LIMIT : DAMPING_ABOVE_LIMIT;
+  }
+
   /** @return true for the two zero-damping kinds */
   public boolean isStabilityChange() {
     return this == FLUTTER_ONSET || this == FLUTTER_RECOVERY;

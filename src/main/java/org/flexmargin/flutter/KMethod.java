@@ -129,7 +129,7 @@ public final class KMethod implements FlutterMethod {
     double omega = 1 / Math.sqrt(lambda[0]);
     double v = omega * b / k;
     return new FlutterCrossing(branch, name,
-        rising ? CrossingKind.FLUTTER_ONSET : CrossingKind.FLUTTER_RECOVERY,
+        CrossingKind.of(0.0, rising),
         k, base.withSpeedTasMps(v), omega / (2 * Math.PI), 0.0, evaluations, 1e-10 * kA);
   }
 

@@ -273,12 +273,7 @@ public final class PkMethod implements FlutterMethod {
     }
     Root at = track(ws, path, p, left, t, options, 0);
     boolean rising = fLeft < 0;
-    CrossingKind kind;
-    if (level == 0) {
-      kind = rising ? CrossingKind.FLUTTER_ONSET : CrossingKind.FLUTTER_RECOVERY;
-    } else {
-      kind = rising ? CrossingKind.DAMPING_BELOW_LIMIT : CrossingKind.DAMPING_ABOVE_LIMIT;
-    }
+    CrossingKind kind = CrossingKind.of(level, rising);
     return new FlutterCrossing(branch, name, kind, t, path.at(t), at.frequencyHz(), level, evaluations,
         absAccuracy);
   }

@@ -737,12 +737,7 @@ public final class StateSpaceMethod implements FlutterMethod {
       }
       Root at = step(p, left, t, 0).roots()[branch];
       boolean rising = fLeft < 0;
-      CrossingKind kind;
-      if (level == 0) {
-        kind = rising ? CrossingKind.FLUTTER_ONSET : CrossingKind.FLUTTER_RECOVERY;
-      } else {
-        kind = rising ? CrossingKind.DAMPING_BELOW_LIMIT : CrossingKind.DAMPING_ABOVE_LIMIT;
-      }
+      CrossingKind kind = CrossingKind.of(level, rising);
       return new FlutterCrossing(branch, names.get(branch), kind, t, path.at(t),
           at.converged() ? at.frequencyHz() : Double.NaN, level, evaluations, absAccuracy);
     }

@@ -219,7 +219,7 @@ public final class MarginCharts {
       if (!any && band != FrequencyBand.RIGID_BODY) {
         continue;
       }
-      int ci = band.ordinal() == 1 ? 0 : band.ordinal() == 2 ? 1 : 2;
+      int ci = bandColorIndex(band);
       curves.put(gainSeries(true, band), inc);
       curves.put(gainSeries(false, band), red);
       colors.put(gainSeries(true, band), ReportStyle.seriesColor(ci));
@@ -272,10 +272,8 @@ public final class MarginCharts {
       if (!hasData(pm) && band != FrequencyBand.RIGID_BODY) {
         continue;
       }
-      int ci = band.ordinal() == 1 ? 0 : band.ordinal() == 2 ? 1 : 2;
-      curves.put(phaseSeries(band), pm);
-      colors.put(phaseSeries(band), ReportStyle.seriesColor(ci));
-      strokes.put(phaseSeries(band), ReportStyle.seriesStroke(0));
+      int ci = bandColorIndex(band);
+      putCurve(curves, colors, strokes, phaseSeries(band), pm, ci);
       all.add(pm);
       if (!hasData(pm)) {
         notes.add("No gain crossover in the " + bandWords(band) + " band at any grid point.");
@@ -315,10 +313,8 @@ public final class MarginCharts {
       if (!hasData(dm) && band != FrequencyBand.RIGID_BODY) {
         continue;
       }
-      int ci = band.ordinal() == 1 ? 0 : band.ordinal() == 2 ? 1 : 2;
-      curves.put(delaySeries(band), dm);
-      colors.put(delaySeries(band), ReportStyle.seriesColor(ci));
-      strokes.put(delaySeries(band), ReportStyle.seriesStroke(0));
+      int ci = bandColorIndex(band);
+      putCurve(curves, colors, strokes, delaySeries(band), dm, ci);
       all.add(dm);
     }
     double lo = Double.POSITIVE_INFINITY;
@@ -583,5 +579,18 @@ public final class MarginCharts {
       }
     }
     return Double.NaN;
+  }
+
+  /** Colour index of a frequency band: rigid body first, then aeroelastic, then low frequency. */
+  private static int bandColorIndex(FrequencyBand band) {
+    return band == FrequencyBand.RIGID_BODY ? 0 : band == FrequencyBand.AEROELASTIC ? 1 : 2;
+  }
+
+  /** Adds one solid curve of colour index ci. */
+  private static void putCurve(Map<String, double[]> curves, Map<String, Color> colors,
+      Map<String, BasicStroke> strokes, String name, double[] data, int ci) {
+    curves.put(name, data);
+    colors.put(name, ReportStyle.seriesColor(ci));
+    strokes.put(name, ReportStyle.seriesStroke(0));
   }
 }

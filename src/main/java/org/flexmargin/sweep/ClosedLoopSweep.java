@@ -68,11 +68,15 @@ public final class ClosedLoopSweep {
     int np = path.gridPoints();
     double[][] re = new double[np][];
     double[][] im = new double[np][];
+    double[][] shortPeriod = new double[np][];
     int[] solves = {0};
     for (int p = 0; p < np; p++) {
-      Eigenvalues e = eigenvaluesAt(model, configuration, loop, path.at(p), rational, solves);
+      ServoLoop servo = ServoMargins.loopAt(model, configuration, loop, path.at(p));
+      solves[0]++;
+      Eigenvalues e = servo.closedLoop(rational).eigenvalues();
       re[p] = e.real();
       im[p] = e.imag();
+      shortPeriod[p] = servo.plant().shortPeriodRoots();
     }
     int n = re[0].length;
     // order[p][j]: index at point p of branch j (nearest-neighbour continuation)
@@ -86,7 +90,7 @@ public final class ClosedLoopSweep {
     List<ClosedLoopPoint> points = new ArrayList<>();
     for (int p = 0; p < np; p++) {
       FlightCondition fc = path.at(p);
-      double[] sp = ServoMargins.loopAt(model, configuration, loop, fc).plant().shortPeriodRoots();
+      double[] sp = shortPeriod[p];
       List<ClosedLoopRoot> roots = new ArrayList<>();
       for (int i = 0; i < n; i++) {
         if (im[p][i] >= 0) {
@@ -109,8 +113,7 @@ public final class ClosedLoopSweep {
           double fa = crossing(re[p][ia], im[p][ia], level);
           double fb = crossing(re[p + 1][ib], im[p + 1][ib], level);
           if ((fa < 0 && fb >= 0) || (fa > 0 && fb <= 0)) {
-            String name = label(re[p][ia], im[p][ia], openLoop, p,
-                ServoMargins.loopAt(model, configuration, loop, path.at(p)).plant().shortPeriodRoots());
+            String name = label(re[p][ia], im[p][ia], openLoop, p, shortPeriod[p]);
             crossings.add(refine(model, configuration, loop, path, rational, p, re[p][ia], im[p][ia],
                 re[p + 1][ib], im[p + 1][ib], fa < 0, level, j, name, options, solves));
           }
@@ -211,9 +214,7 @@ public final class ClosedLoopSweep {
       evaluations = BRENT_MAX_EVALUATIONS;
     }
     nearest(eigenvaluesAt(model, configuration, loop, path.at(t), rational, solves), reA, imA, reB, imB, t - p, at);
-    CrossingKind kind = level == 0
-        ? (rising ? CrossingKind.FLUTTER_ONSET : CrossingKind.FLUTTER_RECOVERY)
-        : (rising ? CrossingKind.DAMPING_BELOW_LIMIT : CrossingKind.DAMPING_ABOVE_LIMIT);
+    CrossingKind kind = CrossingKind.of(level, rising);
     return new FlutterCrossing(branch, name, kind, t, path.at(t), Math.abs(at[1]) / (2 * Math.PI), level,
         evaluations, abs);
   }
