@@ -13,7 +13,10 @@ public enum CheckUnit {
   DEGREE("deg", 5.0),
   /** Metres per second, equivalent airspeed; least scale 1 m/s. */
   METRE_PER_SECOND_EAS("m/s EAS", 1.0),
-  /** Structural damping coefficient g, V-g sign convention; least scale 0.005. */
+  /**
+   * Damping as a structural damping coefficient g, positive = damped (g ~ 2 zeta; the V-g charts
+   * draw the same number with the opposite sign); least scale 0.005.
+   */
   DAMPING_G("g", 0.005),
   /** Stable (+1) or unstable (-1) against a requirement of 0; least scale 1. */
   STABILITY("", 1.0);

@@ -13,10 +13,12 @@ import org.flexmargin.model.InvalidInputException;
  * (1.15 recalled from MIL-A-8870C, and the +15 % EAS enlargement of 14 CFR/CS 25.629), and every
  * root at least the minimum damping up to V_L (g &gt;= 0.03 recalled from MIL-A-8870C).
  *
- * <p>Damping is in the V-g sign convention used by the flutter solvers: g = 2 Re(s)/Im(s),
- * negative = stable, g ~ -2 zeta. The damping requirement therefore reads: the highest g of any
- * root at any analysed speed V &lt;= V_L is at most -minimumDampingG. Both edges pass: an onset
- * exactly at factor x V_L, and a highest g exactly at -minimumDampingG.
+ * <p>Damping requirements are stated as a positive required damping (docs/verdict.md): the
+ * check's required value is the minimum damping g (e.g. 0.03) and its achieved value the least
+ * damping of any root up to V_L, -g_Vg, where g_Vg = 2 Re(s)/Im(s) is the V-g value the solvers
+ * and charts use (negative = stable, g ~ -2 zeta). A highest g_Vg of +0.02 is therefore an
+ * achieved damping of -0.02 against the required 0.03: fail. Both edges pass: an onset exactly at
+ * factor x V_L, and a least damping exactly at the minimum.
  *
  * <p>A search that found no onset clears the speed requirement only if it reached factor x V_L;
  * its achieved value is then the highest speed analysed.
@@ -74,6 +76,11 @@ public final class FlutterClearanceRule {
         achieved = s.onsetEasMps().getAsDouble();
         text = String.format(Locale.ROOT, "%s flutter onset speed against %.4g x V_L", words,
             requirements.flutterSpeedFactor());
+      } else if (s.trackingInDoubt()) {
+        achieved = s.highestAnalysedEasMps();
+        text = String.format(Locale.ROOT, "%s: UNRELIABLE, mode tracking in doubt above %.4g m/s EAS, so no "
+            + "flutter-free speed is claimed beyond it, against %.4g x V_L", words, achieved,
+            requirements.flutterSpeedFactor());
       } else {
         achieved = s.highestAnalysedEasMps();
         text = String.format(Locale.ROOT,
@@ -91,10 +98,9 @@ public final class FlutterClearanceRule {
           CheckUnit.METRE_PER_SECOND_EAS, RequiredSense.AT_LEAST, Double.NaN));
     }
     checks.add(ClearanceCheck.of(CheckKind.MINIMUM_DAMPING, "",
-        String.format(Locale.ROOT, "least damping up to V_L: highest g (V-g, negative stable)"
-            + " against -%.4g", requirements.minimumDampingG()),
-        -requirements.minimumDampingG(), highestDampingGUpToLimitSpeed, CheckUnit.DAMPING_G,
-        RequiredSense.AT_MOST, Double.NaN));
+        "least damping of any root up to V_L, as g (positive = damped, g ~ 2 zeta)",
+        requirements.minimumDampingG(), -highestDampingGUpToLimitSpeed, CheckUnit.DAMPING_G,
+        RequiredSense.AT_LEAST, Double.NaN));
     return new FlutterClearance(requirements.limitSpeedEasMps(), required, checks);
   }
 }

@@ -12,10 +12,13 @@ import org.flexmargin.model.InvalidInputException;
  *     {@code "closed_loop"} (with the flight control loop)
  * @param onsetEasMps lowest speed at which a root becomes unstable (g rises through 0, V-g
  *     convention), m/s EAS; empty if none was found in the analysed range
- * @param highestAnalysedEasMps top of the analysed range, m/s EAS (&gt;= the onset)
+ * @param highestAnalysedEasMps top of the analysed range, m/s EAS (&gt;= the onset); when tracking was
+ *     in doubt, the last speed up to which it can be trusted
+ * @param trackingInDoubt true when mode tracking was in doubt above {@code highestAnalysedEasMps}:
+ *     no flutter-free speed is claimed beyond it
  */
 public record OnsetSearch(String label, OptionalDouble onsetEasMps,
-    double highestAnalysedEasMps) {
+    double highestAnalysedEasMps, boolean trackingInDoubt) {
   /** Label of the open-loop (controls fixed) search. */
   public static final String OPEN_LOOP = "open_loop";
   /** Label of the closed-loop (flight control loop closed) search. */
@@ -36,6 +39,26 @@ public record OnsetSearch(String label, OptionalDouble onsetEasMps,
             String.valueOf(v));
       }
     }
+  }
+
+  /** A search whose tracking was clean throughout. */
+  public OnsetSearch(String label, OptionalDouble onsetEasMps, double highestAnalysedEasMps) {
+    this(label, onsetEasMps, highestAnalysedEasMps, false);
+  }
+
+  /**
+   * A search trusted only up to a speed: an onset at or below it counts, anything beyond does not.
+   *
+   * @param label the search
+   * @param onsetEasMps lowest onset found, m/s EAS, or empty
+   * @param trustedUpToEasMps last speed where tracking can be trusted, m/s EAS
+   * @return the search, marked in doubt unless the onset lies within the trusted range
+   */
+  public static OnsetSearch trustedUpTo(String label, OptionalDouble onsetEasMps, double trustedUpToEasMps) {
+    if (onsetEasMps.isPresent() && onsetEasMps.getAsDouble() <= trustedUpToEasMps) {
+      return new OnsetSearch(label, onsetEasMps, trustedUpToEasMps, false);
+    }
+    return new OnsetSearch(label, OptionalDouble.empty(), trustedUpToEasMps, true);
   }
 
   /**

@@ -42,6 +42,8 @@ public final class FlexMargin implements Runnable {
   public static final int EXIT_BAD_INPUT = 2;
   /** Exit code: done with requirements violated. */
   public static final int EXIT_REQUIREMENTS_VIOLATED = 3;
+  /** Exit code: done, no requirement violated, but some findings are unreliable (mode tracking in doubt). */
+  public static final int EXIT_UNRELIABLE = 4;
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 

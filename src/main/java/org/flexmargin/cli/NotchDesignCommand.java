@@ -6,6 +6,10 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.flexmargin.clearance.CheckUnit;
+import org.flexmargin.clearance.ClearanceCheck;
+import org.flexmargin.clearance.RankedFinding;
+import org.flexmargin.clearance.RequiredSense;
 import java.util.concurrent.Callable;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
@@ -234,17 +238,41 @@ final class NotchDesignCommand implements Callable<Integer> {
   }
 
   private static void printCheck(PrintWriter pw, RobustnessCheckResult r) {
-    pw.printf(Locale.ROOT, "case %s: check of the case's own filters, limit %.1f dB, uncertainty +-%.0f %%%n",
-        r.caseName(), r.spec().peakLimitDb(), 100 * r.spec().frequencyUncertainty());
+    pw.printf(Locale.ROOT, "case %s: check of the case's own filters against the requirements table (the rules of "
+        + "sweep), limit %.1f dB, frequency uncertainty +-%.0f %%%n", r.caseName(), r.spec().peakLimitDb(),
+        100 * r.spec().frequencyUncertainty());
     pw.println(r.passes() ? "result: passes" : "result: DOES NOT PASS");
-    String h = String.format(Locale.ROOT, "%-22s %10s %10s  %-26s", "mode", "worst dB", "at Hz", "where");
-    pw.println(h);
-    pw.println("-".repeat(h.length()));
-    for (ModePeak p : r.peaks()) {
-      pw.printf(Locale.ROOT, "%-22s %10.2f %10.2f  %-26s%n", p.mode(), p.peakDb(), p.frequencyHz(), where(p));
+    for (RobustnessCheckResult.ConfigurationVerdict v : r.configurations()) {
+      pw.println();
+      pw.print("  " + v.configuration() + ": " + (v.clearance().passed() ? "PASS" : "FAIL"));
+      v.clearance().governingFinding().ifPresent(g -> pw.print("; governing: " + g.describe()));
+      pw.println();
+      String h = String.format(Locale.ROOT, "    %-34s %-22s %-6s %10s %12s %12s", "requirement", "mode or band",
+          "result", "EAS m/s", "required", "achieved");
+      pw.println(h);
+      pw.println("    " + "-".repeat(h.length() - 4));
+      for (RankedFinding f : v.clearance().ranked()) {
+        ClearanceCheck c = f.check();
+        pw.printf(Locale.ROOT, "    %-34s %-22s %-6s %10.2f %12s %12s%n", c.kind().key().replace('_', ' '),
+            c.subject().isEmpty() ? "-" : c.subject(), c.passed() ? "pass" : "FAIL", f.speedEasMps(), sensed(c),
+            value(c.achievedValue(), c));
+      }
     }
-    pw.printf(Locale.ROOT, "worst rigid-body margins over all samples: PM %s deg, GM+ %s dB, GM- %s dB%n",
-        fmt(r.worstPhaseMarginDeg()), fmt(r.worstGainIncreaseMarginDb()), fmt(r.worstGainReductionMarginDb()));
-    pw.printf(Locale.ROOT, "%d requirement(s) missed%n", r.violations().size());
+    pw.println();
+    pw.println("requirements: " + r.requirementsSource());
+  }
+
+  private static String sensed(ClearanceCheck c) {
+    if (c.unit() == CheckUnit.STABILITY) {
+      return "stable";
+    }
+    return (c.sense() == RequiredSense.AT_LEAST ? ">= " : "<= ") + value(c.requiredValue(), c);
+  }
+
+  private static String value(double v, ClearanceCheck c) {
+    if (c.unit() == CheckUnit.STABILITY) {
+      return v >= 0 ? "stable" : "unstable";
+    }
+    return String.format(Locale.ROOT, c.unit() == CheckUnit.DAMPING_G ? "%.4f %s" : "%.2f %s", v, c.unit().symbol());
   }
 }

@@ -96,7 +96,8 @@ final class SweepCommand implements Callable<Integer> {
     }
     boolean failed = result.configurations().stream()
         .anyMatch(r -> r.clearance() != null && !r.clearance().passed());
-    return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
+    boolean unreliable = result.configurations().stream().anyMatch(r -> r.trackingTrustedUpToEasMps().isPresent());
+    return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : unreliable ? FlexMargin.EXIT_UNRELIABLE : FlexMargin.EXIT_OK;
   }
 
   static ReportOptions reportOptions(CommonOptions common) {

@@ -79,12 +79,15 @@ public final class PkMethod implements FlutterMethod {
           lastGoodT[j] = p;
         } else {
           counters.unconverged++;
+          counters.trouble(p);
           warnings.add(String.format(Locale.ROOT,
               "root of %s did not converge at grid point %d (%.2f m/s EAS); its curve has a gap there",
               names.get(j), p, path.at(p).speedEasMps()));
         }
       }
-      separateCollisions(ws, path, roots, p, options, names, warnings);
+      if (separateCollisions(ws, path, roots, p, options, names, warnings)) {
+        counters.trouble(p);
+      }
     }
     List<BranchCurve> curves = new ArrayList<>();
     for (int j = 0; j < n; j++) {
@@ -217,11 +220,16 @@ public final class PkMethod implements FlutterMethod {
         && Math.hypot(a.sr() - b.sr(), a.si() - b.si()) <= COLLISION_TOLERANCE * scale;
   }
 
-  /** Re-solves branches that landed on the same root with four sub-steps; warns if they still do. */
-  private static void separateCollisions(
+  /**
+   * Re-solves branches that landed on the same root with four sub-steps; warns if they still do.
+   *
+   * @return whether two branches still share a root
+   */
+  private static boolean separateCollisions(
       FlutterWorkspace ws, FlightPath path, Root[][] roots, int p, AnalysisOptions options,
       List<String> names, List<String> warnings) {
     int n = roots[p].length;
+    boolean ambiguous = false;
     for (int i = 0; i < n; i++) {
       for (int j = i + 1; j < n; j++) {
         if (!same(roots[p][i], roots[p][j])) {
@@ -240,12 +248,14 @@ public final class PkMethod implements FlutterMethod {
           }
         }
         if (same(roots[p][i], roots[p][j])) {
+          ambiguous = true;
           warnings.add(String.format(Locale.ROOT,
               "ambiguous mode tracking at grid point %d (%.2f m/s EAS): branches %s and %s reach the same root",
               p, path.at(p).speedEasMps(), names.get(i), names.get(j)));
         }
       }
     }
+    return ambiguous;
   }
 
   private static FlutterCrossing refine(

@@ -11,6 +11,14 @@ final class SolveCounters {
   int unconverged;
   double minReducedFrequency = Double.POSITIVE_INFINITY;
   double maxReducedFrequency = 0;
+  double firstTroubleT = Double.NaN;
+
+  /** Notes that tracking was in doubt at grid point (path parameter) t. */
+  void trouble(double t) {
+    if (Double.isNaN(firstTroubleT) || t < firstTroubleT) {
+      firstTroubleT = t;
+    }
+  }
 
   void noteReducedFrequency(double k) {
     if (k < minReducedFrequency) {
@@ -23,6 +31,7 @@ final class SolveCounters {
 
   SolverDiagnostics toDiagnostics() {
     return new SolverDiagnostics(
-        rootSolves, iterations, fullEigenSolves, stepHalvings, maxResidual, minMac, unconverged);
+        rootSolves, iterations, fullEigenSolves, stepHalvings, maxResidual, minMac, unconverged,
+        firstTroubleT);
   }
 }

@@ -11,6 +11,10 @@ package org.flexmargin.flutter;
  * @param minMac lowest modal assurance criterion between a root's vectors at consecutive
  *     accepted steps (1 = same shape)
  * @param unconvergedRoots roots that did not converge within the budget (reported, never hidden)
+ * @param firstTroublePathParameter path parameter t of the first grid point where tracking was in
+ *     doubt (a root that did not converge or was lost, two branches on the same root, an unstable
+ *     root no branch follows); NaN when tracking was clean throughout. Findings at and beyond the
+ *     grid point before it cannot be trusted without a finer re-solve.
  */
 public record SolverDiagnostics(
     long rootSolves,
@@ -19,4 +23,11 @@ public record SolverDiagnostics(
     int stepHalvings,
     double maxRelativeResidual,
     double minMac,
-    int unconvergedRoots) {}
+    int unconvergedRoots,
+    double firstTroublePathParameter) {
+
+  /** @return whether tracking was in doubt anywhere */
+  public boolean trackingTroubled() {
+    return !Double.isNaN(firstTroublePathParameter);
+  }
+}

@@ -300,6 +300,7 @@ public final class StateSpaceMethod implements FlutterMethod {
           lastGood[j] = roots[p][j];
         } else {
           tr.counters.unconverged++;
+          tr.counters.trouble(p);
           warnings.add(String.format(Locale.ROOT,
               "root of %s lost at grid point %d (%.2f m/s EAS); its curve has a gap there",
               tr.names.get(j), p, path.at(p).speedEasMps()));
@@ -640,9 +641,14 @@ public final class StateSpaceMethod implements FlutterMethod {
           if (unstableLag == null) {
             unstableLag = text;
           }
-        } else if (unstableUntracked == null) {
-          unstableUntracked = text;
-          unstableUntrackedReal = sp.upperImag(c) == 0;
+        } else {
+          if (sp.upperImag(c) != 0) {
+            counters.trouble(p); // an oscillatory root no branch follows is unstable: onsets in doubt
+          }
+          if (unstableUntracked == null) {
+            unstableUntracked = text;
+            unstableUntrackedReal = sp.upperImag(c) == 0;
+          }
         }
       }
     }

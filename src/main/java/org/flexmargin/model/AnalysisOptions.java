@@ -28,7 +28,7 @@ public record AnalysisOptions(
     if (method == null) {
       throw new InvalidInputException("method", "pk, k or state_space", "nothing");
     }
-    Checks.inRange("damping_limit_g", dampingLimitG, 0.0, 1.0);
+    Checks.positiveDamping("damping_limit_g", dampingLimitG);
     Checks.inRange("convergence_tolerance", convergenceTolerance, 1e-14, 1e-3);
     Checks.atLeast("max_iterations", maxIterations, 5);
     Checks.positive("onset_speed_tolerance_mps", onsetSpeedToleranceMps);

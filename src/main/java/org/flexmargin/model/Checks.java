@@ -39,6 +39,20 @@ public final class Checks {
     return value;
   }
 
+  /**
+   * A damping stated the way requirements state it: a positive g in [0, 1] (0.03 means every root
+   * damped at least g = 0.03, zeta = 0.015; V-g charts draw the same limit at g = -0.03).
+   *
+   * @return {@code value} if in [0, 1]
+   */
+  public static double positiveDamping(String path, double value) {
+    if (!Double.isFinite(value) || value < 0 || value > 1) {
+      throw new InvalidInputException(path, "a damping as a positive g in [0, 1] (e.g. 0.03: every root damped at "
+          + "least g = 0.03, zeta = 0.015; the V-g charts draw it at g = -0.03)", String.valueOf(value));
+    }
+    return value;
+  }
+
   /** @return {@code s} if non-null and not blank */
   public static String name(String path, String s) {
     if (s == null || s.isBlank()) {

@@ -108,7 +108,7 @@ public record ClearanceRequirements(
     }
     Checks.inRange("frequency_uncertainty", frequencyUncertainty, 0.0, 0.5);
     Checks.inRange("flutter_speed_factor", flutterSpeedFactor, 1.0, 2.0);
-    Checks.inRange("minimum_damping_g", minimumDampingG, 0.0, 1.0);
+    Checks.positiveDamping("minimum_damping_g", minimumDampingG);
     Checks.name("source", source);
   }
 

@@ -5,8 +5,13 @@ import java.util.List;
 import java.util.Locale;
 import org.flexmargin.loop.NotchFilter;
 import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.ClearanceRequirements;
+import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.LoopSpec;
+import org.flexmargin.sweep.CaseSweep;
+import org.flexmargin.sweep.ConfigurationResult;
+import org.flexmargin.sweep.SweepResult;
 
 /**
  * Notch design and robustness check of a case: samples the loop ({@link CaseLoopSampler}),
@@ -97,39 +102,35 @@ public final class NotchDesigner {
   }
 
   /**
-   * Robustness check of the case's own filters.
+   * Judges the case's own filters against its requirements table with the same clearance code as
+   * {@code sweep} (the table's peak limit and frequency uncertainty replaced by the settings'), so
+   * that the two commands agree on every mode and band.
    *
-   * @param analysisCase case with a loop
-   * @param spec settings (limit, uncertainty, requirements, points)
-   * @return worst peaks and margins over the samples
+   * @param analysisCase case with a loop and a requirements table
+   * @param spec settings (peak limit, frequency uncertainty)
+   * @return the verdict per configuration
    */
   public RobustnessCheckResult check(AnalysisCase analysisCase, NotchDesignSpec spec) {
-    LoopSpec loop = PathFilters.requireLoop(analysisCase);
-    List<Integer> paths = spec.notchPaths().isEmpty() ? PathFilters.defaultNotchPaths(analysisCase)
-        : spec.notchPaths();
-    LoopSamples samples = CaseLoopSampler.sample(analysisCase, loop, paths, spec);
-    SampleEvaluation e = new NotchEvaluator(samples).evaluate(List.of());
-    boolean[] all = new boolean[samples.size()];
-    java.util.Arrays.fill(all, true);
-    List<ConstraintViolation> v = NotchOptimiser.violations(samples, e, all, spec);
-    double pm = Double.POSITIVE_INFINITY;
-    double gi = Double.POSITIVE_INFINITY;
-    double gr = Double.NEGATIVE_INFINITY;
-    for (int s = 0; s < samples.size(); s++) {
-      pm = Math.min(pm, e.phaseMarginDeg()[s]);
-      gi = Math.min(gi, e.gainIncreaseMarginDb()[s]);
-      gr = Math.max(gr, e.gainReductionMarginDb()[s]);
+    PathFilters.requireLoop(analysisCase);
+    ClearanceRequirements r = analysisCase.requirements();
+    if (r == null) {
+      throw new InvalidInputException("requirements",
+          "a requirements table (the check judges the filters by the same rules as sweep)", "none");
     }
-    List<Integer> points = IndependentCheck.spread(CaseLoopSampler.points(analysisCase, spec), TABLE_SPEEDS);
-    List<MarginComparison> margins = new ArrayList<>();
-    for (Configuration c : analysisCase.configurations()) {
-      for (int p : points) {
-        RigidMargins r = IndependentCheck.at(analysisCase, loop, spec, c, 1.0, p, null);
-        margins.add(new MarginComparison(r, r));
-      }
+    ClearanceRequirements judged = new ClearanceRequirements(r.maxOperatingSpeedEasMps(), r.limitSpeedEasMps(),
+        r.extendedSpeedFactor(), r.margins(), spec.peakLimitDb(), r.phaseStabilisationMarginDeg(),
+        spec.frequencyUncertainty(), r.flutterSpeedFactor(), r.minimumDampingG(), r.source(), r.recalledPreset());
+    AnalysisCase c = new AnalysisCase(analysisCase.format(), analysisCase.name(), analysisCase.description(),
+        analysisCase.configurations(), analysisCase.sweep(), analysisCase.options(), analysisCase.inputs(),
+        analysisCase.loop(), judged);
+    SweepResult sweep = new CaseSweep(Math.min(2, Runtime.getRuntime().availableProcessors())).run(c, n -> { });
+    List<RobustnessCheckResult.ConfigurationVerdict> out = new ArrayList<>();
+    boolean passes = true;
+    for (ConfigurationResult cr : sweep.configurations()) {
+      out.add(new RobustnessCheckResult.ConfigurationVerdict(cr.configuration(), cr.clearance()));
+      passes &= cr.clearance().passed();
     }
-    return new RobustnessCheckResult(analysisCase.name(), spec, v.isEmpty(), worstPeaks(samples, e), pm, gi, gr, v,
-        margins);
+    return new RobustnessCheckResult(analysisCase.name(), spec, passes, out, judged.source());
   }
 
   /** @return the worst peak per mode over samples */

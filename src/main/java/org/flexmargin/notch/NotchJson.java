@@ -2,6 +2,9 @@ package org.flexmargin.notch;
 
 import java.util.List;
 import java.util.Locale;
+import org.flexmargin.clearance.ClearanceCheck;
+import org.flexmargin.clearance.RankedFinding;
+import org.flexmargin.clearance.Severity;
 import org.flexmargin.model.FeedbackPath;
 import org.flexmargin.model.FilterSpec;
 import org.flexmargin.model.LowPassFilterSpec;
@@ -257,25 +260,24 @@ public final class NotchJson {
    */
   public static String check(RobustnessCheckResult r, List<String> cautions) {
     Out o = new Out();
-    o.open(null, '{').num("format", 1).str("kind", "notch_robustness_check").str("case", r.caseName())
+    o.open(null, '{').num("format", 2).str("kind", "filter_check").str("case", r.caseName())
         .bool("passes", r.passes());
     spec(o, r.spec());
-    o.open("structural_peaks", '[');
-    for (ModePeak p : r.peaks()) {
-      o.open(null, '{').str("mode", p.mode()).num("peak_db", p.peakDb()).num("frequency_hz", p.frequencyHz());
-      label(o, "where", p.where());
-      o.close('}');
-    }
-    o.close(']');
-    o.num("worst_phase_margin_deg", r.worstPhaseMarginDeg())
-        .num("worst_gain_increase_margin_db", r.worstGainIncreaseMarginDb())
-        .num("worst_gain_reduction_margin_db", r.worstGainReductionMarginDb());
-    violations(o, r.violations().size() > 50 ? r.violations().subList(0, 50) : r.violations());
-    o.open("independent_margins", '[');
-    for (MarginComparison m : r.margins()) {
-      o.open(null, '{').str("configuration", m.before().configuration()).num("speed_eas_mps", m.before().speedEasMps());
-      margins(o, "margins", m.before());
-      o.close('}');
+    o.str("requirements_source", r.requirementsSource()).str("ranking_rule", Severity.RULE);
+    o.open("configurations", '[');
+    for (RobustnessCheckResult.ConfigurationVerdict v : r.configurations()) {
+      o.open(null, '{').str("name", v.configuration()).bool("passed", v.clearance().passed());
+      o.open("requirements", '[');
+      for (RankedFinding f : v.clearance().ranked()) {
+        ClearanceCheck c = f.check();
+        o.open(null, '{').str("requirement", c.kind().key()).str("subject", c.subject())
+            .str("description", c.description()).num("required", c.requiredValue())
+            .num("achieved", c.achievedValue()).str("unit", c.unit().symbol())
+            .str("sense", c.sense().name().toLowerCase(Locale.ROOT)).bool("passed", c.passed())
+            .str("severity", f.severity().key()).num("severity_rank", f.severity().rank())
+            .num("speed_eas_mps", f.speedEasMps()).close('}');
+      }
+      o.close(']').close('}');
     }
     o.close(']');
     o.strings("cautions", cautions);

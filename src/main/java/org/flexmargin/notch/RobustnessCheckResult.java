@@ -1,30 +1,31 @@
 package org.flexmargin.notch;
 
 import java.util.List;
+import org.flexmargin.sweep.ClearanceResult;
 
 /**
- * An existing notch set checked over configurations, sweep points and the frequency uncertainty.
+ * The case's own filters judged against its requirements table by the same code as {@code sweep}
+ * (frequency bands, speed regimes, modal-frequency uncertainty band, gain- or phase-stabilisation
+ * rule, severity ranking), so that both commands give the same verdict on every mode and band.
  *
  * @param caseName the case
- * @param spec the settings used
- * @param passes true if every structural peak meets the limit and every rigid-body margin the
- *     requirement at every sample
- * @param peaks worst structural peak per mode over all samples
- * @param worstPhaseMarginDeg smallest rigid-body phase margin over all samples (sampled estimate), deg
- * @param worstGainIncreaseMarginDb smallest rigid-body gain-increase margin, dB
- * @param worstGainReductionMarginDb gain-reduction margin nearest 0 dB, dB
- * @param violations requirements missed
- * @param margins rigid-body margins at a few speeds per configuration (nominal frequencies),
- *     recomputed independently ({@link MarginComparison#before()} and {@code after()} are the same
- *     loop here)
+ * @param spec the settings used (peak limit and frequency uncertainty applied to the table)
+ * @param passes true if every configuration meets every requirement
+ * @param configurations one verdict per configuration, in case order
+ * @param requirementsSource where the requirement values come from
  */
-public record RobustnessCheckResult(String caseName, NotchDesignSpec spec, boolean passes, List<ModePeak> peaks,
-    double worstPhaseMarginDeg, double worstGainIncreaseMarginDb, double worstGainReductionMarginDb,
-    List<ConstraintViolation> violations, List<MarginComparison> margins) {
+public record RobustnessCheckResult(String caseName, NotchDesignSpec spec, boolean passes,
+    List<ConfigurationVerdict> configurations, String requirementsSource) {
   /** Copies. */
   public RobustnessCheckResult {
-    peaks = List.copyOf(peaks);
-    violations = List.copyOf(violations);
-    margins = List.copyOf(margins);
+    configurations = List.copyOf(configurations);
   }
+
+  /**
+   * One configuration's verdict.
+   *
+   * @param configuration configuration name
+   * @param clearance the clearance result, exactly as {@code sweep} computes it
+   */
+  public record ConfigurationVerdict(String configuration, ClearanceResult clearance) {}
 }

@@ -208,7 +208,10 @@ public final class ClearanceSections {
       }
       w.close("td");
       numCell(w, p + "/speed_eas_mps", r.points().get(a[0]).speedEasMps(), 2);
-      numCell(w, p + "/checks/" + a[1] + "/required", ck.requiredValue(), decimals(ck));
+      w.open("td", "class", "num");
+      w.text(sense(ck) + " ");
+      num(w, p + "/checks/" + a[1] + "/required", ck.requiredValue(), decimals(ck));
+      w.close("td");
       numCell(w, p + "/checks/" + a[1] + "/achieved", ck.achievedValue(), decimals(ck));
       w.element("td", ck.unit().symbol());
       int onset = -1;
@@ -355,7 +358,7 @@ public final class ClearanceSections {
           w.element("td", g.kind() == CheckKind.CLOSED_LOOP_STABILITY
               ? (g.passed() ? "closed loop stable" : "closed loop unstable")
               : requirementWords(g.key()) + ": " + fmt(g.achievedValue(), decimals(g)) + " vs "
-                  + fmt(g.requiredValue(), decimals(g)) + " " + g.unit().symbol());
+                  + sense(g) + " " + fmt(g.requiredValue(), decimals(g)) + " " + g.unit().symbol());
         }
         w.close("tr");
       }
@@ -488,11 +491,16 @@ public final class ClearanceSections {
       return;
     }
     String unit = c.unit().symbol().isEmpty() ? "" : " " + c.unit().symbol();
-    w.text(c.sense() == RequiredSense.AT_LEAST ? "required at least " : "required at most ");
+    w.text("required " + sense(c) + " ");
     num(w, pointer + "/required", c.requiredValue(), decimals(c));
     w.text(unit + ", achieved ");
     num(w, pointer + "/achieved", c.achievedValue(), decimals(c));
     w.text(unit);
+  }
+
+  /** @return "at least" or "at most": how a required value is to be read */
+  private static String sense(ClearanceCheck c) {
+    return c.sense() == RequiredSense.AT_LEAST ? "at least" : "at most";
   }
 
   private static void num(XhtmlWriter w, String pointer, double v, int decimals) {

@@ -148,7 +148,7 @@ public final class ResultFiles {
       ObjectNode xo = cr.addObject();
       xo.put("mode", x.branchName());
       xo.put("kind", x.kind().name().toLowerCase(Locale.ROOT));
-      num(xo, "threshold_g", x.thresholdG());
+      num(xo, "damping_threshold_g", 0.0 - x.thresholdG()); // positive = damped (docs/verdict.md)
       num(xo, "speed_eas_mps", x.condition().speedEasMps());
       num(xo, "speed_tas_mps", x.condition().speedTasMps());
       num(xo, "mach", x.condition().mach());
@@ -203,7 +203,7 @@ public final class ResultFiles {
       ObjectNode xo = cross.addObject();
       xo.put("root", x.branchName());
       xo.put("kind", x.kind().name().toLowerCase(Locale.ROOT));
-      num(xo, "threshold_g", x.thresholdG());
+      num(xo, "damping_threshold_g", 0.0 - x.thresholdG()); // positive = damped (docs/verdict.md)
       num(xo, "speed_eas_mps", x.condition().speedEasMps());
       num(xo, "speed_tas_mps", x.condition().speedTasMps());
       num(xo, "mach", x.condition().mach());
@@ -294,6 +294,8 @@ public final class ResultFiles {
     o.put("ranking_rule", r.rankingRule());
     ArrayNode failures = o.putArray("failures_ranked");
     r.failures().forEach(f -> ranked(failures.addObject(), f));
+    ArrayNode every = o.putArray("requirements");
+    r.ranked().forEach(f -> ranked(every.addObject(), f));
     ObjectNode fl = o.putObject("flutter_rule");
     fl.put("passed", r.flutter().passed());
     num(fl, "limit_speed_eas_mps", r.flutter().limitSpeedEasMps());
@@ -365,6 +367,7 @@ public final class ResultFiles {
     num(o, "required", c.requiredValue());
     num(o, "achieved", c.achievedValue());
     o.put("unit", c.unit().symbol());
+    o.put("sense", c.sense().name().toLowerCase(Locale.ROOT));
     num(o, "frequency_hz", c.frequencyHz());
     o.put("passed", c.passed());
     num(o, "normalised_excess", c.normalisedExcess());

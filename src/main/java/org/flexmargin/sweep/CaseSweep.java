@@ -2,6 +2,7 @@ package org.flexmargin.sweep;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
@@ -84,6 +85,37 @@ public final class CaseSweep {
     }
   }
 
+  /** Each re-solve splits every planned grid interval this many more times. */
+  static final int REFINEMENT_FACTOR = 4;
+  /** At most this many steps per planned interval after re-solves. */
+  static final int MAX_REFINEMENT = 16;
+  /** A re-solve is skipped when its grid would exceed this many points (the cost of the loop sweep). */
+  static final int MAX_REFINED_POINTS = 600;
+
+  /**
+   * Adds the re-solve, the unreliability if tracking stayed in doubt, and the aerodynamic range
+   * warnings to the solution's warnings.
+   */
+  private static FlutterSolution withNotes(FlutterSolution f, PlannedPath planned, PlannedPath used,
+      List<String> aeroRange) {
+    List<String> notes = new ArrayList<>(aeroRange);
+    if (used.subdivisions() > 1) {
+      notes.add(String.format(Locale.ROOT, "mode tracking was in doubt on the planned grid: re-solved with every "
+          + "interval split in %d (%d grid points)", used.subdivisions(), used.gridPoints()));
+    }
+    if (f.diagnostics().trackingTroubled()) {
+      notes.add(String.format(Locale.ROOT, "UNRELIABLE: mode tracking is still in doubt from %.2f m/s EAS; findings "
+          + "above %.2f m/s EAS are marked unreliable and no flutter-free speed is claimed beyond it",
+          used.at(f.diagnostics().firstTroublePathParameter()).speedEasMps(),
+          TrackingTrust.trustedUpToEasMps(f).orElse(Double.NaN)));
+    }
+    if (notes.isEmpty()) {
+      return f;
+    }
+    notes.addAll(0, f.warnings());
+    return new FlutterSolution(f.method(), f.branches(), f.crossings(), f.diagnostics(), notes);
+  }
+
   /** Analyses one configuration along a path, without progress reports. */
   public static ConfigurationResult analyse(Configuration c, PlannedPath path, AnalysisCase analysisCase) {
     return analyse(c, path, analysisCase, SweepProgress.NONE);
@@ -111,7 +143,15 @@ public final class CaseSweep {
       case STATE_SPACE -> new StateSpaceMethod();
       default -> new PkMethod();
     };
+    PlannedPath planned = path;
     FlutterSolution flutter = method.solve(system, path, analysisCase.options());
+    // tracking in doubt: re-solve with finer steps (x4, then x16) while the grid stays affordable
+    for (int factor = REFINEMENT_FACTOR; flutter.diagnostics().trackingTroubled() && factor <= MAX_REFINEMENT
+        && planned.refined(factor).gridPoints() <= MAX_REFINED_POINTS; factor *= REFINEMENT_FACTOR) {
+      path = planned.refined(factor);
+      flutter = method.solve(system, path, analysisCase.options());
+    }
+    flutter = withNotes(flutter, planned, path, AeroValidity.warnings(c, path));
     double[] f = model.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).toArray();
     double tasDiv = divergence.speedTasMps(path.at(0).densityKgPerM3());
     progress.stageDone(c.name(), "divergence and flutter");

@@ -80,7 +80,10 @@ public final class ClearanceSweep {
     }
     List<OnsetSearch> searches = new ArrayList<>();
     double top = path.at(path.gridPoints() - 1).speedEasMps();
-    searches.add(OnsetSearch.openLoop(firstOnset(flutter.crossings()), top));
+    OptionalDouble trusted = TrackingTrust.trustedUpToEasMps(flutter);
+    searches.add(trusted.isPresent()
+        ? OnsetSearch.trustedUpTo(OnsetSearch.OPEN_LOOP, firstOnset(flutter.crossings()), trusted.getAsDouble())
+        : OnsetSearch.openLoop(firstOnset(flutter.crossings()), top));
     if (servo != null) {
       searches.add(OnsetSearch.closedLoop(firstOnset(servo.closedLoop().crossings()), top));
     }

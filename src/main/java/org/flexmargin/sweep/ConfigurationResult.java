@@ -74,6 +74,15 @@ public record ConfigurationResult(
     return Instabilities.lowest(this);
   }
 
+  /**
+   * @return the speed up to which open-loop mode tracking can be trusted, m/s EAS (the last grid
+   *     point before tracking was first in doubt, after re-solving with finer steps); empty when
+   *     tracking was clean throughout
+   */
+  public OptionalDouble trackingTrustedUpToEasMps() {
+    return TrackingTrust.trustedUpToEasMps(flutter);
+  }
+
   @Override
   public double[] modeFrequenciesHz() {
     return modeFrequenciesHz.clone();

@@ -16,6 +16,12 @@ import org.flexmargin.model.FlutterMethodKind;
 public final class Findings {
   private Findings() {}
 
+  /** Appended to the name of a finding that rests on mode tracking in doubt. */
+  public static final String UNRELIABLE = " (unreliable)";
+
+  /** Finding name of the last speed up to which open-loop mode tracking can be trusted. */
+  public static final String TRACKING_IN_DOUBT = "mode tracking trusted only to here";
+
   /** Finding name of an open-loop root already unstable at the first sweep point. */
   public static final String OPEN_LOOP_UNSTABLE_AT_START = "open-loop unstable at sweep start";
 
@@ -51,11 +57,15 @@ public final class Findings {
       crossings.sort(Comparator.comparingDouble(x -> x.condition().speedEasMps()));
       for (FlutterCrossing x : crossings) {
         FlightCondition fc = x.condition();
-        out.add(new Finding(c.configuration(), label(x.kind()), x.branchName(), fc.speedEasMps(),
-            fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
-            String.format(Locale.ROOT, "g = %.3f crossed (%s)", x.thresholdG(),
-                c.flutter().method().label() + " method")));
+        boolean unreliable = TrackingTrust.unreliableAt(c.flutter(), fc.speedEasMps());
+        out.add(new Finding(c.configuration(), label(x.kind()) + (unreliable ? UNRELIABLE : ""), x.branchName(),
+            fc.speedEasMps(), fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
+            (unreliable ? "mode tracking in doubt here even after re-solving with finer steps; " : "")
+                + crossedRemark(x.thresholdG(), c.flutter().method().label() + " method")));
       }
+      c.trackingTrustedUpToEasMps().ifPresent(v -> out.add(new Finding(c.configuration(), TRACKING_IN_DOUBT, "-",
+          v, Double.NaN, Double.NaN, sweepStart.altitudeM(), Double.NaN,
+          "open-loop findings above this speed are unreliable; no flutter-free speed is claimed beyond it")));
       if (c.servo() != null) {
         closedLoop(out, c);
       }
@@ -92,7 +102,7 @@ public final class Findings {
       FlightCondition fc = x.condition();
       out.add(new Finding(c.configuration(), "closed-loop " + label(x.kind()), x.branchName(), fc.speedEasMps(),
           fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
-          String.format(Locale.ROOT, "g = %.3f crossed (closed-loop state space)", x.thresholdG())));
+          crossedRemark(x.thresholdG(), "closed-loop state space")));
     }
   }
 
@@ -107,7 +117,7 @@ public final class Findings {
       if (what != null) {
         out.add(new Finding(c.configuration(), what, b.name(), start.speedEasMps(), start.speedTasMps(),
             start.mach(), start.altitudeM(), b.frequencyHz()[0],
-            String.format(Locale.ROOT, "g = %.4f at the first sweep point", g[0])));
+            String.format(Locale.ROOT, "damping g = %.4f at the first sweep point (V-g g = %.4f)", -g[0], g[0])));
       }
     }
   }
@@ -152,6 +162,15 @@ public final class Findings {
   public static boolean isClosedLoopInstability(Finding f) {
     return f.what().equals("closed-loop " + label(CrossingKind.FLUTTER_ONSET))
         || f.what().equals(CLOSED_LOOP_UNSTABLE_AT_START);
+  }
+
+  /**
+   * The remark of a damping crossing, in the requirement convention (positive = damped) with the
+   * V-g value the charts show beside it.
+   */
+  private static String crossedRemark(double thresholdVgG, String how) {
+    return thresholdVgG == 0 ? "damping g = 0 reached (" + how + ")"
+        : String.format(Locale.ROOT, "damping g = %.3f reached (V-g g = %.3f; %s)", -thresholdVgG, thresholdVgG, how);
   }
 
   /** @return plain words for a crossing kind */

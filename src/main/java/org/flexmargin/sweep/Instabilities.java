@@ -15,13 +15,15 @@ final class Instabilities {
 
   /** Lowest open-loop flutter onset, or a root already unstable at the first sweep point. */
   static Optional<Instability> openLoop(ConfigurationResult c) {
-    Stream<Instability> onsets = onsets(c.flutter().crossings().stream(), Instability.Kind.OPEN_LOOP_FLUTTER);
+    Stream<Instability> onsets = onsets(c.flutter().crossings().stream(), Instability.Kind.OPEN_LOOP_FLUTTER)
+        .map(i -> TrackingTrust.unreliableAt(c.flutter(), i.speedEasMps()) ? new Instability(i.kind(), i.mode(),
+            i.speedEasMps(), i.frequencyHz(), false, false) : i);
     Stream<Instability> atStart = Stream.empty();
     if (c.flutter().method() != FlutterMethodKind.K) {
       atStart = c.flutter().branches().stream()
           .filter(b -> b.size() > 0 && b.converged()[0] && b.dampingG()[0] > 0)
           .map(b -> new Instability(Instability.Kind.OPEN_LOOP_FLUTTER, b.name(), b.speedEasMps()[0],
-              b.frequencyHz()[0], true));
+              b.frequencyHz()[0], true, true));
     }
     return Stream.concat(onsets, atStart).min(LOWEST);
   }
@@ -48,7 +50,7 @@ final class Instabilities {
         ClosedLoopRoot worst = cp.roots().stream().max(Comparator.comparingDouble(ClosedLoopRoot::realPerS))
             .orElseThrow();
         return Optional.of(new Instability(worst.imagRadPerS() > 0 ? Instability.Kind.CLOSED_LOOP_FLUTTER
-            : Instability.Kind.CLOSED_LOOP_DIVERGENT_ROOT, worst.label(), v, worst.frequencyHz(), p == 0));
+            : Instability.Kind.CLOSED_LOOP_DIVERGENT_ROOT, worst.label(), v, worst.frequencyHz(), p == 0, true));
       }
     }
     return refined;
@@ -57,7 +59,7 @@ final class Instabilities {
   /** Static divergence (rigid body restrained), wherever it lies. */
   static Optional<Instability> divergence(ConfigurationResult c) {
     return c.divergence().found()
-        ? Optional.of(new Instability(Instability.Kind.DIVERGENCE, "-", c.divergence().speedEasMps(), 0.0, false))
+        ? Optional.of(new Instability(Instability.Kind.DIVERGENCE, "-", c.divergence().speedEasMps(), 0.0, false, true))
         : Optional.empty();
   }
 
@@ -68,6 +70,6 @@ final class Instabilities {
 
   private static Stream<Instability> onsets(Stream<FlutterCrossing> crossings, Instability.Kind kind) {
     return crossings.filter(x -> x.kind() == CrossingKind.FLUTTER_ONSET)
-        .map(x -> new Instability(kind, x.branchName(), x.condition().speedEasMps(), x.frequencyHz(), false));
+        .map(x -> new Instability(kind, x.branchName(), x.condition().speedEasMps(), x.frequencyHz(), false, true));
   }
 }

@@ -12,8 +12,10 @@ import org.flexmargin.model.InvalidInputException;
  *     already present at the first sweep point, that point's speed (the onset is at or below it)
  * @param frequencyHz frequency at the onset, Hz; 0 for divergence
  * @param atSweepStart true when the instability is already present at the first sweep point
+ * @param reliable false when it lies where open-loop mode tracking was in doubt
  */
-public record Instability(Kind kind, String mode, double speedEasMps, double frequencyHz, boolean atSweepStart) {
+public record Instability(Kind kind, String mode, double speedEasMps, double frequencyHz, boolean atSweepStart,
+    boolean reliable) {
 
   /** What becomes unstable. */
   public enum Kind {
@@ -64,6 +66,7 @@ public record Instability(Kind kind, String mode, double speedEasMps, double fre
     String what = kind == Kind.DIVERGENCE ? kind.words() : kind.words() + " of " + mode;
     String freq = kind == Kind.DIVERGENCE || frequencyHz == 0 ? ""
         : String.format(Locale.ROOT, " at %.3f Hz", frequencyHz);
-    return String.format(Locale.ROOT, "%s %s%.2f m/s EAS%s", what, from, speedEasMps, freq);
+    return String.format(Locale.ROOT, "%s %s%.2f m/s EAS%s%s", what, from, speedEasMps, freq,
+        reliable ? "" : " (UNRELIABLE: mode tracking in doubt)");
   }
 }

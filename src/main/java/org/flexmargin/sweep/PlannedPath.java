@@ -26,10 +26,16 @@ public final class PlannedPath implements FlightPath {
   private final SweepPlan plan;
   private final double[] pointAltitudeM;
   private final double[] pointTasMps;
+  private final int subdivisions;
 
   /** @param plan the sweep plan */
   public PlannedPath(SweepPlan plan) {
+    this(plan, 1);
+  }
+
+  private PlannedPath(SweepPlan plan, int subdivisions) {
     this.plan = plan;
+    this.subdivisions = subdivisions;
     if (plan instanceof PointList list) {
       List<SweepPoint> pts = list.points();
       pointAltitudeM = new double[pts.size()];
@@ -45,14 +51,34 @@ public final class PlannedPath implements FlightPath {
     }
   }
 
-  @Override
-  public int gridPoints() {
-    return plan.pointCount();
+  /**
+   * The same path with every planned grid interval split into {@code factor} equal steps of the
+   * path parameter (planned grid point i becomes grid point i x factor).
+   *
+   * @param factor subdivisions per planned interval (&gt;= 1)
+   * @return the finer path
+   */
+  public PlannedPath refined(int factor) {
+    if (factor < 1) {
+      throw new IllegalArgumentException("refinement factor " + factor + " < 1");
+    }
+    return new PlannedPath(plan, subdivisions * factor);
+  }
+
+  /** @return planned grid intervals are split into this many steps (1 = as planned) */
+  public int subdivisions() {
+    return subdivisions;
   }
 
   @Override
-  public FlightCondition at(double t) {
-    int n = gridPoints();
+  public int gridPoints() {
+    return (plan.pointCount() - 1) * subdivisions + 1;
+  }
+
+  @Override
+  public FlightCondition at(double tRefined) {
+    double t = tRefined / subdivisions;
+    int n = plan.pointCount();
     if (!(t >= -1e-9 && t <= n - 1 + 1e-9)) {
       throw new IllegalArgumentException("path parameter " + t + " outside [0, " + (n - 1) + "]");
     }
@@ -75,6 +101,12 @@ public final class PlannedPath implements FlightPath {
 
   /** @return a one-line description for reports */
   public String describe() {
+    return subdivisions == 1 ? describePlan()
+        : describePlan() + String.format(java.util.Locale.ROOT, ", re-solved with every interval split in %d",
+            subdivisions);
+  }
+
+  private String describePlan() {
     if (plan instanceof SpeedSweep s) {
       return String.format(java.util.Locale.ROOT, "speed sweep at %.0f m, %s %.1f to %.1f m/s, %d points",
           s.altitudeM(), s.kind() == AirspeedKind.EQUIVALENT ? "EAS" : "TAS", s.fromMps(), s.toMps(), s.points());
@@ -83,6 +115,6 @@ public final class PlannedPath implements FlightPath {
       return String.format(java.util.Locale.ROOT, "Mach %.3f from %.0f m to %.0f m, %d points",
           m.machNumber(), m.fromAltitudeM(), m.toAltitudeM(), m.points());
     }
-    return gridPoints() + " listed flight points";
+    return plan.pointCount() + " listed flight points";
   }
 }

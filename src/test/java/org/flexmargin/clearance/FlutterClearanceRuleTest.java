@@ -61,15 +61,44 @@ class FlutterClearanceRuleTest {
 
   @Test
   void dampingEdgeIsMinusPointZeroThree() {
-    // g <= -0.03 passes (V-g: g ~ -2 zeta, so zeta >= 1.5 %); -0.0299 fails; 0 (neutral) fails.
+    // V-g g <= -0.03 passes (g ~ -2 zeta, so zeta >= 1.5 %); -0.0299 fails; 0 (neutral) fails.
+    // The check states it as a positive required damping: required 0.03, achieved -g_Vg.
     assertTrue(check(rule(OptionalDouble.empty(), 200, -0.03), CheckKind.MINIMUM_DAMPING)
         .passed());
     ClearanceCheck d = check(rule(OptionalDouble.empty(), 200, -0.0299),
         CheckKind.MINIMUM_DAMPING);
     assertFalse(d.passed());
-    assertEquals(-0.03, d.requiredValue(), 0.0);
+    assertEquals(0.03, d.requiredValue(), 0.0);
+    assertEquals(0.0299, d.achievedValue(), 0.0);
+    assertEquals(RequiredSense.AT_LEAST, d.sense());
     assertEquals(-0.0001, d.excess(), 1e-15);
     assertFalse(rule(OptionalDouble.empty(), 200, 0.0).passed());
+  }
+
+  @Test
+  void divergenceMustLieAtOrAboveTheMarginSpeed() {
+    // MIL-A-8870C names flutter, divergence and other aeroelastic instabilities together (from
+    // memory): divergence at 1.15 V_L = 172.5 m/s exactly passes, just below fails
+    FlutterClearance edge = FlutterClearanceRule.assess(REQ, List.of(OnsetSearch.openLoop(OptionalDouble.empty(), 200)),
+        -0.05, OptionalDouble.of(REQUIRED));
+    assertTrue(check(edge, CheckKind.DIVERGENCE_SPEED).passed());
+    FlutterClearance low = FlutterClearanceRule.assess(REQ, List.of(OnsetSearch.openLoop(OptionalDouble.empty(), 200)),
+        -0.05, OptionalDouble.of(REQUIRED - 0.01));
+    assertFalse(low.passed());
+    assertEquals(Severity.AEROELASTIC_INSTABILITY_BELOW_MARGIN_SPEED,
+        RankedFinding.severityOf(check(low, CheckKind.DIVERGENCE_SPEED), REQUIRED - 0.01, 150));
+    assertTrue(rule(OptionalDouble.empty(), 200, -0.05).checks().stream()
+        .noneMatch(c -> c.kind() == CheckKind.DIVERGENCE_SPEED), "no divergence, no check");
+  }
+
+  @Test
+  void dampingRequirementReadsAsAPositiveRequiredDamping() {
+    // the first release wrote "required -0.0300 g, achieved 0.0204 g" for a failure: as read, the
+    // achieved value exceeded the requirement. Now: required 0.03 (at least), achieved -0.0204.
+    ClearanceCheck d = check(rule(OptionalDouble.empty(), 200, 0.0204), CheckKind.MINIMUM_DAMPING);
+    assertFalse(d.passed());
+    assertTrue(d.requiredValue() > 0 && d.achievedValue() < d.requiredValue());
+    assertEquals(-0.0204, d.achievedValue(), 0.0);
   }
 
   @Test

@@ -222,7 +222,8 @@ class CaseReaderTest {
     InputFileException opt = failsCase("bad-option.json");
     assertEquals("options.damping_limit_g", opt.fieldPath());
     assertEquals(7, opt.line());
-    assertHas(opt.getMessage(), "expected a value in [0.0, 1.0], found 1.5");
+    assertHas(opt.getMessage(), "expected a damping as a positive g in [0, 1]");
+    assertHas(opt.getMessage(), "found 1.5");
   }
 
   @Test

@@ -10,6 +10,8 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.flexmargin.clearance.Severity;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
@@ -64,6 +66,62 @@ class DemoVerdictTest {
       assertTrue(a < b || a == b && failures.get(i - 1).get("speed_eas_mps").asDouble()
           <= failures.get(i).get("speed_eas_mps").asDouble(), "ranked order at " + i);
     }
+  }
+
+  /** "required at least 0.03 g, achieved -0.0204 g": sense, required, achieved. */
+  private static final Pattern PAIR = Pattern.compile(
+      "required (at least|at most) (-?[0-9.]+(?:[eE][-+]?[0-9]+)?)[^,]*, achieved (-?[0-9.]+(?:[eE][-+]?[0-9]+)?)");
+
+  /** Whether the printed pair reads as met; equal printed values read either way (rounding). */
+  private static void assertReadsAs(boolean passed, String text) {
+    Matcher m = PAIR.matcher(text);
+    assertTrue(m.find(), "a required/achieved pair in: " + text);
+    double required = Double.parseDouble(m.group(2));
+    double achieved = Double.parseDouble(m.group(3));
+    if (required == achieved) {
+      return;
+    }
+    boolean readsMet = m.group(1).equals("at least") ? achieved > required : achieved < required;
+    assertEquals(passed, readsMet, "printed pair contradicts its verdict: " + text);
+  }
+
+  @Test
+  void everyPrintedRequiredAchievedPairAgreesWithItsVerdict() {
+    // the first release printed the damping requirement as "required -0.0300 g" beside
+    // "g at least 0.030", and a failing "achieved 0.0204 g against -0.0300 g"
+    int checked = 0;
+    for (ConfigurationResult c : SharedResults.demo().result().configurations()) {
+      for (var r : c.clearance().ranked()) {
+        if (r.check().unit() != org.flexmargin.clearance.CheckUnit.STABILITY) {
+          assertReadsAs(r.check().passed(), r.describe());
+          checked++;
+        }
+      }
+    }
+    // the report: every list item and paragraph of the verdicts, and the requirement table rows
+    String text = html.replaceAll("<span[^>]*>|</span>|<strong>|</strong>", "");
+    Matcher li = Pattern.compile("<li>(pass|fail): (.*?)</li>").matcher(text);
+    while (li.find()) {
+      assertReadsAs(li.group(1).equals("pass"), li.group(2));
+      checked++;
+    }
+    Matcher gov = Pattern.compile("(Governing finding|Closest to its limit)([^<]*)").matcher(text);
+    while (gov.find()) {
+      if (gov.group(2).contains("required at")) {
+        assertReadsAs(gov.group(1).startsWith("Closest"), gov.group(2));
+        checked++;
+      }
+    }
+    Matcher row = Pattern.compile("<tr><td>[^<]*</td><td>(pass at all|fail at)[^<]*</td><td[^>]*>[^<]*</td>"
+        + "<td[^>]*>(at least|at most) ([^<]*)</td><td[^>]*>([^<]*)</td>").matcher(text);
+    int rows = 0;
+    while (row.find()) {
+      assertReadsAs(row.group(1).startsWith("pass"), "required " + row.group(2) + " " + row.group(3) + ", achieved "
+          + row.group(4));
+      rows++;
+    }
+    assertTrue(rows > 0, "requirement table rows found");
+    assertTrue(checked > 10, "pairs checked: " + checked);
   }
 
   @Test

@@ -1,0 +1,102 @@
+package org.flexmargin.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.TreeMap;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code sweep} and {@code notch-design --check-only} judge the invented demo drone by one
+ * definition of frequency bands, speed regimes, modal-frequency uncertainty and the
+ * phase-stabilisation rule: every requirement of every configuration (each structural mode, each
+ * margin kind in each band, the flutter, divergence, damping and stability checks) gets the same
+ * verdict, the same required and achieved values and the same ranking speed from both commands.
+ * The first release disagreed: fuselage bending 1 was phase-stabilised in one and failed by
+ * +2.64 dB in the other, and the rigid-body gain margin was 28.7 dB in one and "none" in the other.
+ */
+class VerdictAgreementTest {
+
+  private static int run(String... args) {
+    StringWriter out = new StringWriter();
+    StringWriter err = new StringWriter();
+    int code = FlexMargin.execute(args, new PrintWriter(out), new PrintWriter(err));
+    assertTrue(err.toString().isEmpty() || code != 1, err.toString());
+    return code;
+  }
+
+  /** configuration | requirement | subject -> the entry. */
+  private static Map<String, JsonNode> byKey(JsonNode configurations, String name, String list) {
+    Map<String, JsonNode> out = new TreeMap<>();
+    for (JsonNode c : configurations) {
+      JsonNode l = list.isEmpty() ? c.get("requirements") : c.at(list);
+      for (JsonNode r : l) {
+        JsonNode before = out.put(c.get(name).asText() + " | " + r.get("requirement").asText() + " | "
+            + r.get("subject").asText(), r);
+        assertEquals(null, before, "one entry per requirement");
+      }
+    }
+    return out;
+  }
+
+  @Test
+  void sweepAndFilterCheckGiveTheSameVerdictOnEveryModeAndBand(@TempDir Path tmp) throws IOException {
+    String demo = "mode-tables/demo/demo-case.json";
+    assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, run("sweep", demo, "--out", tmp.resolve("s").toString(),
+        "--quiet"));
+    assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, run("notch-design", demo, "--check-only", "--out",
+        tmp.resolve("n").toString(), "--quiet"));
+    ObjectMapper m = new ObjectMapper();
+    JsonNode sweep = m.readTree(tmp.resolve("s/results.json").toFile()).get("configurations");
+    JsonNode check = m.readTree(tmp.resolve("n/notch-check.json").toFile()).get("configurations");
+    Map<String, JsonNode> a = byKey(sweep, "name", "/clearance/requirements");
+    Map<String, JsonNode> b = byKey(check, "name", "");
+    assertEquals(a.keySet(), b.keySet(), "the same requirements in both");
+    assertTrue(a.keySet().stream().anyMatch(k -> k.contains("structural_mode | fuselage_bending_1")), "per mode");
+    assertTrue(a.keySet().stream().anyMatch(k -> k.contains("gain_increase_margin | rigid_body")), "per band");
+    for (Map.Entry<String, JsonNode> e : a.entrySet()) {
+      JsonNode x = e.getValue();
+      JsonNode y = b.get(e.getKey());
+      assertEquals(x.get("passed").asBoolean(), y.get("passed").asBoolean(), e.getKey());
+      assertEquals(x.get("description").asText(), y.get("description").asText(), e.getKey());
+      // notch-check.json prints 6 significant digits: relative 1e-5 covers the rounding
+      for (String f : new String[] {"required", "achieved", "speed_eas_mps"}) {
+        double u = x.get(f).asDouble();
+        assertEquals(u, y.get(f).asDouble(), 1e-5 * Math.max(1.0, Math.abs(u)), e.getKey() + " " + f);
+      }
+    }
+    for (int i = 0; i < sweep.size(); i++) {
+      assertEquals(sweep.get(i).at("/clearance/passed").asBoolean(), check.get(i).get("passed").asBoolean());
+    }
+  }
+
+  @Test
+  void unreliableTrackingIsMarkedInTheResultsAndTheExitCode(@TempDir Path tmp) throws IOException {
+    // the validation typical section swept with 3 points from 10 to 5000 m/s TAS (first release: no
+    // onset, no mark, exit 0)
+    ObjectMapper m = new ObjectMapper();
+    com.fasterxml.jackson.databind.node.ObjectNode c = (com.fasterxml.jackson.databind.node.ObjectNode) m.readTree(
+        Path.of("mode-tables/validation/typical-section-lpw.json").toFile());
+    c.putObject("sweep").put("kind", "speed").put("altitude_m", 0).put("speed_kind", "tas").put("from_mps", 10)
+        .put("to_mps", 5000).put("points", 3);
+    Path file = tmp.resolve("coarse.json");
+    m.writeValue(file.toFile(), c);
+    assertEquals(FlexMargin.EXIT_UNRELIABLE, run("sweep", file.toString(), "--out", tmp.resolve("o").toString(),
+        "--quiet"));
+    JsonNode json = m.readTree(tmp.resolve("o/results.json").toFile());
+    boolean marked = false;
+    for (JsonNode f : json.get("findings")) {
+      marked |= f.get("finding").asText().equals("mode tracking trusted only to here");
+    }
+    assertTrue(marked, "the trusted range is a finding");
+    assertTrue(json.at("/configurations/0/flutter/warnings").toString().contains("UNRELIABLE"));
+  }
+}
