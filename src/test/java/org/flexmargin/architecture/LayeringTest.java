@@ -70,6 +70,11 @@ class LayeringTest {
   }
 
   @Test
+  void latticeIsBesideAero() {
+    onlyDependsOn("lattice", "model", "numerics", "aero");
+  }
+
+  @Test
   void flutterDependsOnlyOnLowerLayers() {
     onlyDependsOn("flutter", "model", "numerics", "aero", "structure", "atmosphere");
   }
