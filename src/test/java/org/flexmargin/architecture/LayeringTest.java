@@ -71,7 +71,12 @@ class LayeringTest {
 
   @Test
   void latticeIsBesideAero() {
-    onlyDependsOn("lattice", "model", "numerics", "aero");
+    onlyDependsOn("lattice", "model", "numerics", "aero", "spline");
+  }
+
+  @Test
+  void splineDependsOnNothingOfOurs() {
+    onlyDependsOn("spline");
   }
 
   @Test
