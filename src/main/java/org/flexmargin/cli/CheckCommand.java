@@ -68,9 +68,11 @@ final class CheckCommand implements Callable<Integer> {
             fp.schedule().dynamicPressurePa().length > 1 ? "on dynamic pressure" : "constant");
       }
       for (Configuration cfg : c.configurations()) {
-        double[] sp = ServoMargins.loopAt(ConfigurationModel.of(cfg), cfg, loop, path.at(0)).plant().shortPeriodRoots();
+        var plant = ServoMargins.loopAt(ConfigurationModel.of(cfg), cfg, loop, path.at(0)).plant();
+        double[] sp = plant.shortPeriodRoots();
         out.printf(Locale.ROOT, "  %s airframe alone at the first point: short-period roots %.3f%+.3fi and %.3f%+.3fi 1/s%s%n",
             cfg.name(), sp[0], sp[1], sp[2], sp[3], Math.max(sp[0], sp[2]) > 0 ? " (unstable: the loop must stabilise it)" : "");
+        plant.assumptions().forEach(a -> out.println("    assumption: " + a));
       }
     }
     if (c.requirements() != null) {

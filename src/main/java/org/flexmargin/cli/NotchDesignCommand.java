@@ -247,13 +247,13 @@ final class NotchDesignCommand implements Callable<Integer> {
       pw.print("  " + v.configuration() + ": " + (v.clearance().passed() ? "PASS" : "FAIL"));
       v.clearance().governingFinding().ifPresent(g -> pw.print("; governing: " + g.describe()));
       pw.println();
-      String h = String.format(Locale.ROOT, "    %-34s %-22s %-6s %10s %12s %12s", "requirement", "mode or band",
+      String h = String.format(Locale.ROOT, "    %-24s %-20s %-6s %8s %17s %15s", "requirement", "mode or band",
           "result", "EAS m/s", "required", "achieved");
       pw.println(h);
       pw.println("    " + "-".repeat(h.length() - 4));
       for (RankedFinding f : v.clearance().ranked()) {
         ClearanceCheck c = f.check();
-        pw.printf(Locale.ROOT, "    %-34s %-22s %-6s %10.2f %12s %12s%n", c.kind().key().replace('_', ' '),
+        pw.printf(Locale.ROOT, "    %-24s %-20s %-6s %8.2f %17s %15s%n", c.kind().key().replace('_', ' '),
             c.subject().isEmpty() ? "-" : c.subject(), c.passed() ? "pass" : "FAIL", f.speedEasMps(), sensed(c),
             value(c.achievedValue(), c));
       }

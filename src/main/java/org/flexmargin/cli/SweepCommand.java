@@ -85,6 +85,9 @@ final class SweepCommand implements Callable<Integer> {
         for (String w : r.flutter().warnings()) {
           out.println("  warning: " + w);
         }
+        if (r.servo() != null) {
+          r.servo().closedLoop().assumptions().forEach(a -> out.println("  assumption: " + a));
+        }
         if (r.clearance() == null) {
           out.println("  lowest unstable speed: " + lowestUnstable(r));
         }
