@@ -50,6 +50,10 @@ final class DemoCommand implements Callable<Integer> {
 
   @Override
   public Integer call() {
+    if (!common.quiet) {
+      spec.commandLine().getOut().println("demo: the bundled Ridgeline MC-7 case (invented data; the same files as "
+          + "mode-tables/demo/ in the source tree), report to " + out);
+    }
     return SweepCommand.run(spec, bundledCase(), out, common, style, work);
   }
 
