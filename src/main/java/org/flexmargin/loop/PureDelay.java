@@ -27,6 +27,18 @@ public record PureDelay(double delayS, PadeOrder order) implements LinearBlock {
     return pade(delayS, order);
   }
 
+  /** @return tau, s */
+  @Override
+  public double pureDelayS() {
+    return delayS;
+  }
+
+  /** @return none: e^{-s tau} has no poles (those of the Padé realisation are not seeds) */
+  @Override
+  public Eigenvalues knownPoles() {
+    return Eigenvalues.none();
+  }
+
   @Override
   public void response(double omegaRadPerS, double[] reIm) {
     reIm[0] = Math.cos(omegaRadPerS * delayS);
