@@ -35,6 +35,21 @@ public record ClosedLoopResult(
     assumptions = List.copyOf(assumptions);
   }
 
+  /**
+   * @param crossing one of {@link #crossings()}
+   * @return which model located it, in words: the exact loop with the rational onset and the
+   *     difference beside it, or the closed-loop state space
+   */
+  public String routeOf(FlutterCrossing crossing) {
+    for (OnsetRefinement r : refinements) {
+      if (r.exact().isPresent() && r.exact().get().equals(crossing)) {
+        return String.format(java.util.Locale.ROOT, "exact frequency-domain loop; rational model %.2f m/s EAS, "
+            + "difference %+.2f m/s", r.rational().condition().speedEasMps(), r.speedDifferenceEasMps());
+      }
+    }
+    return "closed-loop state space";
+  }
+
   /** Without exact-loop refinements (the crossings are those of the rational model). */
   public ClosedLoopResult(List<ClosedLoopPoint> points, List<FlutterCrossing> crossings, String fitDescription,
       int eigenSolves, List<String> warnings, List<String> assumptions) {
