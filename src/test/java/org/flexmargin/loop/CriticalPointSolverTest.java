@@ -6,7 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-/** Exact stability boundaries of loop families with closed-form critical points. */
+/**
+ * Exact stability boundaries of loop families with closed-form critical points
+ * (docs/validation.md sec. 13.3).
+ */
 class CriticalPointSolverTest {
 
   @Test

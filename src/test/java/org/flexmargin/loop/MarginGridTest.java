@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 /**
  * The margin frequency grid cannot step over what matters: every phase turn of a long delay and a
  * very narrow resonance that no caller announced. Check values are closed forms derived beside
- * each test (docs/validation.md, "Margin frequency grid").
+ * each test (docs/validation.md sec. 13.1).
  */
 class MarginGridTest {
 

@@ -7,7 +7,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The zero-order hold is the same function in both faces: the exact response and the rational
- * state space used for closed-loop eigenvalues (docs/validation.md, "Zero-order hold").
+ * state space used for closed-loop eigenvalues (docs/validation.md sec. 13.2).
  */
 class ZeroOrderHoldTest {
   private static final double T = 1.0 / 80;

@@ -24,7 +24,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * One loop, one stability boundary: the closed-loop onsets of the invented demo aircraft are
- * where the exact broken loop passes through -1, and the eigenvalue route agrees with them.
+ * where the exact broken loop passes through -1, and the eigenvalue route agrees with them
+ * (docs/validation.md sec. 13.3).
  */
 class ExactOnsetTest {
   private static final AnalysisCase DEMO = CaseReader.read(Path.of("mode-tables/demo/demo-case.json"));
