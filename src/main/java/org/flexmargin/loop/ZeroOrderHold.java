@@ -1,8 +1,5 @@
 package org.flexmargin.loop;
 
-import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.CommonOps_DDRM;
-
 /**
  * Zero-order hold of a sampled-data channel with sample period T, seen from continuous time:
  *
@@ -37,23 +34,14 @@ public record ZeroOrderHold(double samplePeriodS, PadeOrder order) implements Li
 
   @Override
   public StateSpace stateSpace() {
+    // 2 (c_1 + c_3 x^2 + ...)/P(x), x = s T, descending powers: index n - k holds x^k
     double[] c = order.coefficients();
     int n = order.degree();
     double[] num = new double[n + 1];
-    double[] den = new double[n + 1];
-    for (int k = 0; k <= n; k++) {
-      // descending powers of x = s T: index n - k holds x^k
-      den[n - k] = c[k];
-      if (k % 2 == 1) {
-        num[n - (k - 1)] = 2 * c[k];
-      }
+    for (int k = 1; k <= n; k += 2) {
+      num[n - (k - 1)] = 2 * c[k];
     }
-    StateSpace unit = StateSpace.fromTransferFunction(num, den);
-    DMatrixRMaj a = unit.a();
-    DMatrixRMaj b = unit.b();
-    CommonOps_DDRM.scale(1.0 / samplePeriodS, a);
-    CommonOps_DDRM.scale(1.0 / samplePeriodS, b);
-    return StateSpace.of(a, b, unit.c(), unit.d());
+    return PureDelay.timeScaled(num, order.descendingCoefficients(), samplePeriodS);
   }
 
   /** @return T/2, s: the hold's phase is exactly -w T/2 between the zeros of its droop */
