@@ -26,6 +26,13 @@ public record SolverDiagnostics(
     int unconvergedRoots,
     double firstTroublePathParameter) {
 
+  /** Diagnostics of a solution whose tracking was clean throughout. */
+  public SolverDiagnostics(long rootSolves, long iterations, long fullEigenSolves, int stepHalvings,
+      double maxRelativeResidual, double minMac, int unconvergedRoots) {
+    this(rootSolves, iterations, fullEigenSolves, stepHalvings, maxRelativeResidual, minMac, unconvergedRoots,
+        Double.NaN);
+  }
+
   /** @return whether tracking was in doubt anywhere */
   public boolean trackingTroubled() {
     return !Double.isNaN(firstTroublePathParameter);

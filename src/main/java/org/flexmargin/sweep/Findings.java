@@ -102,7 +102,7 @@ public final class Findings {
       FlightCondition fc = x.condition();
       out.add(new Finding(c.configuration(), "closed-loop " + label(x.kind()), x.branchName(), fc.speedEasMps(),
           fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
-          crossedRemark(x.thresholdG(), "closed-loop state space")));
+          crossedRemark(x.thresholdG(), r.routeOf(x))));
     }
   }
 
