@@ -150,6 +150,12 @@ public final class AircraftSimulationModel {
     return new StateSpace(a, b, c, d, List.of(PILOT_INPUT, "white_noise"), system.outputNames(), states);
   }
 
+  /** @return the model with its actuator marked for rate and position limits */
+  public LimitedActuatorSystem limited() {
+    return new LimitedActuatorSystem(system, actuatorPosition, actuatorRate, actuatorOmega, actuatorDamping,
+        commandOutput, system.outputNames().indexOf(ELEVATOR_RATE));
+  }
+
   /** @return output name of a modal coordinate (unit: that of the mode table's normalisation) */
   public static String modalOutput(String mode) {
     return mode + "_modal_coordinate";
