@@ -71,7 +71,7 @@ public final class LimitedActuatorSimulation {
       @Override
       public void computeDerivatives(double t, double[] state, double[] dx) {
         double[] x = atStop(state, pos, posLimit, work);
-        sample(inputs, t, u);
+        LinearSimulation.sample(inputs, t, u);
         for (int i = 0; i < n; i++) {
           double s = 0;
           int base = i * n;
@@ -128,16 +128,7 @@ public final class LimitedActuatorSimulation {
         }
         times[k] = k * outputStepS;
         ode.computeDerivatives(t, x, dxBuffer);
-        for (int i = 0; i < p; i++) {
-          double s = 0;
-          for (int j = 0; j < n; j++) {
-            s += c[i * n + j] * x[j];
-          }
-          for (int j = 0; j < m; j++) {
-            s += d[i * m + j] * u[j];
-          }
-          y[i][k] = s;
-        }
+        LinearSimulation.outputs(c, d, x, u, y, k);
         if (spec.rateOutput() >= 0) {
           y[spec.rateOutput()][k] = achievedRate[0];
         }
@@ -175,13 +166,6 @@ public final class LimitedActuatorSimulation {
 
   static double clip(double v, double limit) {
     return v > limit ? limit : (v < -limit ? -limit : v);
-  }
-
-  private static void sample(List<DoubleUnaryOperator> inputs, double timeS, double[] u) {
-    for (int j = 0; j < u.length; j++) {
-      DoubleUnaryOperator f = inputs.get(j);
-      u[j] = f == null ? 0.0 : f.applyAsDouble(timeS);
-    }
   }
 
   /** Accepted-step statistics. */
