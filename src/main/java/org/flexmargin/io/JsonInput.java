@@ -4,6 +4,8 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.exc.StreamReadException;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -22,8 +24,21 @@ import java.util.Map;
  * range checks can name them.
  */
 final class JsonInput {
-  private static final JsonFactory FACTORY =
-      JsonFactory.builder().enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS).build();
+  /** Deepest nesting of objects and lists accepted (the deepest format needs 6). */
+  static final int MAX_NESTING_DEPTH = 64;
+  /** Longest text value accepted (characters). */
+  static final int MAX_STRING_LENGTH = 1_000_000;
+  /** Longest number accepted (characters). */
+  static final int MAX_NUMBER_LENGTH = 400;
+
+  private static final JsonFactory FACTORY = JsonFactory.builder()
+      .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
+      .streamReadConstraints(StreamReadConstraints.builder()
+          .maxNestingDepth(MAX_NESTING_DEPTH)
+          .maxStringLength(MAX_STRING_LENGTH)
+          .maxNumberLength(MAX_NUMBER_LENGTH)
+          .build())
+      .build();
 
   private final SourceFile source;
   private final JsonNode root;
@@ -45,7 +60,9 @@ final class JsonInput {
    */
   static JsonInput parse(SourceFile source) {
     Map<String, Integer> lines = new HashMap<>();
-    try (JsonParser p = FACTORY.createParser(source.bytes())) {
+    JsonParser p = null;
+    try {
+      p = FACTORY.createParser(source.bytes());
       if (p.nextToken() == null) {
         throw new InputFileException(source.display(), 1, "", "a JSON object", "an empty file");
       }
@@ -56,6 +73,8 @@ final class JsonInput {
             "the end of the file after the top-level value", "more content (" + extra.asString() + ")");
       }
       return new JsonInput(source, root, lines);
+    } catch (StreamConstraintsException e) {
+      throw limit(source, p, e);
     } catch (StreamReadException e) {
       JsonLocation loc = e.getLocation();
       int line = loc == null ? 0 : loc.getLineNr();
@@ -65,7 +84,38 @@ final class JsonInput {
     } catch (IOException e) {
       throw new InputFileException(
           source.display(), 0, "", "a readable JSON file", e.getClass().getSimpleName() + " " + e.getMessage(), e);
+    } finally {
+      if (p != null) {
+        try {
+          p.close();
+        } catch (IOException ignored) {
+          // the bytes are in memory: closing cannot fail in a way that matters
+        }
+      }
     }
+  }
+
+  /** Translates a parser limit into our own words, at the line where the parser stopped. */
+  private static InputFileException limit(SourceFile source, JsonParser p, StreamConstraintsException e) {
+    int line = p == null ? 0 : Math.max(p.currentLocation().getLineNr(), p.currentTokenLocation().getLineNr());
+    String msg = String.valueOf(e.getOriginalMessage());
+    String expected;
+    String found;
+    if (msg.contains("nesting depth")) {
+      expected = "objects and lists nested at most " + MAX_NESTING_DEPTH + " levels deep";
+      found = "deeper nesting";
+    } else if (msg.contains("String value length")) {
+      expected = "a text value of at most " + MAX_STRING_LENGTH + " characters";
+      found = "a longer text value";
+    } else if (msg.contains("Number value length") || msg.contains("Number length")) {
+      expected = "a number of at most " + MAX_NUMBER_LENGTH + " characters";
+      found = "a longer number";
+    } else {
+      expected = "JSON within the reader's limits (nesting " + MAX_NESTING_DEPTH + " levels, text "
+          + MAX_STRING_LENGTH + " characters, numbers " + MAX_NUMBER_LENGTH + " characters)";
+      found = "content beyond them";
+    }
+    return new InputFileException(source.display(), line, "", expected, found, e);
   }
 
   private static JsonNode readValue(JsonParser p, String path, Map<String, Integer> lines, SourceFile src)

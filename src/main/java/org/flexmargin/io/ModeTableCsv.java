@@ -1,6 +1,7 @@
 package org.flexmargin.io;
 
-import java.nio.charset.CharacterCodingException;
+import java.nio.CharBuffer;
+import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.ByteBuffer;
@@ -8,6 +9,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -68,14 +70,7 @@ final class ModeTableCsv {
    */
   static ModeTable parse(SourceFile src) {
     String file = src.display();
-    String text;
-    try {
-      text = StandardCharsets.UTF_8.newDecoder()
-          .onMalformedInput(CodingErrorAction.REPORT)
-          .decode(ByteBuffer.wrap(src.bytes())).toString();
-    } catch (CharacterCodingException e) {
-      throw new InputFileException(file, 0, "", "UTF-8 text", "bytes that are not UTF-8", e);
-    }
+    String text = decodeUtf8(src);
     if (text.startsWith("\uFEFF")) {
       text = text.substring(1);
     }
@@ -266,6 +261,33 @@ final class ModeTableCsv {
     } catch (InvalidInputException e) {
       throw located(e, file, headerLine, "");
     }
+  }
+
+  /** Decodes UTF-8, reporting the line and column of the first byte that is not UTF-8. */
+  private static String decodeUtf8(SourceFile src) {
+    byte[] bytes = src.bytes();
+    ByteBuffer in = ByteBuffer.wrap(bytes);
+    CharBuffer out = CharBuffer.allocate(bytes.length + 1);
+    CoderResult r = StandardCharsets.UTF_8.newDecoder()
+        .onMalformedInput(CodingErrorAction.REPORT)
+        .onUnmappableCharacter(CodingErrorAction.REPORT)
+        .decode(in, out, true);
+    if (r.isError()) {
+      int at = in.position();
+      int line = 1;
+      int lineStart = 0;
+      for (int k = 0; k < at; k++) {
+        if (bytes[k] == '\n') {
+          line++;
+          lineStart = k + 1;
+        }
+      }
+      throw new InputFileException(src.display(), line, "", "UTF-8 text",
+          String.format(Locale.ROOT, "the byte 0x%02X at column %d, which is not UTF-8 (save the file as UTF-8)",
+              bytes[at] & 0xff, at - lineStart + 1));
+    }
+    out.flip();
+    return out.toString();
   }
 
   private static InputFileException located(InvalidInputException e, String file, int line, String prefix) {
