@@ -35,6 +35,7 @@ final class CheckCommand implements Callable<Integer> {
   @Override
   public Integer call() {
     AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     PrintWriter out = spec.commandLine().getOut();
     out.printf(Locale.ROOT, "case %s (format %d): %s%n", c.name(), c.format(), c.description());
     PlannedPath path = new PlannedPath(c.sweep());

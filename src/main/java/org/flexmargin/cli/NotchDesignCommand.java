@@ -106,6 +106,7 @@ final class NotchDesignCommand implements Callable<Integer> {
   public Integer call() {
     PrintWriter pw = spec.commandLine().getOut();
     AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     if (c.loop() == null) {
       throw new InvalidInputException("loop", "a flight-control loop (notch design needs one)", "none");
     }

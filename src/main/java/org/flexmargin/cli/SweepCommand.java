@@ -56,6 +56,7 @@ final class SweepCommand implements Callable<Integer> {
     PrintWriter err = spec.commandLine().getErr();
     ReportOptions reportOptions = reportOptions(common);
     AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, c.configurations().size() * SweepProgress.stagesPerConfiguration(c),
         terminal);

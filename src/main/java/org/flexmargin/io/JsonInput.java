@@ -43,22 +43,30 @@ final class JsonInput {
   private final SourceFile source;
   private final JsonNode root;
   private final Map<String, Integer> lines;
+  private final ReadLog log;
 
-  private JsonInput(SourceFile source, JsonNode root, Map<String, Integer> lines) {
+  private JsonInput(SourceFile source, JsonNode root, Map<String, Integer> lines, ReadLog log) {
     this.source = source;
     this.root = root;
     this.lines = lines;
+    this.log = log;
+  }
+
+  /** As {@link #parse(SourceFile, ReadLog)} with a log of its own. */
+  static JsonInput parse(SourceFile source) {
+    return parse(source, new ReadLog());
   }
 
   /**
    * Parses a JSON file.
    *
    * @param source the file
+   * @param log where range warnings of this file's values go
    * @return the tree with locations
    * @throws InputFileException on malformed JSON (Jackson's line and column), duplicate keys or an
    *     empty file
    */
-  static JsonInput parse(SourceFile source) {
+  static JsonInput parse(SourceFile source, ReadLog log) {
     Map<String, Integer> lines = new HashMap<>();
     JsonParser p = null;
     try {
@@ -72,7 +80,7 @@ final class JsonInput {
         throw new InputFileException(source.display(), p.currentTokenLocation().getLineNr(), "",
             "the end of the file after the top-level value", "more content (" + extra.asString() + ")");
       }
-      return new JsonInput(source, root, lines);
+      return new JsonInput(source, root, lines, log);
     } catch (StreamConstraintsException e) {
       throw limit(source, p, e);
     } catch (StreamReadException e) {
@@ -166,6 +174,16 @@ final class JsonInput {
       default:
         throw new InputFileException(src.display(), line, path, "a JSON value", String.valueOf(t));
     }
+  }
+
+  /** @return the log of the read this file belongs to */
+  ReadLog log() {
+    return log;
+  }
+
+  /** @return the tree (read only) */
+  JsonNode tree() {
+    return root;
   }
 
   /** @return the file */

@@ -16,6 +16,7 @@ import java.util.regex.Pattern;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.model.ModeTable;
+import org.flexmargin.model.PlausibleRange;
 import org.flexmargin.model.ShapeValue;
 
 /**
@@ -65,10 +66,11 @@ final class ModeTableCsv {
 
   /**
    * @param src the CSV file
+   * @param log where warnings about unusual values go
    * @return the validated table
    * @throws InputFileException on malformed or invalid content
    */
-  static ModeTable parse(SourceFile src) {
+  static ModeTable parse(SourceFile src, ReadLog log) {
     String file = src.display();
     String text = decodeUtf8(src);
     if (text.startsWith("\uFEFF")) {
@@ -198,8 +200,12 @@ final class ModeTableCsv {
             "each station once per mode", "a second row for station \"" + station + "\"");
       }
       String path = prefix + "shapes." + station;
-      double disp = number(cell(cells, col, "displacement_m"), file, lineNo, path + ".displacement_m");
-      double rot = number(cell(cells, col, "rotation_rad"), file, lineNo, path + ".rotation_rad");
+      double disp = log.check(PlausibleRange.MODE_SHAPE_DISPLACEMENT,
+          number(cell(cells, col, "displacement_m"), file, lineNo, path + ".displacement_m"),
+          cell(cells, col, "displacement_m") + " m", file, lineNo, path + ".displacement_m");
+      double rot = log.check(PlausibleRange.MODE_SHAPE_ROTATION,
+          number(cell(cells, col, "rotation_rad"), file, lineNo, path + ".rotation_rad"),
+          cell(cells, col, "rotation_rad") + " rad", file, lineNo, path + ".rotation_rad");
       try {
         d.shapes.put(station, new ShapeValue(disp, rot));
       } catch (InvalidInputException e) {
@@ -227,8 +233,12 @@ final class ModeTableCsv {
             "exactly one of damping_ratio or structural_damping_g on the mode's first row",
             hasZeta ? "both" : "neither");
       }
-      double f = number(d.modeValues.get("frequency_hz"), file, d.firstLine, p + "frequency_hz");
-      double m = number(d.modeValues.get("generalized_mass_kg"), file, d.firstLine, p + "generalized_mass_kg");
+      double f = log.check(PlausibleRange.MODE_FREQUENCY,
+          number(d.modeValues.get("frequency_hz"), file, d.firstLine, p + "frequency_hz"),
+          d.modeValues.get("frequency_hz") + " Hz", file, d.firstLine, p + "frequency_hz");
+      double m = log.check(PlausibleRange.MODE_GENERALIZED_MASS,
+          number(d.modeValues.get("generalized_mass_kg"), file, d.firstLine, p + "generalized_mass_kg"),
+          d.modeValues.get("generalized_mass_kg") + " kg", file, d.firstLine, p + "generalized_mass_kg");
       double zeta;
       if (hasZeta) {
         zeta = number(d.modeValues.get("damping_ratio"), file, d.firstLine, p + "damping_ratio");
@@ -239,6 +249,10 @@ final class ModeTableCsv {
               "a structural damping g in [0, 2) (g = 2 zeta)", String.valueOf(g));
         }
         zeta = g / 2;
+      }
+      if (zeta >= 0 && zeta < 1) {
+        log.check(PlausibleRange.MODE_DAMPING_RATIO, zeta, "a damping ratio of " + zeta, file, d.firstLine,
+            p + (hasZeta ? "damping_ratio" : "structural_damping_g"));
       }
       if (firstDraft != null) {
         String mismatch = CaseReader.stationMismatch(firstDraft.shapes.keySet(), d.shapes.keySet());
