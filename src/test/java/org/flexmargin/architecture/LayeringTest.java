@@ -102,6 +102,12 @@ class LayeringTest {
   }
 
   @Test
+  void simulationSitsOnTopOfTheSweep() {
+    onlyDependsOn("simulate", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase",
+        "clearance", "sweep");
+  }
+
+  @Test
   void ioReadsIntoModelOnly() {
     onlyDependsOn("io", "model", "atmosphere");
   }
