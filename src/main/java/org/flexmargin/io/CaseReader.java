@@ -129,7 +129,9 @@ public final class CaseReader {
   public static AnalysisCase read(Path caseFile) {
     SourceFile src = SourceFile.read(caseFile, caseFile.toString());
     Context ctx = new Context(caseFile, src);
-    JsonField root = JsonInput.parse(src, ctx.log).root().object("a case file");
+    JsonInput caseDoc = JsonInput.parse(src, ctx.log);
+    ctx.log.validateLater(Schemas.Kind.CASE_FILE, caseDoc);
+    JsonField root = caseDoc.root().object("a case file");
     root.allowOnly(CASE_KEYS);
     int format = readFormat(root);
     String name = root.required("name", "a case name").text();
@@ -157,6 +159,7 @@ public final class CaseReader {
     JsonField rq = root.optional("requirements");
     ClearanceRequirements requirements = rq == null ? null : readRequirements(rq, ctx);
     List<InputFile> inputs = new ArrayList<>(ctx.inputs.values());
+    ctx.log.validatePending();
     List<InputWarning> warnings = ctx.log.warnings();
     return root.build(() -> new AnalysisCase(format, name, description, configurations, sweep, options, inputs,
         loop, requirements, warnings));
@@ -170,7 +173,10 @@ public final class CaseReader {
    * @throws InputFileException on any unreadable, malformed or invalid input
    */
   public static ModeTable readModeTable(Path file) {
-    return parseModeTable(SourceFile.read(file, file.toString()), new ReadLog());
+    ReadLog log = new ReadLog();
+    ModeTable t = parseModeTable(SourceFile.read(file, file.toString()), log);
+    log.validatePending();
+    return t;
   }
 
   /**
@@ -182,7 +188,10 @@ public final class CaseReader {
    * @throws InputFileException on any unreadable, malformed or invalid input
    */
   public static GafTable readForceTable(Path file) {
-    return parseForceTable(SourceFile.read(file, file.toString()), null, new ReadLog());
+    ReadLog log = new ReadLog();
+    GafTable t = parseForceTable(SourceFile.read(file, file.toString()), null, log);
+    log.validatePending();
+    return t;
   }
 
   // ----------------------------------------------------------------------------------------------
@@ -206,13 +215,18 @@ public final class CaseReader {
       return baseDir.resolve(relative).normalize();
     }
 
-    /** Reads and parses the JSON file named by the text value {@code from}; returns its top level. */
-    JsonField readReferenced(JsonField from) {
+    /**
+     * Reads and parses the JSON file named by the text value {@code from}, to be validated against
+     * the schema of {@code kind}; returns its top level.
+     */
+    JsonField readReferenced(JsonField from, Schemas.Kind kind) {
       String rel = from.text();
       if (!rel.toLowerCase(Locale.ROOT).endsWith(".json")) {
         throw from.fail("a .json file (path relative to the case file) or the data in place", "\"" + rel + "\"");
       }
-      return JsonInput.parse(read(from, rel), log).root();
+      JsonInput doc = JsonInput.parse(read(from, rel), log);
+      log.validateLater(kind, doc);
+      return doc.root();
     }
 
     SourceFile read(JsonField from, String relative) {
@@ -259,7 +273,7 @@ public final class CaseReader {
   /** The requirements section in place, or a file reference to a standalone requirements file. */
   private static ClearanceRequirements readRequirements(JsonField rq, Context ctx) {
     if (rq.node().isTextual()) {
-      return RequirementsReader.readFile(ctx.readReferenced(rq));
+      return RequirementsReader.readFile(ctx.readReferenced(rq, Schemas.Kind.REQUIREMENTS));
     }
     return RequirementsReader.readSection(rq);
   }
@@ -460,7 +474,7 @@ public final class CaseReader {
     List<FilterSpec> filters = new ArrayList<>();
     JsonField fl = p.optional("filters");
     if (fl != null) {
-      for (JsonField f : FilterFiles.filterList(fl, index, sensor, ctx::readReferenced)) {
+      for (JsonField f : FilterFiles.filterList(fl, index, sensor, f -> ctx.readReferenced(f, Schemas.Kind.FILTERS))) {
         filters.add(readFilter(f.object("a filter: {\"notch\": {...}} or {\"low_pass\": {...}}")));
       }
     }
@@ -769,7 +783,9 @@ public final class CaseReader {
     if (!lower.endsWith(".json")) {
       throw new InputFileException(src.display(), 0, "", "a .json or .csv mode table", "another file type");
     }
-    JsonField root = JsonInput.parse(src, log).root().object("a mode table");
+    JsonInput doc = JsonInput.parse(src, log);
+    log.validateLater(Schemas.Kind.MODE_TABLE, doc);
+    JsonField root = doc.root().object("a mode table");
     root.allowOnly(MODE_TABLE_KEYS);
     readFormat(root);
     JsonField nameField = root.optional("name");
@@ -839,7 +855,9 @@ public final class CaseReader {
   }
 
   private static GafTable parseForceTable(SourceFile src, ModeTable table, ReadLog log) {
-    JsonField root = JsonInput.parse(src, log).root().object("a force table");
+    JsonInput doc = JsonInput.parse(src, log);
+    log.validateLater(Schemas.Kind.FORCE_TABLE, doc);
+    JsonField root = doc.root().object("a force table");
     root.allowOnly(FORCE_KEYS);
     readFormat(root);
     textOrEmpty(root, "description");

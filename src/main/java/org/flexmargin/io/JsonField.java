@@ -144,7 +144,8 @@ final class JsonField {
       }
     }
     if (present == null) {
-      throw fail("exactly one of the keys " + String.join(", ", keys) + " (" + what + ")", "none of them");
+      throw new InputFileException(doc.source().display(), line(), childPath(path, keys[0]),
+          "exactly one of the keys " + String.join(", ", keys) + " (" + what + ")", "none of them");
     }
     return present;
   }

@@ -12,8 +12,11 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.core.JsonStreamContext;
 import java.io.IOException;
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -87,8 +90,9 @@ final class JsonInput {
       JsonLocation loc = e.getLocation();
       int line = loc == null ? 0 : loc.getLineNr();
       String column = loc == null ? "" : " at column " + loc.getColumnNr();
+      String where = p == null ? "" : contextPath(p.getParsingContext());
       throw new InputFileException(
-          source.display(), line, "", "well-formed JSON", e.getOriginalMessage() + column, e);
+          source.display(), line, where, "well-formed JSON", e.getOriginalMessage() + column, e);
     } catch (IOException e) {
       throw new InputFileException(
           source.display(), 0, "", "a readable JSON file", e.getClass().getSimpleName() + " " + e.getMessage(), e);
@@ -101,6 +105,26 @@ final class JsonInput {
         }
       }
     }
+  }
+
+  /**
+   * @return the field path of the value the parser was reading ({@code configurations[0].aero}),
+   *     empty at the top level; names the field where a file is cut short or malformed
+   */
+  static String contextPath(JsonStreamContext ctx) {
+    List<String> parts = new ArrayList<>();
+    for (JsonStreamContext c = ctx; c != null && !c.inRoot(); c = c.getParent()) {
+      if (c.inArray()) {
+        parts.add("[" + Math.max(0, c.getCurrentIndex()) + "]");
+      } else if (c.getCurrentName() != null) {
+        parts.add("." + c.getCurrentName());
+      }
+    }
+    StringBuilder sb = new StringBuilder();
+    for (int i = parts.size() - 1; i >= 0; i--) {
+      sb.append(parts.get(i));
+    }
+    return sb.length() > 0 && sb.charAt(0) == '.' ? sb.substring(1) : sb.toString();
   }
 
   /** Translates a parser limit into our own words, at the line where the parser stopped. */
@@ -123,7 +147,8 @@ final class JsonInput {
           + MAX_STRING_LENGTH + " characters, numbers " + MAX_NUMBER_LENGTH + " characters)";
       found = "content beyond them";
     }
-    return new InputFileException(source.display(), line, "", expected, found, e);
+    String where = p == null ? "" : contextPath(p.getParsingContext());
+    return new InputFileException(source.display(), line, where, expected, found, e);
   }
 
   private static JsonNode readValue(JsonParser p, String path, Map<String, Integer> lines, SourceFile src)

@@ -3,6 +3,7 @@ package org.flexmargin.io;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.flexmargin.model.InputWarning;
 import org.flexmargin.model.PlausibleRange;
@@ -15,6 +16,24 @@ import org.flexmargin.model.PlausibleRange;
 final class ReadLog {
   private final List<InputWarning> warnings = new ArrayList<>();
   private final Set<PlausibleRange> overrides = EnumSet.noneOf(PlausibleRange.class);
+  private final List<Map.Entry<Schemas.Kind, JsonInput>> pending = new ArrayList<>();
+
+  /** Notes a parsed file for validation against its schema once the reader is done with it. */
+  void validateLater(Schemas.Kind kind, JsonInput doc) {
+    pending.add(Map.entry(kind, doc));
+  }
+
+  /**
+   * Validates every noted file against its schema, in reading order.
+   *
+   * @throws InputFileException at the first violation
+   */
+  void validatePending() {
+    for (Map.Entry<Schemas.Kind, JsonInput> e : pending) {
+      Schemas.check(e.getKey(), e.getValue());
+    }
+    pending.clear();
+  }
 
   void warn(String file, int line, String fieldPath, String text) {
     warnings.add(new InputWarning(file, line, fieldPath, text));

@@ -52,7 +52,10 @@ public final class RequirementsReader {
    */
   public static ClearanceRequirements read(Path file) {
     SourceFile src = SourceFile.read(file, file.toString());
-    return readFile(JsonInput.parse(src).root());
+    JsonInput doc = JsonInput.parse(src);
+    ClearanceRequirements r = readFile(doc.root());
+    Schemas.check(Schemas.Kind.REQUIREMENTS, doc);
+    return r;
   }
 
   /**
