@@ -70,6 +70,16 @@ class LayeringTest {
   }
 
   @Test
+  void latticeIsBesideAero() {
+    onlyDependsOn("lattice", "model", "numerics", "aero", "spline");
+  }
+
+  @Test
+  void splineDependsOnNothingOfOurs() {
+    onlyDependsOn("spline");
+  }
+
+  @Test
   void flutterDependsOnlyOnLowerLayers() {
     onlyDependsOn("flutter", "model", "numerics", "aero", "structure", "atmosphere");
   }
