@@ -719,7 +719,8 @@ public final class CaseReader {
         b = mid;
       }
     }
-    return 0.5 * (a + b);
+    // to the micrometre (density changes by about 1e-10 kg/m^3), and sea level as 0 rather than -0
+    return Math.rint(0.5 * (a + b) * 1e6) / 1e6 + 0.0;
   }
 
   /** Reads {@code <stem>_mps} or {@code <stem>_kt} (&gt; 0); returns m/s. */
