@@ -115,7 +115,7 @@ public final class MarginCharts {
   }
 
   /** Governing margins per grid point, per band. */
-  private static final class Data {
+  static final class Data {
     final SweepResult result;
     final ConfigurationResult c;
     final ClearanceRequirements req;

@@ -88,9 +88,10 @@ public final class ReportWriter {
     }
     String title = (anyLoop ? "Aeroservoelastic clearance report: " : "Flutter and divergence report: ")
         + result.analysisCase().name();
-    String page = HtmlReport.render(title,
-        java.util.stream.Stream.of(result.analysisCase().description(), result.pathDescription())
-            .filter(s -> !s.isBlank()).toList(),
+    List<EmbeddedChart> panel = embed(MarginPanel.of(result, unit), chartDir, options);
+    String page = HtmlReport.render(title, List.of(result.pathDescription()),
+        w -> VerdictStrip.write(w, result, unit, panel, options.proposedNotches()),
+        java.util.stream.Stream.of(result.analysisCase().description()).filter(s -> !s.isBlank()).toList(),
         sections);
     Path html = folder.resolve(REPORT_FILE);
     Files.writeString(html, page, StandardCharsets.UTF_8);
