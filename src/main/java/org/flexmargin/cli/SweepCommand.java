@@ -10,6 +10,11 @@ import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.notch.ExistingNotches;
+import org.flexmargin.notch.NotchDesignResult;
+import org.flexmargin.notch.NotchDesignSpec;
+import org.flexmargin.notch.NotchDesigner;
+import org.flexmargin.report.ProposedNotches;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
 import org.flexmargin.report.SpeedAxisUnit;
@@ -42,20 +47,31 @@ final class SweepCommand implements Callable<Integer> {
   @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: reports/<case name>).")
   Path out;
 
+  @Option(names = "--design-notches", description = "Also place structural notches as notch-design does (its "
+      + "defaults) and show them in the report: on the notch chart and as a \"with proposed notches\" curve on "
+      + "the Bode and Nichols charts. Adds the cost of a notch design.")
+  boolean designNotches;
+
   @Mixin CommonOptions common;
 
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
   @Override
   public Integer call() {
-    return run(spec, caseFile, out, common);
+    return run(spec, caseFile, out, common, designNotches);
   }
 
   static int run(picocli.CommandLine.Model.CommandSpec spec, Path caseFile, Path outDir, CommonOptions common) {
+    return run(spec, caseFile, outDir, common, false);
+  }
+
+  static int run(picocli.CommandLine.Model.CommandSpec spec, Path caseFile, Path outDir, CommonOptions common,
+      boolean designNotches) {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
-    ReportOptions reportOptions = reportOptions(common);
     AnalysisCase c = CaseReader.read(caseFile);
+    ReportOptions reportOptions = designNotches && c.loop() != null
+        ? reportOptions(common).withProposedNotches(proposedNotches(c)) : reportOptions(common);
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, c.configurations().size() * SweepProgress.stagesPerConfiguration(c),
         terminal);
@@ -92,6 +108,18 @@ final class SweepCommand implements Callable<Integer> {
     boolean failed = result.configurations().stream()
         .anyMatch(r -> r.clearance() != null && !r.clearance().passed());
     return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
+  }
+
+  /** A notch design with the defaults of {@code notch-design}, for the report. */
+  private static ProposedNotches proposedNotches(AnalysisCase c) {
+    NotchDesignSpec s = NotchDesignSpec.forRequirements(c.requirements()).withNotchPaths(List.of())
+        .withMaxNotches(3).withExistingNotches(ExistingNotches.REPLACE);
+    s = s.withPoints(1, s.maxSpeedEasMps());
+    NotchDesignResult r = new NotchDesigner().design(c, s);
+    return new ProposedNotches(r.designedLoop(), r.feasible(), String.format(Locale.ROOT,
+        "designed over every configuration%s, limit %.1f dB, frequency uncertainty +-%.0f %%",
+        Double.isFinite(s.maxSpeedEasMps()) ? String.format(Locale.ROOT, " up to %.1f m/s EAS", s.maxSpeedEasMps())
+            : "", s.peakLimitDb(), 100 * s.frequencyUncertainty()));
   }
 
   static ReportOptions reportOptions(CommonOptions common) {

@@ -283,7 +283,7 @@ public final class ClearanceSections {
       ClearanceResult cr = c.clearance();
       w.open("table", "class", "per-speed compact");
       w.open("thead").open("tr");
-      for (String h : List.of("EAS (m/s)", "regime", "GM+ (dB)", "GM- (dB)", "PM (deg)", "delay (s)",
+      for (String h : List.of("EAS (m/s)", "regime", "GM+ (dB)", "GM- (dB)", "PM (deg)", "delay (ms)",
           "disk GM (dB)", "disk PM (deg)", "peak |L| (dB)", "at mode", "max Re s (1/s)", "result",
           "governing check")) {
         w.element("th", h);
@@ -332,7 +332,7 @@ public final class ClearanceSections {
         w.element("td", fmt(gmUp, 1), "class", "num");
         w.element("td", fmt(gmDown, 1), "class", "num");
         w.element("td", fmt(pm, 1), "class", "num");
-        w.element("td", fmt(m.delayMarginS().orElse(Double.NaN), 4), "class", "num");
+        w.element("td", fmt(1000 * m.delayMarginS().orElse(Double.NaN), 1), "class", "num");
         w.element("td", fmt(m.diskMargin().gainUpperDb(), 1), "class", "num");
         w.element("td", fmt(m.diskMargin().phaseMarginDeg(), 1), "class", "num");
         w.element("td", fmt(peak, 1), "class", "num");

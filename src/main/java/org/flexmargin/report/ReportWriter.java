@@ -74,7 +74,7 @@ public final class ReportWriter {
         open.add(closed.get(2));
         loop.addAll(MarginCharts.of(result, c, unit));
         loop.add(closed.get(0));
-        loop.addAll(LoopResponseCharts.of(result, c, unit));
+        loop.addAll(LoopResponseCharts.of(result, c, unit, options.proposedNotches()));
       }
       charts.put(c.configuration(), embed(open, chartDir, options));
       loopCharts.put(c.configuration(), embed(loop, chartDir, options));
