@@ -54,7 +54,7 @@ public final class ClearanceSections {
       ConfigurationResult c = result.configurations().get(i);
       if (c.servo() != null || c.clearance() != null) {
         out.add(new LoopSection("loop-" + (i + 1), i, result, c, loopCharts.getOrDefault(c.configuration(),
-            List.of())));
+            List.of()), unit));
       }
     }
     if (result.analysisCase().requirements() != null) {
@@ -134,7 +134,7 @@ public final class ClearanceSections {
         w.close("li");
       }
       w.close("ul");
-      requirementTable(w, i, r);
+      requirementTable(w, i, r, SpeedAxisUnit.METRES_PER_SECOND);
       if (!r.marginOnsets().isEmpty()) {
         w.open("p");
         w.text("Margin onsets (speed at which a loop requirement is first violated, refined between grid points): ");
@@ -157,7 +157,7 @@ public final class ClearanceSections {
   }
 
   /** One row per requirement (kind and subject): pass or fail over the sweep, worst point, first onset. */
-  private static void requirementTable(XhtmlWriter w, int config, ClearanceResult r) {
+  private static void requirementTable(XhtmlWriter w, int config, ClearanceResult r, SpeedAxisUnit unit) {
     if (r.points().isEmpty()) {
       return;
     }
@@ -186,8 +186,8 @@ public final class ClearanceSections {
     String base = "/configurations/" + config + "/clearance";
     w.open("table", "class", "requirements-met");
     w.open("thead").open("tr");
-    for (String h : List.of("loop requirement", "result over the sweep", "worst point EAS (m/s)", "required",
-        "achieved", "unit", "first violated at EAS (m/s)")) {
+    for (String h : List.of("loop requirement", "result over the sweep", "worst point EAS (" + unit.symbol() + ")",
+        "required", "achieved", "unit", "first violated at EAS (" + unit.symbol() + ")")) {
       w.element("th", h);
     }
     w.close("tr").close("thead").open("tbody");
@@ -204,7 +204,7 @@ public final class ClearanceSections {
         w.element("span", "fail at " + a[2] + " of " + a[3] + " points", "class", "warn");
       }
       w.close("td");
-      numCell(w, p + "/speed_eas_mps", r.points().get(a[0]).speedEasMps(), 2);
+      speedCell(w, p + "/speed_eas_mps", r.points().get(a[0]).speedEasMps(), unit);
       numCell(w, p + "/checks/" + a[1] + "/required", ck.requiredValue(), decimals(ck));
       numCell(w, p + "/checks/" + a[1] + "/achieved", ck.achievedValue(), decimals(ck));
       w.element("td", ck.unit().symbol());
@@ -216,8 +216,8 @@ public final class ClearanceSections {
         }
       }
       if (onset >= 0) {
-        numCell(w, base + "/margin_onsets/" + onset + "/speed_eas_mps",
-            r.marginOnsets().get(onset).condition().speedEasMps(), 2);
+        speedCell(w, base + "/margin_onsets/" + onset + "/speed_eas_mps",
+            r.marginOnsets().get(onset).condition().speedEasMps(), unit);
       } else if (a[2] == 0) {
         w.element("td", "never", "class", "num");
       } else {
@@ -228,8 +228,9 @@ public final class ClearanceSections {
           }
         }
         w.open("td", "class", "num");
-        w.element("span", fmt(r.points().get(first).speedEasMps(), 2), "data-json", base + "/points/" + first
-            + "/speed_eas_mps", "data-value", value(r.points().get(first).speedEasMps()));
+        w.element("span", fmt(unit.fromMps(r.points().get(first).speedEasMps()), 2), "data-json", base + "/points/"
+            + first + "/speed_eas_mps", "data-value", value(r.points().get(first).speedEasMps()), "data-unit",
+            unit.symbol());
         w.text(" (from its first grid point, no bracket)");
         w.close("td");
       }
@@ -254,7 +255,7 @@ public final class ClearanceSections {
 
   /** The loop and clearance of one configuration. */
   private record LoopSection(String id, int index, SweepResult result, ConfigurationResult c,
-      List<EmbeddedChart> charts) implements ReportSection {
+      List<EmbeddedChart> charts, SpeedAxisUnit unit) implements ReportSection {
     @Override
     public String heading() {
       return "Flight control loop and clearance: " + c.configuration();
@@ -283,7 +284,7 @@ public final class ClearanceSections {
       ClearanceResult cr = c.clearance();
       w.open("table", "class", "per-speed compact");
       w.open("thead").open("tr");
-      for (String h : List.of("EAS (m/s)", "regime", "GM+ (dB)", "GM- (dB)", "PM (deg)", "delay (ms)",
+      for (String h : List.of("EAS (" + unit.symbol() + ")", "regime", "GM+ (dB)", "GM- (dB)", "PM (deg)", "delay (ms)",
           "disk GM (dB)", "disk PM (deg)", "peak |L| (dB)", "at mode", "max Re s (1/s)", "result",
           "governing check")) {
         w.element("th", h);
@@ -325,9 +326,8 @@ public final class ClearanceSections {
         }
         String rowClass = pa == null ? null : pa.passed() ? null : "fail";
         w.open("tr", "class", rowClass);
-        w.element("td", fmt(sp.condition().speedEasMps(), 2), "class", "num", "data-json",
-            "/configurations/" + index + "/loop/points/" + i + "/speed_eas_mps", "data-value",
-            value(sp.condition().speedEasMps()));
+        speedCell(w, "/configurations/" + index + "/loop/points/" + i + "/speed_eas_mps",
+            sp.condition().speedEasMps(), unit);
         w.element("td", pa == null ? OpenLoopSections.MISSING : regimeLetter(pa.regime()));
         w.element("td", fmt(gmUp, 1), "class", "num");
         w.element("td", fmt(gmDown, 1), "class", "num");
@@ -477,6 +477,12 @@ public final class ClearanceSections {
 
   private static void num(XhtmlWriter w, String pointer, double v, int decimals) {
     w.element("span", fmt(v, decimals), "class", "num", "data-json", pointer, "data-value", value(v));
+  }
+
+  /** A speed cell: text in the display unit, JSON pointer, SI value and display unit in the attributes. */
+  private static void speedCell(XhtmlWriter w, String pointer, double mps, SpeedAxisUnit unit) {
+    w.element("td", fmt(unit.fromMps(mps), 2), "class", "num", "data-json", pointer, "data-value", value(mps),
+        "data-unit", unit.symbol());
   }
 
   private static void numCell(XhtmlWriter w, String pointer, double v, int decimals) {

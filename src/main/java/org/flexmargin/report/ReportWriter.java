@@ -80,7 +80,7 @@ public final class ReportWriter {
       loopCharts.put(c.configuration(), embed(loop, chartDir, options));
     }
     Instant now = Instant.now();
-    List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(result, findings, charts, toolVersion, now));
+    List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(result, findings, charts, toolVersion, now, unit));
     if (anyLoop || result.analysisCase().requirements() != null) {
       // loop and clearance sections go after the configurations, before diagnostics and provenance
       int at = sections.size() - 2;

@@ -182,6 +182,34 @@ class ReportWriterTest {
   }
 
   @Test
+  void speedUnitAppliesToTheTables() throws Exception {
+    // the same sections in knots (charts left out: tables only); 1 kt = 1852/3600 m/s exactly
+    SweepResult r = demo.result();
+    List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(r, demo.findings(), java.util.Map.of(), "test",
+        java.time.Instant.EPOCH, SpeedAxisUnit.KNOTS));
+    sections.addAll(1, ClearanceSections.of(r, java.util.Map.of(), SpeedAxisUnit.KNOTS));
+    Document doc = parse(HtmlReport.render("knots", List.of(), sections));
+    Element findingsTable = byId(doc, "table", "findings");
+    NodeList heads = findingsTable.getElementsByTagName("th");
+    assertEquals("EAS (kt)", heads.item(3).getTextContent());
+    assertEquals("EAS (m/s)", heads.item(4).getTextContent());
+    assertEquals("TAS (kt)", heads.item(5).getTextContent());
+    Element firstRow = (Element) ((Element) findingsTable.getElementsByTagName("tbody").item(0))
+        .getElementsByTagName("tr").item(0);
+    double eas = demo.findings().get(0).speedEasMps();
+    assertEquals(String.format(java.util.Locale.ROOT, "%.1f", eas * 3600.0 / 1852.0),
+        firstRow.getElementsByTagName("td").item(3).getTextContent());
+    // the per-speed margin table of the loop section starts with EAS in knots
+    Element loop = byId(doc, "section", "loop-1");
+    Element perSpeed = (Element) loop.getElementsByTagName("table").item(0);
+    assertEquals("EAS (kt)", perSpeed.getElementsByTagName("th").item(0).getTextContent());
+    double v0 = r.configurations().get(0).servo().points().get(0).condition().speedEasMps();
+    Element cell = (Element) perSpeed.getElementsByTagName("td").item(0);
+    assertEquals(String.format(java.util.Locale.ROOT, "%.2f", v0 * 3600.0 / 1852.0), cell.getTextContent());
+    assertEquals("kt", cell.getAttribute("data-unit"));
+  }
+
+  @Test
   void pageHasAPrintStyleSheet() {
     String css = demo.html().substring(demo.html().indexOf("<style>"), demo.html().indexOf("</style>"));
     String print = css.substring(css.indexOf("@media print{"));
@@ -318,6 +346,9 @@ class ReportWriterTest {
     }
     double value = Double.parseDouble(cell.getAttribute("data-value"));
     assertEquals(expected.asDouble(), value, 0.0, what);
+    if ("kt".equals(cell.getAttribute("data-unit"))) {
+      value *= 3600.0 / 1852.0; // shown in knots (1 kt = 1852/3600 m/s exactly)
+    }
     Matcher m = Pattern.compile("^-?[0-9]+(\\.[0-9]+)?").matcher(text);
     assertTrue(m.find(), what + ": number shown, got " + text);
     String shownText = m.group();
@@ -346,6 +377,10 @@ class ReportWriterTest {
     }
     double value = Double.parseDouble(cell.getAttribute("data-value"));
     assertEquals(expected.asDouble(), value, 0.0, key);
+    if ("kt".equals(cell.getAttribute("data-unit"))) {
+      // a speed shown in knots: the text is the SI value converted (1 kt = 1852/3600 m/s exactly)
+      value *= 3600.0 / 1852.0;
+    }
     if (text.equals("static")) {
       assertEquals("divergence", finding.get("finding").asText());
       assertEquals(0.0, value, 0.0);
