@@ -108,7 +108,10 @@ public final class StateSpaceMethod implements FlutterMethod {
   /** Default number of lag roots of the fit made when none is given. */
   public static final int DEFAULT_LAG_COUNT = 4;
 
-  /** Default upper end of the fitted reduced-frequency range (references.md 3.5 test range). */
+  /**
+   * Default upper end of the fitted reduced-frequency range: covers the reduced frequencies of
+   * flutter and of the first elastic modes (docs/validation.md section 6).
+   */
   public static final double DEFAULT_MAX_REDUCED_FREQUENCY = 1.5;
 
   private static final int MAX_HALVINGS = 8;

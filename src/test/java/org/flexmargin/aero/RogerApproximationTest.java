@@ -17,14 +17,14 @@ import org.junit.jupiter.api.Test;
 /** Validation of {@link RogerApproximation} and {@link RationalFit}. */
 class RogerApproximationTest {
 
-  /** Fitted range of references.md §3.5 ("test use": k in [0, 1.5]). */
+  /** Fitted range, k in [0, 1.5]: reduced frequencies of flutter and of the first elastic modes (docs/validation.md §6). */
   private static final double K_MAX = 1.5;
 
   /**
    * Theodorsen forces of a typical section of semichord 1 m and unit span in the coordinates heave
    * (w, m, up) and pitch (theta, rad, nose up), elastic axis at {@code a} semichords aft of
    * mid-chord, flat-plate lift slope 2 pi. With a = -0.5 this is the section of Lee, Price &amp;
-   * Wong, Prog. Aerosp. Sci. 35 (1999) (from memory; references.md §4c).
+   * Wong, Prog. Aerosp. Sci. 35 (1999) (from memory; docs/validation.md §5.1).
    */
   private static StripTheoryAero section(double a) {
     StripTheorySpec spec = new StripTheorySpec(1.0, List.of(new Strip("root", 1.0, 1.0, a, 2 * Math.PI)));
@@ -183,7 +183,7 @@ class RogerApproximationTest {
 
   @Test
   void theodorsenSectionIsFittedWithinOnePercent() {
-    // references.md §3.5 "test use": fit Theodorsen-based typical-section Q(ik) over k in
+    // docs/validation.md §6: fit Theodorsen-based typical-section Q(ik) over k in
     // [0, 1.5]; error below 1 % per element. Measured with the default grid (31 k, quadratic
     // spacing) and default lag roots, worst element relative error on the fitted k / on a dense
     // grid of 1501 k:

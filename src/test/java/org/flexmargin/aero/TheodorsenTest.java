@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 class TheodorsenTest {
 
   /**
-   * Table of F(k), G(k) in /work/shared/references.md section 3.1: Theodorsen, NACA Report 496
+   * Table of F(k), G(k) (docs/validation.md section 1.2): Theodorsen, NACA Report 496
    * (1935); Bisplinghoff, Ashley &amp; Halfman, Aeroelasticity (1955) Table 5-1 (digits from memory,
    * values derived from the Hankel-function formula). Four decimals, so rounding is up to 5e-5;
    * tolerance 1e-4.
@@ -112,7 +112,7 @@ class TheodorsenTest {
   }
 
   /**
-   * Shape properties (Theodorsen, NACA Report 496, figure of F and G; references.md 3.1): F falls
+   * Shape properties (Theodorsen, NACA Report 496, figure of F and G; docs/validation.md 1.2): F falls
    * monotonically from 1 to 1/2, G is negative for k &gt; 0 with its minimum about -0.189 near
    * k = 0.2. Minimum location tolerance: grid step 0.001 around a flat minimum, checked to +-0.05;
    * value to 1e-3 (the minimum of the derived table, -0.1886 at k = 0.2, rounds the true minimum).

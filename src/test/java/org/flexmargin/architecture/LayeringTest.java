@@ -70,6 +70,16 @@ class LayeringTest {
   }
 
   @Test
+  void latticeIsBesideAero() {
+    onlyDependsOn("lattice", "model", "numerics", "aero", "spline");
+  }
+
+  @Test
+  void splineDependsOnNothingOfOurs() {
+    onlyDependsOn("spline");
+  }
+
+  @Test
   void flutterDependsOnlyOnLowerLayers() {
     onlyDependsOn("flutter", "model", "numerics", "aero", "structure", "atmosphere");
   }
@@ -98,6 +108,12 @@ class LayeringTest {
   @Test
   void notchDesignSitsOnTopOfTheSweep() {
     onlyDependsOn("notch", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase",
+        "clearance", "sweep");
+  }
+
+  @Test
+  void simulationSitsOnTopOfTheSweep() {
+    onlyDependsOn("simulate", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase",
         "clearance", "sweep");
   }
 

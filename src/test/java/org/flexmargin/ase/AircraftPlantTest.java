@@ -28,7 +28,7 @@ class AircraftPlantTest {
 
   /**
    * Navion short-period derivatives (Nelson, Flight Stability and Automatic Control, ch. 4; from
-   * memory, references.md §3.8): Z_alpha = -355.35 ft/s^2, M_alpha = -8.80 1/s^2,
+   * memory, docs/validation.md §9): Z_alpha = -355.35 ft/s^2, M_alpha = -8.80 1/s^2,
    * M_alphadot = -0.90 1/s, M_q = -2.05 1/s, u0 = 176 ft/s. Converted to our non-dimensional inputs
    * with an arbitrary mass, inertia, area and chord at sea level (the dimensional values are what
    * matter).

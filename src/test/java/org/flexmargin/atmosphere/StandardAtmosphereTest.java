@@ -15,7 +15,7 @@ class StandardAtmosphereTest {
 
   /**
    * U.S. Standard Atmosphere 1976 by geometric altitude, as printed in Kutz (ed.), <i>Mechanical
-   * Engineers' Handbook</i>, vol. 4, Table 6 (collected in /work/shared/references.md section 4d).
+   * Engineers' Handbook</i>, vol. 4, Table 6 (docs/validation.md section 2.1).
    * The table rounds to the digits shown, so T, p and rho are checked to half a unit of their last
    * printed digit (plus 1e-9 for floating-point noise): a model error larger than the table's own
    * rounding fails. The speed-of-sound column is checked to one unit (0.1 m/s): it looks rounded
@@ -45,22 +45,22 @@ class StandardAtmosphereTest {
 
   @Test
   void tropopauseAtElevenKilometresGeopotential() {
-    // US Standard Atmosphere 1976: 22 632 Pa and 216.65 K at 11 km geopotential (references.md
-    // 4d, seen); the standard tabulates the layer-base pressure as 22 632.06 Pa (from memory).
+    // US Standard Atmosphere 1976: 22 632 Pa and 216.65 K at 11 km geopotential (published;
+    // docs/validation.md 2.1); the standard tabulates the layer-base pressure as 22 632.06 Pa (from memory).
     // Tolerance 0.5 Pa: the rounding of the quoted 22 632.
     double z = StandardAtmosphere.geometricAltitudeM(11_000.0);
     assertEquals(11_019.07, z, 0.01); // r0 h / (r0 - h) with r0 = 6 356 766 m, closed form
     assertEquals(22_632.0, StandardAtmosphere.pressurePa(z), 0.5);
     assertEquals(216.65, StandardAtmosphere.temperatureK(z), 1e-9);
-    // rho = 0.36392 kg/m^3 [derived, references.md 4d]; half a unit of the 5th digit.
+    // rho = 0.36392 kg/m^3 [derived, docs/validation.md 2.1]; half a unit of the 5th digit.
     assertEquals(0.36392, StandardAtmosphere.densityKgPerM3(z), 0.000005);
-    // The pitfall named in references.md 4d: at 11 000 m *geometric* the pressure is 22 700 Pa.
+    // The pitfall named in docs/validation.md 2.1: at 11 000 m *geometric* the pressure is 22 700 Pa.
     assertEquals(22_700.0, StandardAtmosphere.pressurePa(11_000.0), 0.5);
   }
 
   @Test
   void twentyKilometresGeometric() {
-    // references.md 4d [derived from the layer model]: rho = 0.08891 kg/m^3, p = 5 529 Pa at
+    // docs/validation.md 2.1 [derived from the layer model]: rho = 0.08891 kg/m^3, p = 5 529 Pa at
     // 20 000 m geometric. Tolerances half a unit of the last quoted digit.
     assertEquals(0.08891, StandardAtmosphere.densityKgPerM3(20_000.0), 0.000005);
     assertEquals(5_529.0, StandardAtmosphere.pressurePa(20_000.0), 0.5);
@@ -126,8 +126,8 @@ class StandardAtmosphereTest {
   @Test
   void densityAndSpeedOfSoundObeyTheGasLaws() {
     // Closed forms: rho = p / (R T), a = sqrt(gamma p / rho), R = R* / M0 = 8314.32 / 28.9644
-    // = 287.0531 J/(kg K) with the US76 constants (references.md 4d). ISO 2533 quotes
-    // 287.05287 (from memory), 7e-7 relative lower; the brief asks for the US76 pair.
+    // = 287.0531 J/(kg K) with the US76 constants (docs/validation.md 2.1). ISO 2533 quotes
+    // 287.05287 (from memory), 7e-7 relative lower; the program uses the US76 pair throughout.
     // Tolerance 1e-9 relative: rounding only.
     assertEquals(8314.32 / 28.9644, StandardAtmosphere.SPECIFIC_GAS_CONSTANT_J_PER_KG_K, 1e-12);
     assertEquals(287.0531, StandardAtmosphere.SPECIFIC_GAS_CONSTANT_J_PER_KG_K, 0.00005);
@@ -143,7 +143,7 @@ class StandardAtmosphereTest {
   @Test
   void equivalentAndTrueAirspeed() {
     // Example of AirspeedKind's Javadoc, derived from the handbook density 0.7364 kg/m^3 at 5 km
-    // (references.md 4d): 100 m/s EAS = 100 sqrt(1.225 / 0.7364) = 128.98 m/s TAS, and 100 m/s
+    // (docs/validation.md 2.2): 100 m/s EAS = 100 sqrt(1.225 / 0.7364) = 128.98 m/s TAS, and 100 m/s
     // TAS = 77.53 m/s EAS. Tolerance 0.01 m/s: the 4-digit table density gives 1e-4 relative.
     FlightCondition eas = StandardAtmosphere.atEquivalentSpeed(5000.0, 100.0);
     assertEquals(128.98, eas.speedTasMps(), 0.01);
@@ -167,7 +167,7 @@ class StandardAtmosphereTest {
   }
 
   /**
-   * references.md 2.4 [derived]: V_EAS = M sqrt(gamma p / rho0), so +15 % EAS at constant Mach is
+   * docs/validation.md 2.2 [derived]: V_EAS = M sqrt(gamma p / rho0), so +15 % EAS at constant Mach is
    * static pressure x 1.3225; for the US76 model 11 000 m -> 9 173 m, 9 000 m -> 7 065 m,
    * 6 000 m -> 3 903 m geometric. Tolerance 1 m: the quoted altitudes are rounded to the metre.
    */

@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 class DecibelTest {
   @Test
   void tableMarginsAsGainFactors() {
-    // references.md 1.1, derived from 20 log10: 3 dB = x1.4125, 4.5 dB = x1.6788,
+    // docs/validation.md 10.1, derived from 20 log10: 3 dB = x1.4125, 4.5 dB = x1.6788,
     // 6 dB = x1.9953, 8 dB = x2.5119. The reference rounds to 4 decimals: tolerance 5e-5.
     assertEquals(1.4125, Decibel.toRatio(3), 5e-5);
     assertEquals(1.6788, Decibel.toRatio(4.5), 5e-5);

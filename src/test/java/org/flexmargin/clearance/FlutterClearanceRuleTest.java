@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The rule "V_F,EAS &gt;= 1.15 V_L and g &lt;= -0.03 for every root up to V_L" (MIL-A-8870C,
- * from memory, references.md 2.3; 15 % EAS also 14 CFR/CS 25.629(b)(1), references 2.1), in the
+ * from memory; 15 % EAS also 14 CFR/CS 25.629(b)(1); docs/validation.md 10.3), in the
  * V-g sign convention (g negative = stable), at its edges.
  */
 class FlutterClearanceRuleTest {

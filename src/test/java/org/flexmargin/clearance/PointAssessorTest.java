@@ -26,7 +26,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Point assessment on loops whose margins are known in closed form, against the recalled preset
- * (MIL-F-9490D table from memory, references.md 1.1: rigid-body band 6 dB/45 deg in the normal
+ * (MIL-F-9490D table from memory, docs/validation.md 10.1: rigid-body band 6 dB/45 deg in the normal
  * envelope, 4.5 dB/30 deg up to V_L, 0/0 up to 1.15 V_L).
  */
 class PointAssessorTest {

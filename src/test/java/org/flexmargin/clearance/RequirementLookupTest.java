@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 /**
  * The preset table and its lookup at every cell and every edge.
  *
- * <p>Expected values: MIL-F-9490D (6 Jun 1975) Table III as recalled in references.md 1.1 -
+ * <p>Expected values: MIL-F-9490D (6 Jun 1975) Table III as recalled in docs/validation.md 10.1 -
  * values from memory, moderate confidence, to be verified against the specification text (the
  * 6 dB / 45 deg headline is published): normal envelope 4.5 dB/30 deg below 0.06 Hz, 6 dB/45 deg
  * rigid body, 8 dB/60 deg aeroelastic; at V_L 3.0/20, 4.5/30, 6.0/45; at 1.15 V_L 0 dB/0 deg.
@@ -37,7 +37,7 @@ class RequirementLookupTest {
 
   @Test
   void everyCellOfTheRecalledTable() {
-    // MIL-F-9490D Table III, from memory (references.md 1.1). Rows: 0.03 Hz, 1 Hz, 10 Hz.
+    // MIL-F-9490D Table III, from memory (docs/validation.md 10.1). Rows: 0.03 Hz, 1 Hz, 10 Hz.
     double[] f = {0.03, 1.0, 10.0};
     double[] v = {100, 140, 160};
     double[][] gm = {{4.5, 3.0, 0}, {6.0, 4.5, 0}, {8.0, 6.0, 0}};
@@ -104,8 +104,8 @@ class RequirementLookupTest {
         "verified against the edition", "overridable")) {
       assertTrue(s.contains(part), () -> "source lacks " + part + ": " + s);
     }
-    // MIL-A-8870C 1.15 V_L and g 0.03 (from memory, references 2.3); common practice -6 dB,
-    // 60 deg, 10 % (references 1.2 and 5).
+    // MIL-A-8870C 1.15 V_L and g 0.03 (from memory, docs/validation.md 10.3); common practice -6 dB,
+    // 60 deg, 10 % (docs/validation.md 10.2).
     assertEquals(1.15, PRESET.flutterSpeedFactor());
     assertEquals(0.03, PRESET.minimumDampingG());
     assertEquals(-6.0, PRESET.structuralPeakLimitDb());

@@ -7,7 +7,7 @@ import org.flexmargin.loop.SisoFrequencyFunction;
 import org.junit.jupiter.api.Test;
 
 /**
- * Gain and phase stabilisation of a lightly damped mode (rule: references.md 1.2, common
+ * Gain and phase stabilisation of a lightly damped mode (rule: docs/validation.md 10.2, common
  * practice: peak &lt;= -6 dB over f (1 +- 10 %), else phase &gt;= 60 deg from -180 deg where above
  * -6 dB). The loops are written here in closed form, independently of the loop package.
  */

@@ -78,7 +78,7 @@ class CommandLineTest {
     // elastic axis at the quarter chord: no aerodynamic moment at k = 0, so no divergence
     // (closed form); a regression against rounding-level roots of the defective K^-1 Q(0)
     assertEquals("no divergence", json.get("findings").get(0).get("finding").asText());
-    // U* = 6.2566 (references.md §4c, derived) with omega_alpha = 2 pi 10 rad/s and b = 1 m
+    // U* = 6.2566 (derived, docs/validation.md §5.1) with omega_alpha = 2 pi 10 rad/s and b = 1 m
     assertEquals(6.2566 * 20 * Math.PI, onset.get("speed_tas_mps").asDouble(), 1e-3 * 6.2566 * 20 * Math.PI);
     assertTrue(r.out().contains(String.format(java.util.Locale.ROOT, "%.2f", onset.get("speed_tas_mps").asDouble())));
     assertTrue(Files.exists(out.resolve("findings.csv")));

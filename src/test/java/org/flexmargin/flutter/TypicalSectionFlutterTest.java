@@ -16,7 +16,7 @@ import org.junit.jupiter.api.Test;
  */
 class TypicalSectionFlutterTest {
 
-  // references.md §4c [derived]: exact Theodorsen, k method and p-k with continuation:
+  // docs/validation.md §5.1 [derived]: exact Theodorsen, k method and p-k with continuation:
   // U* = U/(b omega_alpha) = 6.2566, omega/omega_alpha = 0.5233. The paper's 6.2851 uses the
   // Jones two-lag approximation of Theodorsen's function (Lee, Price & Wong, Prog. Aerosp. Sci. 35,
   // 1999; from memory).
@@ -43,7 +43,7 @@ class TypicalSectionFlutterTest {
 
   @Test
   void trackingIsIndependentOfTheGridDensity() {
-    // Mode-tracking regression: coarse steps must not jump branches (references.md §4c pitfall).
+    // Mode-tracking regression: coarse steps must not jump branches (docs/validation.md §5.1, tracking pitfall).
     AeroelasticSystem sys = ValidationCases.system(ValidationCases.lpwSection());
     double coarse = onset(sys, ValidationCases.lpwPath(2.0, 8.0, 7));
     double fine = onset(sys, ValidationCases.lpwPath(2.0, 8.0, 121));

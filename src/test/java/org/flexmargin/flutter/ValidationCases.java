@@ -39,7 +39,7 @@ final class ValidationCases {
   }
 
   /**
-   * Goland wing (Goland, J. Appl. Mech. 12(4), 1945; data as republished, see references.md §4b,
+   * Goland wing (Goland, J. Appl. Mech. 12(4), 1945; data as republished, see docs/validation.md §3.3,
    * from memory): semi-span 6.096 m, chord 1.8288 m, elastic axis 33 % chord, centre of mass 43 %,
    * 35.71 kg/m, pitch inertia 8.64 kg m taken about the elastic axis, EI 9.77e6 N m^2,
    * GJ 0.987e6 N m^2, thin-aerofoil lift slope 2 pi.

@@ -127,10 +127,10 @@ class BundledCaseFilesTest {
   void validationCasesRead() {
     UniformCantileverWing goland = (UniformCantileverWing) CaseReader.read(
         Path.of("mode-tables/validation/goland-wing.json")).configurations().get(0).structure();
-    // Goland data (references.md 4b, from memory), I_alpha about the elastic axis.
+    // Goland data (Goland 1945, from memory; docs/validation.md 3.3), I_alpha about the elastic axis.
     assertEquals(InertiaAxis.ELASTIC_AXIS, goland.inertiaAxis());
     assertEquals(40, goland.strips());
-    // Closed-form divergence pressure of references.md 4b: q_D = pi^2 GJ / (4 L^2 c e 2 pi),
+    // Closed-form divergence pressure (docs/validation.md 4.2): q_D = pi^2 GJ / (4 L^2 c e 2 pi),
     // e = (0.33 - 0.25) c -> 38 984 Pa [derived]; checks the file's numbers. Tolerance 1e-4
     // relative (4 Pa): the file gives 38 982 Pa, the quoted derivation's input rounding is unknown.
     double e = (goland.elasticAxisChordFraction() - 0.25) * goland.chordM();
@@ -140,7 +140,7 @@ class BundledCaseFilesTest {
 
     UniformCantileverWing megson = (UniformCantileverWing) CaseReader.read(
         Path.of("mode-tables/validation/megson-divergence.json")).configurations().get(0).structure();
-    // Megson worked problem (references.md 4a, seen): q_D = pi^2 GJ / (4 s^2 c (ec) a) = 44 416 Pa,
+    // Megson worked problem (Megson, Aircraft Structures for Engineering Students, published; docs/validation.md 4.2): q_D = pi^2 GJ / (4 s^2 c (ec) a) = 44 416 Pa,
     // V_d = 269.29 m/s with rho = 1.225 [derived]; 0.5 Pa rounding of the quoted value.
     double ec = (megson.elasticAxisChordFraction() - 0.25) * megson.chordM();
     assertEquals(1.2, ec, 1e-12);

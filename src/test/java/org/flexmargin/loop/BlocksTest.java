@@ -27,7 +27,7 @@ class BlocksTest {
 
   @Test
   void notchCentreDepthIsTheDampingRatio() {
-    // Closed form (references.md sec. 5, common practice): |N(j w_n)| = zeta_z/zeta_p.
+    // Closed form (common practice form; docs/validation.md sec. 7): |N(j w_n)| = zeta_z/zeta_p.
     for (double[] z : new double[][] {{0.05, 0.5}, {0.1, 0.5}, {0.02, 0.7}, {0.3, 0.31}}) {
       NotchFilter n = new NotchFilter(15, z[0], z[1]);
       // exact value; double round-off only
@@ -39,17 +39,17 @@ class BlocksTest {
 
   @Test
   void notchMatchesTheDerivedStructuralFilterValues() {
-    // references.md sec. 5 [derived]: 15 Hz notch, 0.05/0.5: -20 dB at centre, -3.45 deg at
+    // docs/validation.md sec. 7 [derived]: 15 Hz notch, 0.05/0.5: -20 dB at centre, -3.45 deg at
     // 1 Hz, -10.57 deg at 3 Hz, -12.8 / -13.5 dB at 13.5 / 16.5 Hz. Re-derived independently in
     // Python (cmath) for this test: -3.4474, -10.5748, -12.820, -13.486. Tolerance: half a unit
-    // of the last digit quoted in references.md.
+    // of the last digit quoted in docs/validation.md sec. 7.
     NotchFilter n = new NotchFilter(15, 0.05, 0.5);
     assertEquals(-20.0, gainDb(n, 15), 1e-12);
     assertEquals(-3.45, phaseDeg(n, 1), 0.005);
     assertEquals(-10.57, phaseDeg(n, 3), 0.005);
     assertEquals(-12.8, gainDb(n, 13.5), 0.05);
     assertEquals(-13.5, gainDb(n, 16.5), 0.05);
-    // references.md sec. 5 [derived]: 0.10/0.5 -> -14 dB, -3.06 deg @ 1 Hz;
+    // docs/validation.md sec. 7 [derived]: 0.10/0.5 -> -14 dB, -3.06 deg @ 1 Hz;
     // 0.02/0.7 -> -30.9 dB, -5.20 deg @ 1 Hz, -16.4 / -17.2 dB at +-10 %.
     NotchFilter n2 = new NotchFilter(15, 0.10, 0.5);
     assertEquals(-14.0, gainDb(n2, 15), 0.05);
@@ -83,7 +83,7 @@ class BlocksTest {
 
   @Test
   void padeSecondOrderForTwoSecondsIsTheTextbookRational() {
-    // references.md sec. 3.6: closed form (1 - s tau/2 + s^2 tau^2/12)/(1 + s tau/2 +
+    // Closed form (docs/validation.md sec. 7): (1 - s tau/2 + s^2 tau^2/12)/(1 + s tau/2 +
     // s^2 tau^2/12); tau = 2 -> (s^2 - 3s + 3)/(s^2 + 3s + 3) [derived].
     assertArrayEquals(new double[] {1, 0.5, 1.0 / 12}, PadeOrder.ORDER_2.coefficients(), 1e-15);
     // c_k for n = 1: 1, 1/2 (first-order Pade (1 - s tau/2)/(1 + s tau/2)).
@@ -118,7 +118,7 @@ class BlocksTest {
 
   @Test
   void padePhaseErrorMatchesTheDerivedTable() {
-    // references.md sec. 3.6 [derived]: at w tau = 1 exact -57.30 deg, Pade-1 -53.13,
+    // docs/validation.md sec. 7 [derived]: at w tau = 1 exact -57.30 deg, Pade-1 -53.13,
     // Pade-2 -57.22; at w tau = 2 exact -114.59, Pade-1 -90.00, Pade-2 -112.62.
     // Tolerance: half a unit of the last quoted digit.
     double tau = 0.5;
@@ -139,7 +139,7 @@ class BlocksTest {
 
   @Test
   void zeroOrderHoldPhaseAndDroop() {
-    // references.md sec. 5: ZOH = sinc(fT) e^{-j pi f T} [seen formula]; 80 Hz frame:
+    // docs/validation.md sec. 7: ZOH = sinc(fT) e^{-j pi f T} [seen formula]; 80 Hz frame:
     // -2.25 deg at 1 Hz, -11.25 deg at 5 Hz, |ZOH(5 Hz)| = 0.9936 [derived].
     ZeroOrderHold zoh = new ZeroOrderHold(1.0 / 80, PadeOrder.ORDER_2);
     assertEquals(-2.25, phaseDeg(zoh, 1), 1e-12);
@@ -149,7 +149,7 @@ class BlocksTest {
     // but not the droop (documented approximation)
     assertEquals(-2.25, phaseDeg(ofStateSpace(zoh), 1), 1e-6);
     assertEquals(1.0, ofStateSpace(zoh).magnitude(TWO_PI * 5), 1e-12);
-    // 40 Hz: -4.5 deg at 1 Hz (references.md sec. 5)
+    // 40 Hz: -4.5 deg at 1 Hz (docs/validation.md sec. 7)
     assertEquals(-4.5, phaseDeg(new ZeroOrderHold(1.0 / 40, PadeOrder.ORDER_1), 1), 1e-12);
     // one frame of computational delay at 80 Hz: -4.5 deg at 1 Hz, -22.5 deg at 5 Hz
     PureDelay frame = new PureDelay(1.0 / 80, PadeOrder.ORDER_2);
@@ -160,7 +160,7 @@ class BlocksTest {
 
   @Test
   void firstOrderLagPhase() {
-    // references.md sec. 5: first-order actuator tau = 0.05 s: -17.4 deg at 1 Hz, -32.1 deg at
+    // docs/validation.md sec. 7: first-order actuator tau = 0.05 s: -17.4 deg at 1 Hz, -32.1 deg at
     // 2 Hz (closed form -atan(w tau)); tolerance half a unit of the last digit.
     FirstOrderLag lag = new FirstOrderLag(0.05);
     assertEquals(-17.4, phaseDeg(lag, 1), 0.05);

@@ -231,7 +231,7 @@ class StateSpaceTest {
         }
       }
     }
-    // Brief: agreement to 1e-10 relative (both are backward-stable solves of a well-conditioned
+    // Agreement to 1e-10 relative (both are backward-stable solves of a well-conditioned
     // random system; observed round-off is ~1e-14).
     assertTrue(worst < 1e-10, "worst relative difference " + worst);
   }

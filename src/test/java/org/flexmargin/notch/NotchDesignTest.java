@@ -276,7 +276,7 @@ class NotchDesignTest {
         RigidMargins before = IndependentCheck.at(c, c.loop(), spec, cfg, 1.0, p, null);
         RigidMargins after = IndependentCheck.at(c, r.designedLoop(), spec, cfg, 1.0, p, peaks);
         for (CheckedPeak cp : peaks) {
-          // -6 dB limit (common practice, references 1.2); 0.05 dB: the Brent-refined peak may exceed
+          // -6 dB limit (common practice, docs/validation.md 10.2); 0.05 dB: the Brent-refined peak may exceed
           // the optimiser's grid-sampled one by its sampling error (< 0.3 dB), which the 0.5 dB
           // design margin covers
           assertTrue(cp.peakDb() <= spec.peakLimitDb() + 0.05, cp.toString());

@@ -19,7 +19,7 @@ import org.junit.jupiter.api.Test;
 
 class CantileverWingModesTest {
 
-  // Goland wing data: /work/shared/references.md section 4b (Goland, J. Appl. Mech. 12(4) 1945;
+  // Goland wing data (Goland, J. Appl. Mech. 12(4) 1945; docs/validation.md section 3.3;
   // numbers from memory): semi-span 6.096 m, chord 1.8288 m, EA 33 %, CG 43 %, 35.71 kg/m,
   // 8.64 kg m, EI 9.77e6 N m^2, GJ 0.987e6 N m^2.
   private static UniformCantileverWing goland(InertiaAxis axis, int nb, int nt, int strips) {
@@ -68,7 +68,7 @@ class CantileverWingModesTest {
 
   @Test
   void golandWingInVacuoFrequenciesInertiaAboutElasticAxis() {
-    // derived reproduction, references.md section 4b (4+4 Ritz functions); from memory for the
+    // derived reproduction, docs/validation.md section 3.3 (4+4 Ritz functions); from memory for the
     // published Goland values: 48.15, 95.70, 243.7 rad/s. Tolerance 0.5 %: the reference values
     // are quoted to 4 significant figures from an independent derivation.
     double[] w = omegas(CantileverWingModes.solve(goland(InertiaAxis.ELASTIC_AXIS, 4, 4, 10)));
@@ -79,7 +79,7 @@ class CantileverWingModesTest {
 
   @Test
   void golandWingInVacuoFrequenciesInertiaAboutCentreOfMass() {
-    // derived reproduction, references.md section 4b: 8.64 kg m about the CG -> 9.834 kg m about
+    // derived reproduction, docs/validation.md section 5.3: 8.64 kg m about the CG -> 9.834 kg m about
     // the EA; 48.08, 89.08, 233.1 rad/s with 4+4 functions. Tolerance 0.5 % as above.
     UniformCantileverWing wing = goland(InertiaAxis.CENTRE_OF_MASS, 4, 4, 10);
     assertEquals(9.834, wing.pitchInertiaAboutElasticAxisKgM(), 0.001);

@@ -23,11 +23,12 @@ class StructuralModelTest {
   @Test
   void fromModeTableBuildsDiagonalModalMatrices() {
     // modal equations (Hodges & Pierce, Introduction to Structural Dynamics and Aeroelasticity,
-    // ch. 3): K_ii = (2 pi f_i)^2 m_i, C_ii = 2 zeta_i omega_i m_i. Hand-computed expectations:
-    // mode a: f = 2 Hz, m = 3 kg, zeta = 0.02 -> omega = 12.566370614359172 rad/s,
-    //   K = 473.7410112522892 N/m, C = 1.5079644737231006 N s/m;
-    // mode b: f = 7.5 Hz, m = 0.4 kg, zeta = 0 -> K = 888.2643960980423 N/m, C = 0.
+    // ch. 3): K_ii = (2 pi f_i)^2 m_i, C_ii = 2 zeta_i omega_i m_i. Expectations:
+    // mode a: f = 2 Hz, m = 3 kg, zeta = 0.02 -> K = 473.74 N/m, C = 1.5080 N s/m;
+    // mode b: f = 7.5 Hz, m = 0.4 kg, zeta = 0 -> K = 888.26 N/m, C = 0.
     // Tolerance 1e-12 relative: rounding.
+    double omegaA = 2 * Math.PI * 2.0;
+    double omegaB = 2 * Math.PI * 7.5;
     ModeTable table =
         new ModeTable(
             "t",
@@ -38,9 +39,9 @@ class StructuralModelTest {
     assertEquals(List.of("a", "b"), model.coordinateNames());
     assertEquals(3.0, model.mass(0, 0));
     assertEquals(0.4, model.mass(1, 1));
-    assertEquals(473.7410112522892, model.stiffness(0, 0), 1e-12 * 473.7);
-    assertEquals(888.2643960980423, model.stiffness(1, 1), 1e-12 * 888.3);
-    assertEquals(1.5079644737231006, model.damping(0, 0), 1e-12 * 1.51);
+    assertEquals(omegaA * omegaA * 3.0, model.stiffness(0, 0), 1e-12 * 473.7);
+    assertEquals(omegaB * omegaB * 0.4, model.stiffness(1, 1), 1e-12 * 888.3);
+    assertEquals(2 * 0.02 * omegaA * 3.0, model.damping(0, 0), 1e-12 * 1.51);
     assertEquals(0.0, model.damping(1, 1));
     assertEquals(0.0, model.mass(0, 1));
     assertEquals(0.0, model.stiffness(1, 0));

@@ -50,7 +50,7 @@ class TypicalSectionModesTest {
     //   | omega_h^2 - lambda        lambda x_a          |
     //   | lambda x_a                r^2 (omega_a^2 - lambda) | = 0
     // => lambda^2 (r^2 - x_a^2) - lambda r^2 (omega_h^2 + omega_a^2) + r^2 omega_h^2 omega_a^2 = 0.
-    // Parameters of the Lee, Price & Wong case (references.md section 4c): x_a = 0.25,
+    // Parameters of the Lee, Price & Wong case (Prog. Aerosp. Sci. 35, 1999; docs/validation.md section 5.1): x_a = 0.25,
     // r^2 = 0.25, omega_h/omega_a = 0.2. Tolerance 1e-10 relative: rounding of the quadratic.
     double xa = 0.25;
     double r2 = 0.25;

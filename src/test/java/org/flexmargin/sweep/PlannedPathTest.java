@@ -22,7 +22,7 @@ class PlannedPathTest {
     assertEquals(100, p.at(0).speedEasMps(), 1e-9);
     assertEquals(200, p.at(10).speedEasMps(), 1e-9);
     assertEquals(155, p.at(5.5).speedEasMps(), 1e-9);
-    // US Standard Atmosphere 1976 at 5 000 m: rho = 0.7364 kg/m^3 (references.md §4d, seen);
+    // US Standard Atmosphere 1976 at 5 000 m: rho = 0.7364 kg/m^3 (Mechanical Engineers' Handbook vol. 4 Table 6; docs/validation.md §2.1);
     // TAS = EAS sqrt(rho0/rho) = 128.98 m/s for 100 m/s EAS; 4 digits in the table
     assertEquals(128.98, p.at(0).speedTasMps(), 0.02);
   }
@@ -35,7 +35,7 @@ class PlannedPathTest {
     }
     assertEquals(10000, p.at(0).altitudeM(), 1e-9);
     assertEquals(5000, p.at(2).altitudeM(), 1e-9);
-    // speed of sound at sea level 340.3 m/s (US Standard Atmosphere 1976; references.md §4d)
+    // speed of sound at sea level 340.3 m/s (US Standard Atmosphere 1976; docs/validation.md §2.1)
     assertEquals(0.6 * 340.3, p.at(4).speedTasMps(), 0.6 * 0.05);
   }
 

@@ -1,0 +1,357 @@
+package org.flexmargin.simulate;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.CommonOps_DDRM;
+import org.flexmargin.ase.AircraftPlant;
+import org.flexmargin.ase.RationalAerodynamics;
+import org.flexmargin.ase.ServoLoop;
+import org.flexmargin.loop.FirstOrderLag;
+import org.flexmargin.loop.LinearBlock;
+import org.flexmargin.loop.SecondOrderActuator;
+import org.flexmargin.loop.SeriesBlock;
+import org.flexmargin.loop.StateSpace;
+import org.flexmargin.model.SensorSpec;
+
+/**
+ * The flexible aircraft and its pitch loop at one flight condition as one linear state space for
+ * simulation, with the actuator kept apart so that its rate and position limits can be added.
+ *
+ * <p>States, in order: the aircraft of {@link AircraftPlant#stateSpace} (alpha, q, modal
+ * coordinates and rates, aerodynamic lag states), the control law's paths, the hold and delay
+ * ahead of the actuator (Padé, as in the sweep's closed-loop eigenvalues), and the actuator
+ * (position, then rate for a second-order actuator). The actuator is realised here explicitly:
+ * first order delta' = wa (u - delta); second order delta'' = wn^2 (u - delta) - 2 zeta wn
+ * delta'.
+ *
+ * <p>Inputs: {@code pilot_command_rad} (added to the law's output at the elevator command, before
+ * the hold), {@code gust_velocity_mps} (vertical gust, positive up, seen by the whole aircraft at
+ * once as an angle-of-attack change w_g / V: its forces are those of alpha in the quasi-steady
+ * coupling coefficients, without unsteady gust lift growth).
+ *
+ * <p>Outputs: every sensor, alpha, rigid pitch rate, each modal coordinate, the elevator
+ * position, rate and command (actuator input), the law's output, and both inputs. Immutable.
+ */
+public final class AircraftSimulationModel {
+  /** Name of the pilot input. */
+  public static final String PILOT_INPUT = "pilot_command_rad";
+  /** Name of the gust input. */
+  public static final String GUST_INPUT = "gust_velocity_mps";
+  /** Output: achieved elevator (rad, trailing edge down). */
+  public static final String ELEVATOR = "elevator_rad";
+  /** Output: elevator rate (rad/s). */
+  public static final String ELEVATOR_RATE = "elevator_rate_rad_per_s";
+  /** Output: actuator input after the hold and the delay (rad). */
+  public static final String ELEVATOR_COMMAND = "elevator_command_rad";
+  /** Output: the control law's output (rad). */
+  public static final String LAW_OUTPUT = "law_output_rad";
+  /** Output: rigid-body pitch rate (rad/s). */
+  public static final String PITCH_RATE = "pitch_rate_rad_per_s";
+  /** Output: angle of attack (rad). */
+  public static final String ALPHA = "alpha_rad";
+
+  private final StateSpace system;
+  private final int actuatorPosition;
+  private final int actuatorRate;
+  private final double actuatorOmega;
+  private final double actuatorDamping;
+  private final int commandOutput;
+  private final List<String> modeNames;
+
+  private AircraftSimulationModel(StateSpace system, int actuatorPosition, int actuatorRate, double actuatorOmega,
+      double actuatorDamping, int commandOutput, List<String> modeNames) {
+    this.system = system;
+    this.actuatorPosition = actuatorPosition;
+    this.actuatorRate = actuatorRate;
+    this.actuatorOmega = actuatorOmega;
+    this.actuatorDamping = actuatorDamping;
+    this.commandOutput = commandOutput;
+    this.modeNames = List.copyOf(modeNames);
+  }
+
+  /** @return the linear system (inputs pilot and gust; outputs as described above) */
+  public StateSpace system() {
+    return system;
+  }
+
+  /** @return index of the actuator position state */
+  public int actuatorPositionState() {
+    return actuatorPosition;
+  }
+
+  /** @return index of the actuator rate state, or -1 for a first-order actuator */
+  public int actuatorRateState() {
+    return actuatorRate;
+  }
+
+  /** @return actuator bandwidth wa or natural frequency wn (rad/s) */
+  public double actuatorOmegaRadPerS() {
+    return actuatorOmega;
+  }
+
+  /** @return damping ratio of a second-order actuator (0 for first order) */
+  public double actuatorDampingRatio() {
+    return actuatorDamping;
+  }
+
+  /** @return index of the output {@link #ELEVATOR_COMMAND} */
+  public int commandOutput() {
+    return commandOutput;
+  }
+
+  /** @return names of the elastic modes, in the order of their outputs */
+  public List<String> modeNames() {
+    return modeNames;
+  }
+
+  /** @return output name of a modal coordinate (unit: that of the mode table's normalisation) */
+  public static String modalOutput(String mode) {
+    return mode + "_modal_coordinate";
+  }
+
+  /** @return output name of a sensor, with its unit */
+  public static String sensorOutput(SensorSpec s) {
+    return switch (s.kind()) {
+      case PITCH_RATE_GYRO -> s.name() + "_rad_per_s";
+      case NORMAL_ACCELEROMETER -> s.name() + "_g";
+      case ANGLE_OF_ATTACK_VANE -> s.name() + "_rad";
+    };
+  }
+
+  /**
+   * Assembles the model.
+   *
+   * @param servo the loop at the flight condition (plant and law)
+   * @param rational the elastic aerodynamics in rational form
+   * @param closure whether the law's output drives the actuator
+   * @return the model
+   * @throws IllegalArgumentException if the forward block does not end with a first- or
+   *     second-order actuator
+   */
+  public static AircraftSimulationModel of(ServoLoop servo, RationalAerodynamics rational, LoopClosure closure) {
+    AircraftPlant plant = servo.plant();
+    StateSpace aircraft = plant.stateSpace(rational);
+    if (!"alpha".equals(aircraft.stateNames().get(0))) {
+      throw new IllegalStateException("aircraft state 0 is " + aircraft.stateNames().get(0) + ", expected alpha");
+    }
+    List<LinearBlock> forward = servo.forward() instanceof SeriesBlock s ? s.blocks() : List.of(servo.forward());
+    LinearBlock act = forward.get(forward.size() - 1);
+    StateSpace pre = null;
+    for (int i = 0; i + 1 < forward.size(); i++) {
+      StateSpace block = forward.get(i).stateSpace();
+      pre = pre == null ? block : pre.series(block);
+    }
+    if (pre == null) {
+      pre = StateSpace.staticGain(1.0);
+    }
+    double wAct;
+    double zAct;
+    int nq;
+    if (act instanceof SecondOrderActuator a2) {
+      wAct = 2 * Math.PI * a2.naturalFrequencyHz();
+      zAct = a2.dampingRatio();
+      nq = 2;
+    } else if (act instanceof FirstOrderLag a1) {
+      wAct = 1 / a1.timeConstantS();
+      zAct = 0;
+      nq = 1;
+    } else {
+      throw new IllegalArgumentException("the forward path must end with a first- or second-order actuator, found "
+          + act.getClass().getSimpleName());
+    }
+    List<StateSpace> paths = new ArrayList<>();
+    for (LinearBlock p : servo.law().paths()) {
+      paths.add(p.stateSpace());
+    }
+    int[] sensorOf = servo.law().pathSensorIndex();
+    return new Assembly(plant, aircraft, paths, sensorOf, pre, wAct, zAct, nq, closure).build();
+  }
+
+  /** Builds the matrices: every signal as a row over [x; pilot; gust]. */
+  private static final class Assembly {
+    private final AircraftPlant plant;
+    private final StateSpace aircraft;
+    private final List<StateSpace> paths;
+    private final int[] sensorOf;
+    private final StateSpace pre;
+    private final double w;
+    private final double zeta;
+    private final int nq;
+    private final LoopClosure closure;
+    private final int na;
+    private final int[] pathOffset;
+    private final int preOffset;
+    private final int actOffset;
+    private final int n;
+    private final DMatrixRMaj dyn;
+
+    Assembly(AircraftPlant plant, StateSpace aircraft, List<StateSpace> paths, int[] sensorOf, StateSpace pre,
+        double w, double zeta, int nq, LoopClosure closure) {
+      this.plant = plant;
+      this.aircraft = aircraft;
+      this.paths = paths;
+      this.sensorOf = sensorOf;
+      this.pre = pre;
+      this.w = w;
+      this.zeta = zeta;
+      this.nq = nq;
+      this.closure = closure;
+      this.na = aircraft.stateCount();
+      this.pathOffset = new int[paths.size()];
+      int off = na;
+      for (int p = 0; p < paths.size(); p++) {
+        pathOffset[p] = off;
+        off += paths.get(p).stateCount();
+      }
+      this.preOffset = off;
+      this.actOffset = off + pre.stateCount();
+      this.n = actOffset + nq;
+      this.dyn = new DMatrixRMaj(n, n + 2);
+    }
+
+    private DMatrixRMaj row() {
+      return new DMatrixRMaj(1, n + 2);
+    }
+
+    /** target[row, :] += k * map. */
+    private static void addRow(DMatrixRMaj target, int row, double k, DMatrixRMaj map) {
+      for (int j = 0; j < map.numCols; j++) {
+        target.add(row, j, k * map.get(0, j));
+      }
+    }
+
+    AircraftSimulationModel build() {
+      double v = plant.condition().speedTasMps();
+      DMatrixRMaj aA = aircraft.a();
+      DMatrixRMaj bA = aircraft.b();
+      DMatrixRMaj cA = aircraft.c();
+      DMatrixRMaj dA = aircraft.d();
+      DMatrixRMaj delta = row();
+      delta.set(0, actOffset, 1);
+      // sensors: C x + D delta + (C[:, alpha] / V) w_g
+      int ns = cA.numRows;
+      DMatrixRMaj[] sensors = new DMatrixRMaj[ns];
+      for (int s = 0; s < ns; s++) {
+        sensors[s] = row();
+        for (int j = 0; j < na; j++) {
+          sensors[s].set(0, j, cA.get(s, j));
+        }
+        addRow(sensors[s], 0, dA.get(s, 0), delta);
+        sensors[s].add(0, n + 1, cA.get(s, 0) / v);
+      }
+      // aircraft dynamics
+      for (int i = 0; i < na; i++) {
+        for (int j = 0; j < na; j++) {
+          dyn.set(i, j, aA.get(i, j));
+        }
+        addRow(dyn, i, bA.get(i, 0), delta);
+        dyn.set(i, n + 1, aA.get(i, 0) / v);
+      }
+      // law paths
+      DMatrixRMaj law = row();
+      for (int p = 0; p < paths.size(); p++) {
+        StateSpace path = paths.get(p);
+        int o = pathOffset[p];
+        DMatrixRMaj in = sensors[sensorOf[p]];
+        for (int i = 0; i < path.stateCount(); i++) {
+          for (int j = 0; j < path.stateCount(); j++) {
+            dyn.set(o + i, o + j, path.a().get(i, j));
+          }
+          addRow(dyn, o + i, path.b().get(i, 0), in);
+        }
+        for (int j = 0; j < path.stateCount(); j++) {
+          law.add(0, o + j, path.c().get(0, j));
+        }
+        addRow(law, 0, path.d().get(0, 0), in);
+      }
+      DMatrixRMaj command = row();
+      if (closure == LoopClosure.CLOSED) {
+        addRow(command, 0, 1, law);
+      }
+      command.add(0, n, 1);
+      // hold and delay ahead of the actuator
+      for (int i = 0; i < pre.stateCount(); i++) {
+        for (int j = 0; j < pre.stateCount(); j++) {
+          dyn.set(preOffset + i, preOffset + j, pre.a().get(i, j));
+        }
+        addRow(dyn, preOffset + i, pre.b().get(i, 0), command);
+      }
+      DMatrixRMaj actuatorInput = row();
+      for (int j = 0; j < pre.stateCount(); j++) {
+        actuatorInput.set(0, preOffset + j, pre.c().get(0, j));
+      }
+      addRow(actuatorInput, 0, pre.d().get(0, 0), command);
+      // actuator
+      DMatrixRMaj rate = row();
+      if (nq == 1) {
+        addRow(rate, 0, w, actuatorInput);
+        rate.add(0, actOffset, -w);
+        addRow(dyn, actOffset, 1, rate);
+      } else {
+        rate.set(0, actOffset + 1, 1);
+        dyn.set(actOffset, actOffset + 1, 1);
+        addRow(dyn, actOffset + 1, w * w, actuatorInput);
+        dyn.add(actOffset + 1, actOffset, -w * w);
+        dyn.add(actOffset + 1, actOffset + 1, -2 * zeta * w);
+      }
+      // outputs
+      List<DMatrixRMaj> rows = new ArrayList<>();
+      List<String> names = new ArrayList<>();
+      for (int s = 0; s < ns; s++) {
+        rows.add(sensors[s]);
+        names.add(sensorOutput(plant.sensors().get(s)));
+      }
+      rows.add(unit(0));
+      names.add(ALPHA);
+      rows.add(unit(1));
+      names.add(PITCH_RATE);
+      List<String> modes = aircraft.stateNames().subList(2, 2 + plant.modeCount());
+      for (int i = 0; i < plant.modeCount(); i++) {
+        rows.add(unit(2 + i));
+        names.add(modalOutput(modes.get(i)));
+      }
+      rows.add(delta);
+      names.add(ELEVATOR);
+      rows.add(rate);
+      names.add(ELEVATOR_RATE);
+      int commandIndex = rows.size();
+      rows.add(actuatorInput);
+      names.add(ELEVATOR_COMMAND);
+      rows.add(law);
+      names.add(LAW_OUTPUT);
+      rows.add(unit(n));
+      names.add(PILOT_INPUT);
+      rows.add(unit(n + 1));
+      names.add(GUST_INPUT);
+      DMatrixRMaj out = new DMatrixRMaj(rows.size(), n + 2);
+      for (int r = 0; r < rows.size(); r++) {
+        CommonOps_DDRM.insert(rows.get(r), out, r, 0);
+      }
+      List<String> states = new ArrayList<>(aircraft.stateNames());
+      for (int p = 0; p < paths.size(); p++) {
+        for (int i = 0; i < paths.get(p).stateCount(); i++) {
+          states.add("law_path" + (p + 1) + "_x" + (i + 1));
+        }
+      }
+      for (int i = 0; i < pre.stateCount(); i++) {
+        states.add("hold_delay_x" + (i + 1));
+      }
+      states.add("actuator_position");
+      if (nq == 2) {
+        states.add("actuator_rate");
+      }
+      StateSpace sys = new StateSpace(CommonOps_DDRM.extract(dyn, 0, n, 0, n), CommonOps_DDRM.extract(dyn, 0, n, n, n + 2),
+          CommonOps_DDRM.extract(out, 0, out.numRows, 0, n), CommonOps_DDRM.extract(out, 0, out.numRows, n, n + 2),
+          List.of(PILOT_INPUT, GUST_INPUT), names, states);
+      return new AircraftSimulationModel(sys, actOffset, nq == 2 ? actOffset + 1 : -1, w, zeta, commandIndex,
+          modes);
+    }
+
+    private DMatrixRMaj unit(int column) {
+      DMatrixRMaj r = row();
+      r.set(0, column, 1);
+      return r;
+    }
+  }
+}
