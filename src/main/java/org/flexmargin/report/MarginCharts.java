@@ -542,7 +542,8 @@ public final class MarginCharts {
           yr[0], yr[1], String.join(", ", clipped)));
     }
     if (d.req != null) {
-      ChartSeries.regimeLines(chart, used, d.req, unit, xr, yr, notes);
+      // named at their tops rather than in the legend, which keeps to the curves and requirements
+      ChartSeries.regimeLines(chart, used, d.req, unit, xr, yr, notes, false);
     } else {
       notes.add("No requirements table in the case: no requirement lines, regime speeds or onsets.");
     }
@@ -562,7 +563,7 @@ public final class MarginCharts {
         }
       }
       chart.getStyler().setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.BOLD, 12));
-      chart.getStyler().setAnnotationTextFontColor(ReportStyle.MARGIN_ONSET);
+      chart.getStyler().setAnnotationTextFontColor(ReportStyle.ZERO_LINE);
       List<String> words = new ArrayList<>();
       for (MarginOnset m : onsets) {
         words.add(String.format(Locale.ROOT, "%s (%s) %.2f %s EAS%s", m.key().kind().key().replace('_', ' '),

@@ -73,6 +73,10 @@ class ChartReadabilityTest {
         }
         assertTrue(names.contains(ClosedLoopCharts.LOOP_ROOTS_SERIES), "loop roots grouped under one entry");
       }
+      // the margin charts too: the regime lines are named on the plot, not in the legend
+      for (ReportChart rc : MarginCharts.of(demo, c, MPS)) {
+        assertTrue(legend(rc.chart()).size() <= MAX_LEGEND, rc.fileStem() + ": " + legend(rc.chart()));
+      }
     }
   }
 
