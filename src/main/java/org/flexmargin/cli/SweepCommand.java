@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.flexmargin.clearance.Severity;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
@@ -22,6 +23,7 @@ import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Findings;
+import org.flexmargin.sweep.Instability;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.SweepProgress;
@@ -99,6 +101,9 @@ final class SweepCommand implements Callable<Integer> {
         for (String w : r.flutter().warnings()) {
           out.println("  warning: " + w);
         }
+        if (r.clearance() == null) {
+          out.println("  lowest unstable speed: " + lowestUnstable(r));
+        }
       }
       clearance(out, result, terminal);
       out.println();
@@ -131,6 +136,11 @@ final class SweepCommand implements Callable<Integer> {
     return new ReportOptions(unit, !common.noSvg);
   }
 
+  private static String lowestUnstable(ConfigurationResult r) {
+    return r.lowestInstability().map(Instability::describe)
+        .orElse("none found (no flutter onset, closed-loop instability or divergence)");
+  }
+
   private static void clearance(PrintWriter out, SweepResult result, boolean colour) {
     boolean any = false;
     for (ConfigurationResult r : result.configurations()) {
@@ -148,10 +158,9 @@ final class SweepCommand implements Callable<Integer> {
         verdict = (pass ? "\u001b[1;32m" : "\u001b[1;31m") + verdict + "\u001b[0m";
       }
       out.printf(Locale.ROOT, "  %s: %s", r.configuration(), verdict);
-      r.clearance().governing().ifPresent(g -> out.printf(Locale.ROOT,
-          "; governing: %s (required %.4g %s, achieved %.4g %s)", g.description(), g.requiredValue(),
-          g.unit().symbol(), g.achievedValue(), g.unit().symbol()));
+      r.clearance().governingFinding().ifPresent(g -> out.printf(Locale.ROOT, "; governing: %s", g.describe()));
       out.println();
+      out.println("    lowest unstable speed: " + lowestUnstable(r));
       long failing = r.clearance().points().stream().filter(p -> !p.passed()).count();
       if (failing > 0) {
         out.printf(Locale.ROOT, "    %d of %d sweep points fail at least one loop requirement%n", failing,
@@ -159,6 +168,7 @@ final class SweepCommand implements Callable<Integer> {
       }
     }
     if (any) {
+      out.println("  ranking: " + Severity.RULE);
       out.println("  requirements: " + result.configurations().stream().filter(r -> r.clearance() != null)
           .findFirst().orElseThrow().clearance().requirementsSource());
     }

@@ -126,7 +126,7 @@ public final class CaseSweep {
     }
     ClearanceResult clearance = null;
     if (analysisCase.requirements() != null) {
-      clearance = new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, servo,
+      clearance = new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, divergence, servo,
           analysisCase.requirements(), Math.max(0.05, analysisCase.options().onsetSpeedToleranceMps()));
       progress.stageDone(c.name(), "clearance");
     }
