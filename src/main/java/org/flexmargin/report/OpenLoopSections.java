@@ -91,7 +91,7 @@ public final class OpenLoopSections {
       }
       if (result.analysisCase().requirements() != null || result.configurations().stream()
           .anyMatch(c -> c.servo() != null)) {
-        ClearanceSections.writeVerdicts(w, result);
+        ClearanceSections.writeVerdicts(w, result, unit);
         w.element("h3", "All findings");
       }
       w.open("table", "id", "findings");

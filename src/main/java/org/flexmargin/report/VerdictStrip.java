@@ -6,10 +6,13 @@ import java.util.Optional;
 import org.flexmargin.clearance.CheckKind;
 import org.flexmargin.clearance.ClearanceCheck;
 import org.flexmargin.clearance.PointAssessment;
+import org.flexmargin.clearance.RankedFinding;
+import org.flexmargin.clearance.Severity;
 import org.flexmargin.clearance.StructuralModeAssessment;
 import org.flexmargin.clearance.StructuralStabilisation;
 import org.flexmargin.model.ClearanceRequirements;
 import org.flexmargin.sweep.ConfigurationResult;
+import org.flexmargin.sweep.Instability;
 import org.flexmargin.sweep.SweepResult;
 
 /**
@@ -59,12 +62,11 @@ public final class VerdictStrip {
       governingCell(w, c, unit);
       speedCell(w, c.divergence().found() ? c.divergence().speedEasMps() : Double.NaN, 0.0, unit,
           c.divergence().found() ? "static" : "none found", "divergence");
-      VerdictFacts.Onset open = VerdictFacts.openLoop(c);
-      onsetCell(w, open, unit, "none in the sweep", "open-loop");
+      onsetCell(w, c.lowestOpenLoopFlutter().orElse(null), unit, "none in the sweep", "open-loop");
       if (c.servo() == null) {
         w.element("td", "no loop", "class", "muted");
       } else {
-        onsetCell(w, VerdictFacts.closedLoop(c), unit, "none in the sweep", "closed-loop");
+        onsetCell(w, c.lowestClosedLoopInstability().orElse(null), unit, "none in the sweep", "closed-loop");
       }
       marginCell(w, c, unit);
       notchCell(w, c, notches, unit);
@@ -128,10 +130,14 @@ public final class VerdictStrip {
 
   private static void governingCell(XhtmlWriter w, ConfigurationResult c, SpeedAxisUnit unit) {
     w.open("td", "class", "governing");
-    VerdictFacts.Onset lowest = VerdictFacts.lowest(c);
-    Optional<ClearanceCheck> g = c.clearance() == null ? Optional.empty() : c.clearance().governing();
-    if (g.isPresent() && !g.get().passed()) {
-      w.element("strong", g.get().description());
+    Instability lowest = c.lowestInstability().orElse(null);
+    Optional<RankedFinding> g = c.clearance() == null ? Optional.empty() : c.clearance().governingFinding();
+    if (g.isPresent() && !g.get().check().passed()) {
+      RankedFinding f = g.get();
+      w.element("strong", f.severity().words(), "class", "warn", "title", Severity.RULE);
+      w.text(String.format(Locale.ROOT, " (severity %d of %d) from ", f.severity().rank(), Severity.values().length));
+      speedSpan(w, f.speedEasMps(), unit);
+      w.text(": " + f.check().description());
     } else if (c.clearance() != null) {
       w.element("span", "every requirement met", "class", "ok");
     }
@@ -139,23 +145,23 @@ public final class VerdictStrip {
       if (c.clearance() != null) {
         w.empty("br");
       }
-      w.text("unstable from ");
+      w.text("lowest unstable speed ");
       speedSpan(w, lowest.speedEasMps(), unit);
-      w.text(" (" + lowest.what() + ", " + lowest.mode() + ")");
+      w.text(" (" + lowest.kind().words() + (lowest.kind() == Instability.Kind.DIVERGENCE ? "" : ", " + lowest.mode())
+          + ")");
     } else if (c.clearance() == null) {
       w.element("span", "no instability in the sweep", "class", "ok");
     }
     w.close("td");
   }
 
-  private static void onsetCell(XhtmlWriter w, VerdictFacts.Onset o, SpeedAxisUnit unit, String none,
-      String what) {
+  private static void onsetCell(XhtmlWriter w, Instability o, SpeedAxisUnit unit, String none, String what) {
     if (o == null) {
       w.element("td", none, "class", "ok", "data-value", "null", "data-key", what);
       return;
     }
     w.open("td", "class", "num", "data-key", what);
-    w.element("strong", (o.atStart() ? "at or below " : "") + speed(o.speedEasMps(), unit), "data-value",
+    w.element("strong", (o.atSweepStart() ? "at or below " : "") + speed(o.speedEasMps(), unit), "data-value",
         Double.toString(o.speedEasMps()));
     w.empty("br");
     w.text(o.mode() + (o.frequencyHz() > 0 ? String.format(Locale.ROOT, ", %.2f Hz", o.frequencyHz()) : ""));
