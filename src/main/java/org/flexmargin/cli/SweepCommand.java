@@ -8,6 +8,7 @@ import java.util.concurrent.Callable;
 import org.flexmargin.clearance.Severity;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
+import org.flexmargin.io.RequirementsOverride;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.model.InvalidInputException;
@@ -18,7 +19,6 @@ import org.flexmargin.notch.NotchDesigner;
 import org.flexmargin.report.ProposedNotches;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
-import org.flexmargin.report.SpeedAxisUnit;
 import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
@@ -26,7 +26,6 @@ import org.flexmargin.sweep.Findings;
 import org.flexmargin.sweep.Instability;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
-import org.flexmargin.sweep.SweepProgress;
 import org.flexmargin.sweep.SweepResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -46,8 +45,15 @@ final class SweepCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "CASE", description = "Case file (JSON).")
   Path caseFile;
 
-  @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: reports/<case name>).")
+  @Option(names = "--out", paramLabel = "DIR",
+      description = "Output folder (default: reports/<case name>). Must be new, empty or an earlier "
+          + "flexmargin output folder, which is replaced once the new report is complete.")
   Path out;
+
+  @Option(names = "--requirements", paramLabel = "FILE",
+      description = "Judge against this requirements file (format of docs/requirements.md) instead of "
+          + "the case's own requirements section.")
+  Path requirementsFile;
 
   @Option(names = "--design-notches", description = "Also place structural notches as notch-design does (its "
       + "defaults) and show them in the report: on the notch chart and as a \"with proposed notches\" curve on "
@@ -55,32 +61,61 @@ final class SweepCommand implements Callable<Integer> {
   boolean designNotches;
 
   @Mixin CommonOptions common;
+  @Mixin ReportStyleOptions style;
+  @Mixin WorkOptions work;
 
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
   @Override
   public Integer call() {
-    return run(spec, caseFile, out, common, designNotches);
+    AnalysisCase c = CaseReader.read(caseFile);
+    if (requirementsFile != null) {
+      c = RequirementsOverride.apply(c, requirementsFile);
+    }
+    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work, designNotches);
   }
 
-  static int run(picocli.CommandLine.Model.CommandSpec spec, Path caseFile, Path outDir, CommonOptions common) {
-    return run(spec, caseFile, outDir, common, false);
+  /** @return reports/&lt;case name&gt; */
+  static Path defaultFolder(AnalysisCase c) {
+    return Path.of("reports", ResultFiles.fileSafe(c.name()));
   }
 
-  static int run(picocli.CommandLine.Model.CommandSpec spec, Path caseFile, Path outDir, CommonOptions common,
-      boolean designNotches) {
+  /**
+   * Sweeps a case and writes its report. The output folder and the estimated cost are checked
+   * before any computation.
+   */
+  static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
+      ReportStyleOptions style, WorkOptions work) {
+    return run(spec, c, target, common, style, work, false);
+  }
+
+  /** As above; with {@code designNotches} a notch design is made and shown in the report. */
+  static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
+      ReportStyleOptions style, WorkOptions work, boolean designNotches) {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
-    AnalysisCase c = CaseReader.read(caseFile);
+    ReportFolder.checkTarget(target);
+    CostEstimate cost = CostEstimate.of(c);
+    if (!common.quiet) {
+      out.println(cost.describe(work.threads));
+      out.flush();
+    }
+    if (cost.overLimit() && !work.force) {
+      throw new InvalidInputException("estimated cost",
+          "at most " + CostEstimate.LIMIT_TEXT + " (give --force to run anyway)",
+          "about " + CostEstimate.duration(cost.cpuSeconds()) + "; fewer sweep points or modes bring it down");
+    }
     ReportOptions reportOptions = designNotches && c.loop() != null
-        ? reportOptions(common).withProposedNotches(proposedNotches(c)) : reportOptions(common);
+        ? style.reportOptions().withProposedNotches(proposedNotches(c)) : style.reportOptions();
     boolean terminal = System.console() != null && !common.quiet;
-    ProgressBar bar = new ProgressBar(err, c.configurations().size() * SweepProgress.stagesPerConfiguration(c),
-        terminal);
-    SweepResult result = new CaseSweep(common.threads).run(c, bar);
+    ProgressBar bar = new ProgressBar(err, cost, terminal);
+    SweepResult result = new CaseSweep(work.threads).run(c, bar);
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
-    Path target = outDir != null ? outDir : Path.of("reports", ResultFiles.fileSafe(c.name()));
+    if (terminal) {
+      err.println("writing the report to " + target.toAbsolutePath().normalize() + " ...");
+      err.flush();
+    }
     Path written = ReportFolder.writeAtomically(target, folder -> {
       ResultFiles.write(folder, result, findings, Version.get());
       ReportWriter.write(folder, result, findings, Version.get(), reportOptions);
@@ -125,15 +160,6 @@ final class SweepCommand implements Callable<Integer> {
         "designed over every configuration%s, limit %.1f dB, frequency uncertainty +-%.0f %%",
         Double.isFinite(s.maxSpeedEasMps()) ? String.format(Locale.ROOT, " up to %.1f m/s EAS", s.maxSpeedEasMps())
             : "", s.peakLimitDb(), 100 * s.frequencyUncertainty()));
-  }
-
-  static ReportOptions reportOptions(CommonOptions common) {
-    SpeedAxisUnit unit = switch (common.speedUnit) {
-      case "mps" -> SpeedAxisUnit.METRES_PER_SECOND;
-      case "kt" -> SpeedAxisUnit.KNOTS;
-      default -> throw new InvalidInputException("--speed-unit", "mps or kt", "\"" + common.speedUnit + "\"");
-    };
-    return new ReportOptions(unit, !common.noSvg);
   }
 
   private static String lowestUnstable(ConfigurationResult r) {

@@ -190,6 +190,24 @@ public final class ResultFiles {
     return o;
   }
 
+  /** Each g = 0 closed-loop onset: rational model, exact loop, difference. */
+  private static void onsetRefinements(ArrayNode out, ClosedLoopResult cl) {
+    for (org.flexmargin.sweep.OnsetRefinement r : cl.refinements()) {
+      ObjectNode ro = out.addObject();
+      ro.put("root", r.rational().branchName());
+      ro.put("kind", r.rational().kind().name().toLowerCase(Locale.ROOT));
+      num(ro, "rational_speed_eas_mps", r.rational().condition().speedEasMps());
+      num(ro, "rational_frequency_hz", r.rational().frequencyHz());
+      ro.put("confirmed_on_exact_loop", r.confirmed());
+      num(ro, "exact_speed_eas_mps", r.exact().map(e -> e.condition().speedEasMps()).orElse(Double.NaN));
+      num(ro, "exact_frequency_hz", r.exact().map(FlutterCrossing::frequencyHz).orElse(Double.NaN));
+      num(ro, "speed_difference_eas_mps", r.speedDifferenceEasMps());
+      num(ro, "frequency_difference_hz", r.frequencyDifferenceHz());
+      num(ro, "residual", r.residual());
+      ro.put("remark", r.remark());
+    }
+  }
+
   private static void loop(ObjectNode o, ServoResult servo) {
     ClosedLoopResult cl = servo.closedLoop();
     o.put("rational_approximation", cl.fitDescription());
@@ -210,6 +228,7 @@ public final class ResultFiles {
       num(xo, "frequency_hz", x.frequencyHz());
       xo.put("evaluations", x.evaluations());
     }
+    onsetRefinements(o.putArray("closed_loop_onset_refinements"), cl);
     ArrayNode pts = o.putArray("points");
     for (int i = 0; i < servo.points().size(); i++) {
       ServoPoint p = servo.points().get(i);

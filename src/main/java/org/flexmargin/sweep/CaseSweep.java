@@ -117,11 +117,12 @@ public final class CaseSweep {
     progress.stageDone(c.name(), "divergence and flutter");
     ServoResult servo = null;
     if (analysisCase.loop() != null) {
-      List<ServoPoint> margins = ServoMargins.withDefaults().along(model, c, analysisCase.loop(), path, flutter);
-      progress.stageDone(c.name(), "loop margins");
       ClosedLoopResult closed = new ClosedLoopSweep().analyse(model, c, analysisCase.loop(), path, flutter,
           analysisCase.options());
       progress.stageDone(c.name(), "closed loop");
+      List<ServoPoint> margins = ServoMargins.withDefaults().along(model, c, analysisCase.loop(), path, flutter,
+          closed);
+      progress.stageDone(c.name(), "loop margins");
       servo = new ServoResult(margins, closed);
     }
     ClearanceResult clearance = null;

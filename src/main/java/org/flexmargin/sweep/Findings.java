@@ -92,7 +92,7 @@ public final class Findings {
       FlightCondition fc = x.condition();
       out.add(new Finding(c.configuration(), "closed-loop " + label(x.kind()), x.branchName(), fc.speedEasMps(),
           fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
-          String.format(Locale.ROOT, "g = %.3f crossed (closed-loop state space)", x.thresholdG())));
+          String.format(Locale.ROOT, "g = %.3f crossed (%s)", x.thresholdG(), r.routeOf(x))));
     }
   }
 

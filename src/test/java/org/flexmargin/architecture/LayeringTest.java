@@ -124,7 +124,7 @@ class LayeringTest {
 
   @Test
   void reportReadsOnlyResults() {
-    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase", "clearance");
+    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase", "clearance", "simulate");
   }
 
   @Test
