@@ -445,9 +445,12 @@ public final class CaseReader {
   }
 
   private static AeroSpec readAero(JsonField a, ModeTable table, Context ctx) {
-    a.allowOnly(List.of("strip_theory", "force_table"));
-    String kind = a.exactlyOne("the aerodynamic data", "strip_theory", "force_table");
+    a.allowOnly(List.of("strip_theory", "force_table", "lifting_surfaces"));
+    String kind = a.exactlyOne("the aerodynamic data", "strip_theory", "force_table", "lifting_surfaces");
     JsonField f = a.optional(kind);
+    if (kind.equals("lifting_surfaces")) {
+      return LatticeReader.read(f, table);
+    }
     if (kind.equals("force_table")) {
       String rel = f.text();
       if (!rel.toLowerCase(Locale.ROOT).endsWith(".json")) {

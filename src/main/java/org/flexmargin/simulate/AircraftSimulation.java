@@ -133,10 +133,17 @@ public final class AircraftSimulation {
     String verdict = below && above ? "confirmed: motion below it decays, above it persists or grows"
         : (!above ? "refuted: the motion decays from above the predicted amplitude too"
             : "refuted: the motion persists from below the predicted amplitude too");
+    String beyond = p.amplitude() > scenario.limits().positionLimitRad()
+        ? "; the amplitude exceeds the position limit, so the loop saturates in position (for an unstable "
+            + "airframe: departure) before such a cycle forms"
+        : "";
     return String.format(Locale.ROOT,
-        "%.2f Hz, %.3f deg at the elevator command: after excitation at 0.7x / 1.3x the command oscillates at "
-            + "%.3f / %.3f deg; %s",
-        p.frequencyHz(), Math.toDegrees(p.amplitude()), Math.toDegrees(after[0]), Math.toDegrees(after[1]), verdict);
+        "after excitation at 0.7x / 1.3x the command oscillates at %s / %s deg; %s%s", amplitude(after[0], p),
+        amplitude(after[1], p), verdict, beyond);
+  }
+
+  private static String amplitude(double value, RateLimitCycle.Prediction p) {
+    return !(value < 1e3 * p.amplitude()) ? "unbounded" : String.format(Locale.ROOT, "%.3f", Math.toDegrees(value));
   }
 
   private static SimulationResult.GustPeak peakOf(double h, TimeHistory hist) {

@@ -101,7 +101,7 @@ class LayeringTest {
 
   @Test
   void sweepDependsOnlyOnLowerLayers() {
-    onlyDependsOn("sweep", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase",
+    onlyDependsOn("sweep", "model", "numerics", "aero", "lattice", "structure", "atmosphere", "flutter", "loop", "ase",
         "clearance");
   }
 
