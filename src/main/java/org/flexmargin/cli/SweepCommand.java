@@ -69,6 +69,7 @@ final class SweepCommand implements Callable<Integer> {
   @Override
   public Integer call() {
     AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     if (requirementsFile != null) {
       c = RequirementsOverride.apply(c, requirementsFile);
     }
