@@ -77,26 +77,4 @@ class VerdictAgreementTest {
       assertEquals(sweep.get(i).at("/clearance/passed").asBoolean(), check.get(i).get("passed").asBoolean());
     }
   }
-
-  @Test
-  void unreliableTrackingIsMarkedInTheResultsAndTheExitCode(@TempDir Path tmp) throws IOException {
-    // the validation typical section swept with 3 points from 10 to 5000 m/s TAS (first release: no
-    // onset, no mark, exit 0)
-    ObjectMapper m = new ObjectMapper();
-    com.fasterxml.jackson.databind.node.ObjectNode c = (com.fasterxml.jackson.databind.node.ObjectNode) m.readTree(
-        Path.of("mode-tables/validation/typical-section-lpw.json").toFile());
-    c.putObject("sweep").put("kind", "speed").put("altitude_m", 0).put("speed_kind", "tas").put("from_mps", 10)
-        .put("to_mps", 5000).put("points", 3);
-    Path file = tmp.resolve("coarse.json");
-    m.writeValue(file.toFile(), c);
-    assertEquals(FlexMargin.EXIT_UNRELIABLE, run("sweep", file.toString(), "--out", tmp.resolve("o").toString(),
-        "--quiet"));
-    JsonNode json = m.readTree(tmp.resolve("o/results.json").toFile());
-    boolean marked = false;
-    for (JsonNode f : json.get("findings")) {
-      marked |= f.get("finding").asText().equals("mode tracking trusted only to here");
-    }
-    assertTrue(marked, "the trusted range is a finding");
-    assertTrue(json.at("/configurations/0/flutter/warnings").toString().contains("UNRELIABLE"));
-  }
 }
