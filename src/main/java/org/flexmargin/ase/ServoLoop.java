@@ -44,23 +44,34 @@ public final class ServoLoop {
 
   /**
    * Broken-loop response L(j w) = -F(j w) sum_p C_p(j w) P_p(j w) with the exact aerodynamics and
-   * exact delays. Not thread-safe (one per thread).
+   * exact delays; it declares the forward block's pure delay so that margin grids follow its phase
+   * turn. Not thread-safe (one per thread).
    *
    * @return L as a frequency function
    */
   public SisoFrequencyFunction brokenLoop() {
     PathTerms terms = new PathTerms();
     double[] g = new double[2 * terms.count()];
-    return (w, reIm) -> {
-      terms.evaluate(w, g);
-      double sumR = 0;
-      double sumI = 0;
-      for (int p = 0; p < terms.count(); p++) {
-        sumR += g[2 * p];
-        sumI += g[2 * p + 1];
+    double delay = law.forward().pureDelayS();
+    return new SisoFrequencyFunction() {
+      @Override
+      public void response(double w, double[] reIm) {
+        terms.evaluate(w, g);
+        double sumR = 0;
+        double sumI = 0;
+        for (int p = 0; p < terms.count(); p++) {
+          sumR += g[2 * p];
+          sumI += g[2 * p + 1];
+        }
+        reIm[0] = -sumR;
+        reIm[1] = -sumI;
       }
-      reIm[0] = -sumR;
-      reIm[1] = -sumI;
+
+      /** @return the forward block's delays (hold and computation), s: every path sees them */
+      @Override
+      public double pureDelayS() {
+        return delay;
+      }
     };
   }
 

@@ -10,7 +10,8 @@
  *       source at k = omega b / V (no fit error), then multiplied by the loop blocks' exact
  *       transfer functions (delays exact). This gives the broken-loop response and the margins;
  *   <li>the state space, approximate: the elastic aerodynamics by a rational function
- *       approximation with aerodynamic lag states, delays by Pade. This gives closed-loop
+ *       approximation with aerodynamic lag states, delays by Pade, the zero-order hold by a
+ *       rational approximation that keeps its droop. This gives closed-loop
  *       eigenvalues, hence closed-loop flutter and structural-coupling onsets.
  * </ul>
  *

@@ -14,6 +14,8 @@ public enum CheckKind {
   CLOSED_LOOP_STABILITY,
   /** Flutter-free speed against the flutter speed factor times V_L. */
   FLUTTER_SPEED,
+  /** Divergence speed (rigid body restrained) against the flutter speed factor times V_L. */
+  DIVERGENCE_SPEED,
   /** Least damping of any mode up to V_L against the minimum damping. */
   MINIMUM_DAMPING;
 

@@ -3,6 +3,8 @@ package org.flexmargin.clearance;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
+import org.flexmargin.model.Checks;
 import org.flexmargin.model.ClearanceRequirements;
 import org.flexmargin.model.InvalidInputException;
 
@@ -31,6 +33,23 @@ public final class FlutterClearanceRule {
    */
   public static FlutterClearance assess(ClearanceRequirements requirements,
       List<OnsetSearch> searches, double highestDampingGUpToLimitSpeed) {
+    return assess(requirements, searches, highestDampingGUpToLimitSpeed, OptionalDouble.empty());
+  }
+
+  /**
+   * The rule with the divergence check: static divergence (rigid body restrained) must also lie
+   * at or above flutter speed factor x V_L (MIL-A-8870C names flutter, divergence and other
+   * aeroelastic instabilities together, from memory).
+   *
+   * @param requirements the table
+   * @param searches onset searches, labels unique
+   * @param highestDampingGUpToLimitSpeed highest g up to V_L, V-g convention (finite)
+   * @param divergenceEasMps divergence speed, m/s EAS, or empty when there is no divergence
+   * @return the verdict
+   */
+  public static FlutterClearance assess(ClearanceRequirements requirements,
+      List<OnsetSearch> searches, double highestDampingGUpToLimitSpeed,
+      OptionalDouble divergenceEasMps) {
     if (requirements == null || searches == null || searches.isEmpty()) {
       throw new InvalidInputException("flutter_clearance",
           "requirements and at least one onset search", "nothing");
@@ -62,6 +81,13 @@ public final class FlutterClearanceRule {
                 + " x V_L", words, achieved, requirements.flutterSpeedFactor());
       }
       checks.add(ClearanceCheck.of(CheckKind.FLUTTER_SPEED, s.label(), text, required, achieved,
+          CheckUnit.METRE_PER_SECOND_EAS, RequiredSense.AT_LEAST, Double.NaN));
+    }
+    if (divergenceEasMps.isPresent()) {
+      checks.add(ClearanceCheck.of(CheckKind.DIVERGENCE_SPEED, "",
+          String.format(Locale.ROOT, "divergence speed (rigid body restrained) against %.4g x V_L",
+              requirements.flutterSpeedFactor()),
+          required, Checks.positive("divergence_eas_mps", divergenceEasMps.getAsDouble()),
           CheckUnit.METRE_PER_SECOND_EAS, RequiredSense.AT_LEAST, Double.NaN));
     }
     checks.add(ClearanceCheck.of(CheckKind.MINIMUM_DAMPING, "",

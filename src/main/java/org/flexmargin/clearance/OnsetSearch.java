@@ -16,6 +16,11 @@ import org.flexmargin.model.InvalidInputException;
  */
 public record OnsetSearch(String label, OptionalDouble onsetEasMps,
     double highestAnalysedEasMps) {
+  /** Label of the open-loop (controls fixed) search. */
+  public static final String OPEN_LOOP = "open_loop";
+  /** Label of the closed-loop (flight control loop closed) search. */
+  public static final String CLOSED_LOOP = "closed_loop";
+
   /** Validates. */
   public OnsetSearch {
     Checks.name("label", label);
@@ -39,7 +44,7 @@ public record OnsetSearch(String label, OptionalDouble onsetEasMps,
    * @return a search labelled {@code "open_loop"}
    */
   public static OnsetSearch openLoop(OptionalDouble onsetEasMps, double highestAnalysedEasMps) {
-    return new OnsetSearch("open_loop", onsetEasMps, highestAnalysedEasMps);
+    return new OnsetSearch(OPEN_LOOP, onsetEasMps, highestAnalysedEasMps);
   }
 
   /**
@@ -48,6 +53,6 @@ public record OnsetSearch(String label, OptionalDouble onsetEasMps,
    * @return a search labelled {@code "closed_loop"}
    */
   public static OnsetSearch closedLoop(OptionalDouble onsetEasMps, double highestAnalysedEasMps) {
-    return new OnsetSearch("closed_loop", onsetEasMps, highestAnalysedEasMps);
+    return new OnsetSearch(CLOSED_LOOP, onsetEasMps, highestAnalysedEasMps);
   }
 }

@@ -22,7 +22,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code flexmargin check CASE}: validate a case and summarise it. */
 @Command(name = "check", mixinStandardHelpOptions = true,
-    description = "Validate a case file and its mode tables and print a summary; nothing is computed or written.",
+    description = {"Validate a case file and its mode tables and print a summary, with the estimated cost of "
+        + "sweeping it; nothing is computed or written.",
+        "A sweep whose estimate exceeds " + CostEstimate.LIMIT_TEXT + " is refused unless --force is given."},
     footer = {"", "Example:", "  flexmargin check mode-tables/demo/demo-case.json"})
 final class CheckCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "CASE", description = "Case file (JSON).")
@@ -35,6 +37,10 @@ final class CheckCommand implements Callable<Integer> {
   @Override
   public Integer call() {
     AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
+    if (common.quiet) {
+      return FlexMargin.EXIT_OK;
+    }
     PrintWriter out = spec.commandLine().getOut();
     out.printf(Locale.ROOT, "case %s (format %d): %s%n", c.name(), c.format(), c.description());
     PlannedPath path = new PlannedPath(c.sweep());
@@ -84,6 +90,12 @@ final class CheckCommand implements Callable<Integer> {
     out.println("inputs:");
     for (InputFile f : c.inputs()) {
       out.printf(Locale.ROOT, "  %s  sha256 %s%n", f.path(), f.sha256());
+    }
+    int threads = Runtime.getRuntime().availableProcessors();
+    CostEstimate cost = CostEstimate.of(c);
+    out.println(cost.describe(threads));
+    if (cost.overLimit()) {
+      out.println("  above the limit: sweep refuses this case unless --force is given");
     }
     out.println("input is valid.");
     return FlexMargin.EXIT_OK;

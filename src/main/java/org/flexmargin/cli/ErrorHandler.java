@@ -4,12 +4,14 @@ import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import org.flexmargin.io.InputFileException;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.report.OutputWriteException;
 import picocli.CommandLine;
 import picocli.CommandLine.IExecutionExceptionHandler;
 import picocli.CommandLine.ParseResult;
 
 /**
- * Maps exceptions to exit codes and one clear message: bad input (2) and internal errors (1). A
+ * Maps exceptions to exit codes and one clear message: bad input (2), output that could not be
+ * written (4) and internal errors (1). A
  * stack trace is printed only with {@code --debug}.
  */
 final class ErrorHandler implements IExecutionExceptionHandler {
@@ -22,6 +24,10 @@ final class ErrorHandler implements IExecutionExceptionHandler {
     if (ex instanceof InputFileException || ex instanceof InvalidInputException) {
       err.println("flexmargin: bad input: " + ex.getMessage());
       code = FlexMargin.EXIT_BAD_INPUT;
+    } else if (ex instanceof OutputWriteException) {
+      err.println("flexmargin: output not written: " + ex.getMessage()
+          + " (nothing half-written is left; an earlier report there is kept)");
+      code = FlexMargin.EXIT_WRITE_FAILED;
     } else if (ex instanceof UncheckedIOException) {
       err.println("flexmargin: " + ex.getMessage());
       code = FlexMargin.EXIT_INTERNAL;

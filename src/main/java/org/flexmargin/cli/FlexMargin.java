@@ -21,6 +21,7 @@ import picocli.CommandLine.Command;
           + "tests, flight flutter testing and the approval of the airworthiness authority."
     },
     subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
+        SimulateCommand.class,
         CommandLine.HelpCommand.class},
     footer = {
       "",
@@ -30,7 +31,8 @@ import picocli.CommandLine.Command;
       "  flexmargin sweep mode-tables/demo/demo-case.json --out reports/demo",
       "  flexmargin notch-design mode-tables/demo/demo-case.json",
       "",
-      "Exit codes: 0 done, 1 internal error, 2 bad input, 3 done with requirements violated."
+      "Exit codes: 0 done, 1 internal error, 2 bad input, 3 done with requirements violated, "
+          + "4 output could not be written (disk full, read-only, no permission)."
     })
 public final class FlexMargin implements Runnable {
 
@@ -42,6 +44,8 @@ public final class FlexMargin implements Runnable {
   public static final int EXIT_BAD_INPUT = 2;
   /** Exit code: done with requirements violated. */
   public static final int EXIT_REQUIREMENTS_VIOLATED = 3;
+  /** Exit code: the results could not be written (disk full, read-only file system, no permission). */
+  public static final int EXIT_WRITE_FAILED = 4;
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 

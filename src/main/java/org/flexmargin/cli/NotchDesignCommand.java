@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.flexmargin.io.CaseFileUpdate;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.InvalidInputException;
@@ -27,6 +28,7 @@ import org.flexmargin.report.Cautions;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.report.ResultFiles;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -37,10 +39,13 @@ import picocli.CommandLine.Spec;
         + "gain-stabilisation limit over all configurations, sweep points and the modal frequency uncertainty, "
         + "at the least phase loss at the rigid-body crossover; or (--check-only) check the case's own filters.",
         "Writes notch-design.json and notch-filters.json (the filters list to paste into the case file) "
-            + "into the output folder. Exit 0 if a feasible set was found (or the check passes), 3 if not."},
+            + "into the output folder, and with --write-case a copy of the case with the notches in place. "
+            + "Notch widths are the usual -3 dB widths. Exit 0 if a feasible set was found (or the check "
+            + "passes), 3 if not."},
     footer = {"", "Examples:",
         "  flexmargin notch-design mode-tables/demo/demo-case.json",
-        "  flexmargin notch-design mode-tables/demo/demo-case.json --check-only",
+        "  flexmargin notch-design mode-tables/demo/demo-case.json --write-case /tmp/mc7-notched.json",
+        "  flexmargin sweep /tmp/mc7-notched.json",
         "  flexmargin notch-design mode-tables/demo/demo-case.json --max-eas 70 --notches 2",
         "  flexmargin notch-design mode-tables/demo/demo-case.json --uncertainty 0.05 --limit-db -6 --notches 2",
         "  flexmargin notch-design mode-tables/demo/demo-case.json --check-only"})
@@ -49,8 +54,18 @@ final class NotchDesignCommand implements Callable<Integer> {
   Path caseFile;
 
   @Option(names = "--out", paramLabel = "DIR",
-      description = "Output folder (default: reports/<case name>/notch-design).")
+      description = "Output folder (default: reports/<case name>-notch-design). Must be new, empty or an "
+          + "earlier flexmargin output folder, which is replaced once the new results are complete.")
   Path out;
+
+  @Option(names = "--write-case", paramLabel = "FILE",
+      description = "Also write a copy of the case file with the designed notches in place (only when a "
+          + "feasible set is found; relative file references are rewritten for the new folder). An existing "
+          + "file, the input case included, is replaced only with --overwrite.")
+  Path writeCase;
+
+  @Option(names = "--overwrite", description = "Let --write-case replace an existing file (even the input case).")
+  boolean overwrite;
 
   @Option(names = "--notches", paramLabel = "N", description = "Maximum number of notches (default: ${DEFAULT-VALUE}).")
   int notches = 3;
@@ -94,18 +109,22 @@ final class NotchDesignCommand implements Callable<Integer> {
   @Option(names = "--check-only", description = "Only check the case's own filters over the uncertainty range.")
   boolean checkOnly;
 
-  @Option(names = "--quiet", description = "No summary on the terminal; errors only.")
-  boolean quiet;
-
-  @Option(names = "--debug", description = "Print stack traces of errors.")
-  boolean debug;
+  @Mixin CommonOptions common;
 
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
   @Override
   public Integer call() {
     PrintWriter pw = spec.commandLine().getOut();
+    boolean quiet = common.quiet;
+    if (writeCase != null && checkOnly) {
+      throw new InvalidInputException("--write-case", "a design to write (not --check-only)", "--check-only");
+    }
+    if (overwrite && writeCase == null) {
+      throw new InvalidInputException("--overwrite", "--write-case FILE (it only applies there)", "no --write-case");
+    }
     AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     if (c.loop() == null) {
       throw new InvalidInputException("loop", "a flight-control loop (notch design needs one)", "none");
     }
@@ -126,7 +145,11 @@ final class NotchDesignCommand implements Callable<Integer> {
           .withMarginTable(null);
     }
     s = s.withPoints(stride, maxEasMps != null ? maxEasMps : s.maxSpeedEasMps());
-    Path target = out != null ? out : Path.of("reports", ResultFiles.fileSafe(c.name()), "notch-design");
+    Path target = out != null ? out : Path.of("reports", ResultFiles.fileSafe(c.name()) + "-notch-design");
+    ReportFolder.checkTarget(target);
+    if (writeCase != null) {
+      ReportFolder.checkFile(writeCase, "--write-case", overwrite);
+    }
     NotchDesigner designer = new NotchDesigner();
     if (checkOnly) {
       RobustnessCheckResult r = designer.check(c, s);
@@ -145,13 +168,26 @@ final class NotchDesignCommand implements Callable<Integer> {
       Files.writeString(folder.resolve("notch-design.json"), NotchJson.design(r, Cautions.TEXT));
       Files.writeString(folder.resolve("notch-filters.json"), NotchJson.filters(r));
     });
+    Path updatedCase = r.feasible() && writeCase != null ? writeUpdatedCase(r) : null;
     if (!quiet) {
       printDesign(pw, r);
       pw.println();
       pw.println("written to " + written.resolve("notch-design.json") + " and " + written.resolve("notch-filters.json"));
+      if (updatedCase != null) {
+        pw.println("case with the designed notches in place: " + updatedCase
+            + " (check it: flexmargin sweep " + updatedCase + ")");
+      } else if (writeCase != null) {
+        pw.println("no case written to " + writeCase + ": no feasible notch set");
+      }
       Tables.cautions(pw);
     }
     return r.feasible() ? FlexMargin.EXIT_OK : FlexMargin.EXIT_REQUIREMENTS_VIOLATED;
+  }
+
+  /** Writes the case with the designed filters atomically, after reading the copy back as a case. */
+  private Path writeUpdatedCase(NotchDesignResult r) {
+    String text = CaseFileUpdate.withFilters(caseFile, writeCase, NotchJson.filters(r));
+    return ReportFolder.writeFileAtomically(writeCase, "--write-case", text, overwrite, CaseReader::read);
   }
 
   private static String where(ModePeak p) {
@@ -176,8 +212,8 @@ final class NotchDesignCommand implements Callable<Integer> {
     pw.println();
     pw.println("notches (in every carrying path):");
     for (DesignedNotch n : r.notches()) {
-      pw.printf(Locale.ROOT, "  centre %7.3f Hz  zeta_z %.4f  zeta_p %.4f  depth %5.1f dB  width %5.2f Hz%n",
-          n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio(), n.depthDb(), n.widthHz());
+      pw.printf(Locale.ROOT, "  centre %7.3f Hz  zeta_z %.4f  zeta_p %.4f  depth %5.1f dB  -3 dB width %5.2f Hz%n",
+          n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio(), n.depthDb(), n.minus3DbWidthHz());
     }
     pw.println();
     String h = String.format(Locale.ROOT, "%-22s %10s %-26s %10s %-26s", "mode", "before dB", "where", "after dB",

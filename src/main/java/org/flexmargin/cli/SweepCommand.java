@@ -5,21 +5,22 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.flexmargin.clearance.Severity;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
+import org.flexmargin.io.RequirementsOverride;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
-import org.flexmargin.report.SpeedAxisUnit;
 import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Findings;
+import org.flexmargin.sweep.Instability;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
-import org.flexmargin.sweep.SweepProgress;
 import org.flexmargin.sweep.SweepResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -39,30 +40,66 @@ final class SweepCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "CASE", description = "Case file (JSON).")
   Path caseFile;
 
-  @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: reports/<case name>).")
+  @Option(names = "--out", paramLabel = "DIR",
+      description = "Output folder (default: reports/<case name>). Must be new, empty or an earlier "
+          + "flexmargin output folder, which is replaced once the new report is complete.")
   Path out;
 
+  @Option(names = "--requirements", paramLabel = "FILE",
+      description = "Judge against this requirements file (format of docs/requirements.md) instead of "
+          + "the case's own requirements section.")
+  Path requirementsFile;
+
   @Mixin CommonOptions common;
+  @Mixin ReportStyleOptions style;
+  @Mixin WorkOptions work;
 
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
   @Override
   public Integer call() {
-    return run(spec, caseFile, out, common);
+    AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
+    if (requirementsFile != null) {
+      c = RequirementsOverride.apply(c, requirementsFile);
+    }
+    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work);
   }
 
-  static int run(picocli.CommandLine.Model.CommandSpec spec, Path caseFile, Path outDir, CommonOptions common) {
+  /** @return reports/&lt;case name&gt; */
+  static Path defaultFolder(AnalysisCase c) {
+    return Path.of("reports", ResultFiles.fileSafe(c.name()));
+  }
+
+  /**
+   * Sweeps a case and writes its report. The output folder and the estimated cost are checked
+   * before any computation.
+   */
+  static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
+      ReportStyleOptions style, WorkOptions work) {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
-    ReportOptions reportOptions = reportOptions(common);
-    AnalysisCase c = CaseReader.read(caseFile);
+    ReportOptions reportOptions = style.reportOptions();
+    ReportFolder.checkTarget(target);
+    CostEstimate cost = CostEstimate.of(c);
+    if (!common.quiet) {
+      out.println(cost.describe(work.threads));
+      out.flush();
+    }
+    if (cost.overLimit() && !work.force) {
+      throw new InvalidInputException("estimated cost",
+          "at most " + CostEstimate.LIMIT_TEXT + " (give --force to run anyway)",
+          "about " + CostEstimate.duration(cost.cpuSeconds()) + "; fewer sweep points or modes bring it down");
+    }
     boolean terminal = System.console() != null && !common.quiet;
-    ProgressBar bar = new ProgressBar(err, c.configurations().size() * SweepProgress.stagesPerConfiguration(c),
-        terminal);
-    SweepResult result = new CaseSweep(common.threads).run(c, bar);
+    ProgressBar bar = new ProgressBar(err, cost, terminal);
+    SweepResult result = new CaseSweep(work.threads).run(c, bar);
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
-    Path target = outDir != null ? outDir : Path.of("reports", ResultFiles.fileSafe(c.name()));
+    if (terminal) {
+      err.println("writing the report to " + target.toAbsolutePath().normalize() + " ...");
+      err.flush();
+    }
     Path written = ReportFolder.writeAtomically(target, folder -> {
       ResultFiles.write(folder, result, findings, Version.get());
       ReportWriter.write(folder, result, findings, Version.get(), reportOptions);
@@ -83,6 +120,9 @@ final class SweepCommand implements Callable<Integer> {
         for (String w : r.flutter().warnings()) {
           out.println("  warning: " + w);
         }
+        if (r.clearance() == null) {
+          out.println("  lowest unstable speed: " + lowestUnstable(r));
+        }
       }
       clearance(out, result, terminal);
       out.println();
@@ -94,13 +134,9 @@ final class SweepCommand implements Callable<Integer> {
     return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
   }
 
-  static ReportOptions reportOptions(CommonOptions common) {
-    SpeedAxisUnit unit = switch (common.speedUnit) {
-      case "mps" -> SpeedAxisUnit.METRES_PER_SECOND;
-      case "kt" -> SpeedAxisUnit.KNOTS;
-      default -> throw new InvalidInputException("--speed-unit", "mps or kt", "\"" + common.speedUnit + "\"");
-    };
-    return new ReportOptions(unit, !common.noSvg);
+  private static String lowestUnstable(ConfigurationResult r) {
+    return r.lowestInstability().map(Instability::describe)
+        .orElse("none found (no flutter onset, closed-loop instability or divergence)");
   }
 
   private static void clearance(PrintWriter out, SweepResult result, boolean colour) {
@@ -120,10 +156,9 @@ final class SweepCommand implements Callable<Integer> {
         verdict = (pass ? "\u001b[1;32m" : "\u001b[1;31m") + verdict + "\u001b[0m";
       }
       out.printf(Locale.ROOT, "  %s: %s", r.configuration(), verdict);
-      r.clearance().governing().ifPresent(g -> out.printf(Locale.ROOT,
-          "; governing: %s (required %.4g %s, achieved %.4g %s)", g.description(), g.requiredValue(),
-          g.unit().symbol(), g.achievedValue(), g.unit().symbol()));
+      r.clearance().governingFinding().ifPresent(g -> out.printf(Locale.ROOT, "; governing: %s", g.describe()));
       out.println();
+      out.println("    lowest unstable speed: " + lowestUnstable(r));
       long failing = r.clearance().points().stream().filter(p -> !p.passed()).count();
       if (failing > 0) {
         out.printf(Locale.ROOT, "    %d of %d sweep points fail at least one loop requirement%n", failing,
@@ -131,6 +166,7 @@ final class SweepCommand implements Callable<Integer> {
       }
     }
     if (any) {
+      out.println("  ranking: " + Severity.RULE);
       out.println("  requirements: " + result.configurations().stream().filter(r -> r.clearance() != null)
           .findFirst().orElseThrow().clearance().requirementsSource());
     }

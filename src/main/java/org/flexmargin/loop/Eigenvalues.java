@@ -26,6 +26,18 @@ public record Eigenvalues(double[] real, double[] imag) {
     return new Eigenvalues(new double[0], new double[0]);
   }
 
+  /**
+   * @param other more eigenvalues
+   * @return these followed by the other's
+   */
+  public Eigenvalues concat(Eigenvalues other) {
+    double[] re = Arrays.copyOf(real, real.length + other.real.length);
+    double[] im = Arrays.copyOf(imag, imag.length + other.imag.length);
+    System.arraycopy(other.real, 0, re, real.length, other.real.length);
+    System.arraycopy(other.imag, 0, im, imag.length, other.imag.length);
+    return new Eigenvalues(re, im);
+  }
+
   /** @return number of eigenvalues */
   public int size() {
     return real.length;

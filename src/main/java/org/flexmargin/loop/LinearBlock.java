@@ -14,6 +14,12 @@ public interface LinearBlock extends SisoFrequencyFunction {
   /** @return a one-input one-output state-space realisation */
   StateSpace stateSpace();
 
+  /** @return the eigenvalues of the state space (grid seeds for margin searches) */
+  @Override
+  default Eigenvalues knownPoles() {
+    return stateSpace().eigenvalues();
+  }
+
   /**
    * Series composition: this block followed by {@code next}.
    *

@@ -20,13 +20,18 @@ import org.apache.commons.math3.optim.univariate.UnivariatePointValuePair;
  *
  * <ol>
  *   <li>L is sampled on a logarithmic grid over [w_min, w_max], plus points around the damped
- *       frequency of every lightly damped pole supplied (seeds; for a {@link LinearBlock} the
- *       eigenvalues of its state space), spaced by the pole's |real part|.
+ *       frequency of every lightly damped pole supplied by the caller (seeds) or known to L
+ *       itself ({@link SisoFrequencyFunction#knownPoles()}; for a {@link LinearBlock} the
+ *       eigenvalues of its state space), spaced by the pole's |real part|. Where L contains a
+ *       pure delay tau ({@link SisoFrequencyFunction#pureDelayS()}) points are added until the
+ *       delay turns the phase by at most {@value #MAX_DELAY_TURN_RAD} rad (below pi) per interval.
  *   <li>Every interval whose phase changes by more than {@link MarginOptions#maxPhaseStepDeg()}
  *       or whose gain changes by more than {@link MarginOptions#maxGainStepDb()} is bisected (in
  *       log w) until both hold or the depth/point cap is reached. A narrow resonance falling
  *       between grid points swings the phase by about 180 deg and is thereby resolved; the phase
- *       is unwrapped on the refined grid.
+ *       is unwrapped on the refined grid. The step test and the unwrapping use the phase of
+ *       L e^{j w tau}, the delay's exact -w tau being added back, so no turn of a long delay is
+ *       lost (a wrapped phase difference cannot tell a turn of 2 pi from none).
  *   <li>Gain crossovers (ln|L| = 0) and phase crossovers (unwrapped phase = -180 deg + k 360
  *       deg) are bracketed by sign changes between grid points and solved by Brent's method
  *       (Brent, <i>Algorithms for Minimization without Derivatives</i>, 1973; Commons Math).
@@ -43,6 +48,9 @@ import org.apache.commons.math3.optim.univariate.UnivariatePointValuePair;
 public final class LoopMargins {
   /** Local maxima refined for the disk margin and the gain peak. */
   private static final int MAXIMA_REFINED = 8;
+
+  /** Largest phase turn w tau of the loop's pure delay over one initial grid interval, rad. */
+  static final double MAX_DELAY_TURN_RAD = 1.5;
 
   private final MarginOptions options;
 
@@ -90,7 +98,9 @@ public final class LoopMargins {
    */
   public LoopMarginResult analyse(SisoFrequencyFunction loop, double omegaMinRadPerS,
       double omegaMaxRadPerS, Eigenvalues seedPoles) {
-    return analyse(loop, omegaMinRadPerS, omegaMaxRadPerS, seedPoles,
+    StateSpace.require(loop != null, "loop", "a frequency function", "null");
+    StateSpace.require(seedPoles != null, "seed_poles", "eigenvalues (possibly none)", "null");
+    return analyse(loop, omegaMinRadPerS, omegaMaxRadPerS, seedPoles.concat(loop.knownPoles()),
         ClosedLoopStability.NOT_CHECKED);
   }
 
@@ -102,7 +112,10 @@ public final class LoopMargins {
     StateSpace.require(Double.isFinite(wMax) && wMax > wMin, "omega_max_rad_per_s",
         "a finite value > omega_min " + wMin, String.valueOf(wMax));
     StateSpace.require(seeds != null, "seed_poles", "eigenvalues (possibly none)", "null");
-    Counted f = new Counted(loop);
+    double tau = loop.pureDelayS();
+    StateSpace.require(Double.isFinite(tau) && tau >= 0, "loop.pure_delay_s", "a finite value >= 0",
+        String.valueOf(tau));
+    Counted f = new Counted(loop, tau);
 
     // 1. initial grid in x = ln w, plus seeds
     double x0 = Math.log(wMin);
@@ -143,14 +156,14 @@ public final class LoopMargins {
     Grid g = new Grid(merged.length + 64);
     for (double x : merged) {
       if (g.size == 0 || x > g.x[g.size - 1]) {
-        g.add(x, f);
+        addWithDelaySteps(g, x, f, tau);
       }
     }
     int afterSeeds = g.size;
 
-    // 2. adaptive bisection
     double maxPhase = Math.toRadians(options.maxPhaseStepDeg());
     double maxLogMag = options.maxGainStepDb() * Math.log(10) / 20;
+    // 2. adaptive bisection (phase steps measured on L e^{j w tau})
     boolean changed = true;
     while (changed && g.size < options.maxPoints()) {
       changed = false;
@@ -158,7 +171,7 @@ public final class LoopMargins {
       for (int i = 0; i < g.size; i++) {
         next.copyFrom(g, i);
         if (i + 1 < g.size && next.size < options.maxPoints()
-            && g.needsRefinement(i, maxPhase, maxLogMag)
+            && g.needsRefinement(i, maxPhase, maxLogMag, tau)
             && g.x[i + 1] - g.x[i] > 2 * minWidth) {
           next.add(0.5 * (g.x[i] + g.x[i + 1]), f);
           changed = true;
@@ -168,16 +181,20 @@ public final class LoopMargins {
     }
     int unresolved = 0;
     for (int i = 0; i + 1 < g.size; i++) {
-      if (g.needsRefinement(i, maxPhase, maxLogMag)) {
+      if (g.needsRefinement(i, maxPhase, maxLogMag, tau)) {
         unresolved++;
       }
     }
 
-    // 3. unwrap
+    // 3. unwrap the phase of L e^{j w tau}, then take the delay's exact turn off again
+    double[] remainder = new double[g.size];
     double[] phase = new double[g.size];
-    phase[0] = Math.atan2(g.im[0], g.re[0]);
+    remainder[0] = g.remainderPhase(0, tau);
     for (int i = 1; i < g.size; i++) {
-      phase[i] = phase[i - 1] + wrap(Math.atan2(g.im[i], g.re[i]) - phase[i - 1]);
+      remainder[i] = remainder[i - 1] + wrap(g.remainderPhase(i, tau) - remainder[i - 1]);
+    }
+    for (int i = 0; i < g.size; i++) {
+      phase[i] = remainder[i] - Math.exp(g.x[i]) * tau;
     }
 
     BrentSolver solver = new BrentSolver(1e-14, 1e-13, 1e-15);
@@ -196,8 +213,7 @@ public final class LoopMargins {
         return Math.log(Math.hypot(v[0], v[1]));
       }, g.x[i], g.x[i + 1]);
       double w = Math.exp(xr);
-      f.at(w, v);
-      double ph = phase[i] + wrap(Math.atan2(v[1], v[0]) - phase[i]);
+      double ph = f.unwrappedPhase(w, remainder[i], v);
       double pmRad = wrap(Math.PI + ph);
       double delay = (pmRad < 0 ? pmRad + 2 * Math.PI : pmRad) / w;
       if (gains.isEmpty() || w > gains.get(gains.size() - 1).omegaRadPerS() * (1 + 1e-12)) {
@@ -217,10 +233,7 @@ public final class LoopMargins {
       final int base = i;
       for (long k = Math.min(ka, kb) + 1; k <= Math.max(ka, kb); k++) {
         double target = -Math.PI + 2 * Math.PI * k;
-        DoubleUnaryOperator h = x -> {
-          f.at(Math.exp(x), v);
-          return phase[base] + wrap(Math.atan2(v[1], v[0]) - phase[base]) - target;
-        };
+        DoubleUnaryOperator h = x -> f.unwrappedPhase(Math.exp(x), remainder[base], v) - target;
         double ha = phase[i] - target;
         double xr;
         if (ha == 0) {
@@ -311,6 +324,25 @@ public final class LoopMargins {
     return new double[] {bestX, best};
   }
 
+  /**
+   * Adds the point x = ln w to the grid, preceded by as many points evenly spaced in w as keep
+   * the delay's turn tau (w_{i+1} - w_i) at most {@link #MAX_DELAY_TURN_RAD} per interval.
+   */
+  private static void addWithDelaySteps(Grid g, double x, Counted f, double tau) {
+    if (g.size > 0 && tau > 0) {
+      double w0 = Math.exp(g.x[g.size - 1]);
+      double w1 = Math.exp(x);
+      int steps = (int) Math.ceil(tau * (w1 - w0) / MAX_DELAY_TURN_RAD);
+      for (int j = 1; j < steps; j++) {
+        double xj = Math.log(w0 + (w1 - w0) * j / steps);
+        if (xj > g.x[g.size - 1] && xj < x) {
+          g.add(xj, f);
+        }
+      }
+    }
+    g.add(x, f);
+  }
+
   /** Wraps an angle into (-pi, pi]. */
   static double wrap(double a) {
     double r = Math.IEEEremainder(a, 2 * Math.PI);
@@ -320,15 +352,27 @@ public final class LoopMargins {
   /** The frequency function with an evaluation counter. */
   private static final class Counted {
     private final SisoFrequencyFunction fn;
+    private final double tau;
     private int count;
 
-    Counted(SisoFrequencyFunction fn) {
+    Counted(SisoFrequencyFunction fn, double tau) {
       this.fn = fn;
+      this.tau = tau;
     }
 
     void at(double w, double[] v) {
       count++;
       fn.response(w, v);
+    }
+
+    /**
+     * Unwrapped arg L(j w), rad, continuing the unwrapped phase of L e^{j w tau} from the grid
+     * point on the left of w.
+     */
+    double unwrappedPhase(double w, double leftRemainder, double[] v) {
+      at(w, v);
+      double rem = Math.atan2(v[1], v[0]) + w * tau;
+      return leftRemainder + wrap(rem - leftRemainder) - w * tau;
     }
   }
 
@@ -375,8 +419,13 @@ public final class LoopMargins {
       return Math.log(Math.hypot(re[i], im[i]));
     }
 
-    boolean needsRefinement(int i, double maxPhase, double maxLogMag) {
-      double dPhase = wrap(Math.atan2(im[i + 1], re[i + 1]) - Math.atan2(im[i], re[i]));
+    /** @return arg(L e^{j w tau}) at point i, rad (not unwrapped) */
+    double remainderPhase(int i, double tau) {
+      return Math.atan2(im[i], re[i]) + Math.exp(x[i]) * tau;
+    }
+
+    boolean needsRefinement(int i, double maxPhase, double maxLogMag, double tau) {
+      double dPhase = wrap(remainderPhase(i + 1, tau) - remainderPhase(i, tau));
       double dMag = logMag(i + 1) - logMag(i);
       return Math.abs(dPhase) > maxPhase || !(Math.abs(dMag) <= maxLogMag);
     }

@@ -62,6 +62,16 @@ public enum PadeOrder {
     return c;
   }
 
+  /** @return c_0..c_n as a polynomial in descending powers (index n - k holds c_k), P(x) */
+  public double[] descendingCoefficients() {
+    double[] c = coefficients();
+    double[] p = new double[c.length];
+    for (int k = 0; k < c.length; k++) {
+      p[degree - k] = c[k];
+    }
+    return p;
+  }
+
   private static double factorial(int k) {
     double f = 1;
     for (int i = 2; i <= k; i++) {

@@ -27,6 +27,18 @@ public record PureDelay(double delayS, PadeOrder order) implements LinearBlock {
     return pade(delayS, order);
   }
 
+  /** @return tau, s */
+  @Override
+  public double pureDelayS() {
+    return delayS;
+  }
+
+  /** @return none: e^{-s tau} has no poles (those of the Padé realisation are not seeds) */
+  @Override
+  public Eigenvalues knownPoles() {
+    return Eigenvalues.none();
+  }
+
   @Override
   public void response(double omegaRadPerS, double[] reIm) {
     reIm[0] = Math.cos(omegaRadPerS * delayS);
@@ -38,15 +50,20 @@ public record PureDelay(double delayS, PadeOrder order) implements LinearBlock {
     if (tau == 0) {
       return StateSpace.staticGain(1.0);
     }
-    double[] c = order.coefficients();
-    int n = order.degree();
-    double[] num = new double[n + 1];
-    double[] den = new double[n + 1];
-    for (int k = 0; k <= n; k++) {
-      // descending powers of x = s tau: index n - k holds x^k
-      den[n - k] = c[k];
-      num[n - k] = (k % 2 == 0 ? 1 : -1) * c[k];
+    // P(-x)/P(x), x = s tau, descending powers: index n - k holds x^k
+    double[] den = order.descendingCoefficients();
+    double[] num = den.clone();
+    for (int k = 1; k <= order.degree(); k += 2) {
+      num[order.degree() - k] = -num[order.degree() - k];
     }
+    return timeScaled(num, den, tau);
+  }
+
+  /**
+   * Realisation of N(s tau)/D(s tau): controllable canonical form of N(x)/D(x) (descending powers
+   * of x), time-scaled (A/tau, B/tau) so that the coefficients stay O(1) whatever tau is.
+   */
+  static StateSpace timeScaled(double[] num, double[] den, double tau) {
     StateSpace unit = StateSpace.fromTransferFunction(num, den);
     DMatrixRMaj a = unit.a();
     DMatrixRMaj b = unit.b();

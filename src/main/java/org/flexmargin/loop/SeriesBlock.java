@@ -36,6 +36,16 @@ public record SeriesBlock(List<LinearBlock> blocks) implements LinearBlock {
     return s;
   }
 
+  /** @return the sum of the blocks' delays, s */
+  @Override
+  public double pureDelayS() {
+    double tau = 0;
+    for (LinearBlock b : blocks) {
+      tau += b.pureDelayS();
+    }
+    return tau;
+  }
+
   @Override
   public void response(double omegaRadPerS, double[] reIm) {
     double pr = 1;

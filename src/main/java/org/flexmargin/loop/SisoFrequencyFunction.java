@@ -16,6 +16,27 @@ public interface SisoFrequencyFunction {
   void response(double omegaRadPerS, double[] reIm);
 
   /**
+   * The pure (transport) delay contained in F, whose phase -w tau a frequency grid must follow:
+   * {@link LoopMargins} keeps the turn w tau below pi per grid interval and unwraps the phase of
+   * F e^{j w tau}, so no turn of the delay is lost however long it is.
+   *
+   * @return tau, s (&gt;= 0); 0 when F has no delay or does not know it
+   */
+  default double pureDelayS() {
+    return 0.0;
+  }
+
+  /**
+   * Poles of F known to the function itself, used only to place frequency-grid points around
+   * lightly damped resonances (a {@link LinearBlock} gives the eigenvalues of its state space).
+   *
+   * @return the poles; {@link Eigenvalues#none()} when unknown
+   */
+  default Eigenvalues knownPoles() {
+    return Eigenvalues.none();
+  }
+
+  /**
    * @param omegaRadPerS frequency, rad/s
    * @return |F(j w)|
    */

@@ -9,11 +9,14 @@ import org.flexmargin.loop.NotchFilter;
  * @param numeratorDampingRatio zeta_z
  * @param denominatorDampingRatio zeta_p
  * @param depthDb attenuation at the centre, -20 log10(zeta_z/zeta_p), dB (positive)
- * @param widthHz separation of the two half-depth frequencies 2 f_c sqrt(zeta_z zeta_p), Hz (the
- *     width of {@link NotchFilter})
+ * @param minus3DbWidthHz the usual width: separation of the two -3 dB frequencies
+ *     2 f_c sqrt(zeta_p^2 - 2 zeta_z^2), Hz ({@link NotchFilter#minus3DbWidthHz}; NaN if no deeper
+ *     than 3 dB)
+ * @param halfDepthWidthHz separation of the two frequencies where the attenuation is half the
+ *     centre depth in dB, 2 f_c sqrt(zeta_z zeta_p), Hz ({@link NotchFilter#widthHz}; narrower)
  */
 public record DesignedNotch(double centreHz, double numeratorDampingRatio, double denominatorDampingRatio,
-    double depthDb, double widthHz) {
+    double depthDb, double minus3DbWidthHz, double halfDepthWidthHz) {
   /** @return the notch as a loop block */
   public NotchFilter filter() {
     return new NotchFilter(centreHz, numeratorDampingRatio, denominatorDampingRatio);
@@ -22,6 +25,6 @@ public record DesignedNotch(double centreHz, double numeratorDampingRatio, doubl
   /** @return the record of a notch filter */
   public static DesignedNotch of(NotchFilter n) {
     return new DesignedNotch(n.centreFrequencyHz(), n.zeroDampingRatio(), n.poleDampingRatio(), -n.centreGainDb(),
-        n.widthHz());
+        n.minus3DbWidthHz(), n.widthHz());
   }
 }

@@ -171,7 +171,7 @@ public final class NotchJson {
     for (DesignedNotch n : r.notches()) {
       o.open(null, '{').num("centre_hz", n.centreHz()).num("numerator_damping_ratio", n.numeratorDampingRatio())
           .num("denominator_damping_ratio", n.denominatorDampingRatio()).num("depth_db", n.depthDb())
-          .num("width_hz", n.widthHz()).close('}');
+          .num("width_3db_hz", n.minus3DbWidthHz()).num("half_depth_width_hz", n.halfDepthWidthHz()).close('}');
     }
     o.close(']');
     o.open("structural_peaks", '[');

@@ -8,7 +8,10 @@ import java.util.Map;
 import java.util.Optional;
 import org.flexmargin.clearance.CheckKey;
 import org.flexmargin.clearance.CheckKind;
+import org.flexmargin.clearance.CheckUnit;
 import org.flexmargin.clearance.ClearanceCheck;
+import org.flexmargin.clearance.RequiredSense;
+import org.flexmargin.clearance.RankedFinding;
 import org.flexmargin.clearance.PointAssessment;
 import org.flexmargin.clearance.StructuralModeAssessment;
 import org.flexmargin.clearance.StructuralStabilisation;
@@ -104,11 +107,14 @@ public final class ClearanceSections {
       Optional<ClearanceCheck> g = r.governing();
       if (g.isPresent()) {
         ClearanceCheck gc = g.get();
-        w.text(" Governing requirement: " + gc.description() + "; required ");
-        num(w, base + "/governing/required", gc.requiredValue(), decimals(gc));
-        w.text(" " + gc.unit().symbol() + ", achieved ");
-        num(w, base + "/governing/achieved", gc.achievedValue(), decimals(gc));
-        w.text(" " + gc.unit().symbol() + ".");
+        RankedFinding rf = r.governingFinding().orElseThrow();
+        w.text(gc.passed() ? " Closest to its limit, at "
+            : String.format(Locale.ROOT, " Governing finding (severity %d of 5, %s), from ", rf.severity().rank(),
+                rf.severity().words()));
+        num(w, base + "/governing/speed_eas_mps", rf.speedEasMps(), 2);
+        w.text(" m/s EAS: " + gc.description() + "; ");
+        requiredAchieved(w, base + "/governing", gc);
+        w.text(".");
       } else {
         w.text(" Every requirement is met.");
       }
@@ -121,11 +127,8 @@ public final class ClearanceSections {
         w.open("li");
         w.element("span", x.passed() ? "pass" : "fail", "class", x.passed() ? "ok" : "warn", "data-json",
             p + "/passed", "data-value", Boolean.toString(x.passed()));
-        w.text(": " + x.description() + ": achieved ");
-        num(w, p + "/achieved", x.achievedValue(), decimals(x));
-        w.text(" " + x.unit().symbol() + " against ");
-        num(w, p + "/required", x.requiredValue(), decimals(x));
-        w.text(" " + x.unit().symbol());
+        w.text(": " + x.description() + ": ");
+        requiredAchieved(w, p, x);
         if (x.kind() == CheckKind.FLUTTER_SPEED) {
           w.text(String.format(Locale.ROOT, " (%+.1f %% of the required speed)",
               100 * (x.achievedValue() / x.requiredValue() - 1)));
@@ -473,6 +476,23 @@ public final class ClearanceSections {
     private static void pair(XhtmlWriter w, String k, String v) {
       w.open("tr").element("th", k).element("td", v).close("tr");
     }
+  }
+
+  /**
+   * Writes "required at least R unit, achieved A unit" (or "at most"; "required stable, found
+   * unstable" for stability), so that every printed pair reads the way its pass or fail goes.
+   */
+  private static void requiredAchieved(XhtmlWriter w, String pointer, ClearanceCheck c) {
+    if (c.unit() == CheckUnit.STABILITY) {
+      w.text("required stable, found " + (c.passed() ? "stable" : "unstable"));
+      return;
+    }
+    String unit = c.unit().symbol().isEmpty() ? "" : " " + c.unit().symbol();
+    w.text(c.sense() == RequiredSense.AT_LEAST ? "required at least " : "required at most ");
+    num(w, pointer + "/required", c.requiredValue(), decimals(c));
+    w.text(unit + ", achieved ");
+    num(w, pointer + "/achieved", c.achievedValue(), decimals(c));
+    w.text(unit);
   }
 
   private static void num(XhtmlWriter w, String pointer, double v, int decimals) {

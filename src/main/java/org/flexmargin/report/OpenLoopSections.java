@@ -122,7 +122,7 @@ public final class OpenLoopSections {
           continue;
         }
         boolean unstable = f.what().equals(Findings.label(CrossingKind.FLUTTER_ONSET))
-            || f.what().equals("unstable at sweep start");
+            || f.what().equals(Findings.OPEN_LOOP_UNSTABLE_AT_START) || Findings.isClosedLoopInstability(f);
         boolean belowLimit = f.what().equals(Findings.label(CrossingKind.DAMPING_BELOW_LIMIT))
             || f.what().equals("damping below limit at start");
         if (unstable && (onset < 0 || f.speedEasMps() < findings.get(onset).speedEasMps())) {
@@ -139,7 +139,7 @@ public final class OpenLoopSections {
       w.element("strong", c.configuration() + ": ");
       if (onset >= 0) {
         Finding f = findings.get(onset);
-        w.text("lowest flutter speed ");
+        w.text("lowest unstable speed (open or closed loop) ");
         span(w, onset, "speed_eas_mps", f.speedEasMps(), 2);
         w.text(" m/s EAS (");
         span(w, onset, "speed_eas_kt", f.speedEasKnots(), 1);

@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import org.flexmargin.flutter.BranchCurve;
 import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.FlutterCrossing;
@@ -23,6 +24,7 @@ import org.flexmargin.loop.LoopMarginResult;
 import org.flexmargin.loop.PhaseCrossover;
 import org.flexmargin.clearance.ClearanceCheck;
 import org.flexmargin.clearance.PointAssessment;
+import org.flexmargin.clearance.RankedFinding;
 import org.flexmargin.clearance.StructuralModeAssessment;
 import org.flexmargin.sweep.ClearanceResult;
 import org.flexmargin.sweep.ClosedLoopPoint;
@@ -35,6 +37,7 @@ import org.flexmargin.sweep.ServoResult;
 import org.flexmargin.model.InputFile;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
+import org.flexmargin.sweep.Instability;
 import org.flexmargin.sweep.SweepResult;
 
 /**
@@ -117,6 +120,11 @@ public final class ResultFiles {
       m.put("name", c.modeNames().get(i));
       num(m, "frequency_hz", f[i]);
     }
+    ObjectNode unstable = o.putObject("lowest_unstable_speed");
+    instability(unstable, "any", c.lowestInstability());
+    instability(unstable, "open_loop_flutter", c.lowestOpenLoopFlutter());
+    instability(unstable, "closed_loop", c.lowestClosedLoopInstability());
+    instability(unstable, "divergence", c.divergenceInstability());
     DivergenceResult d = c.divergence();
     ObjectNode div = o.putObject("divergence");
     div.put("found", d.found());
@@ -182,6 +190,24 @@ public final class ResultFiles {
     return o;
   }
 
+  /** Each g = 0 closed-loop onset: rational model, exact loop, difference. */
+  private static void onsetRefinements(ArrayNode out, ClosedLoopResult cl) {
+    for (org.flexmargin.sweep.OnsetRefinement r : cl.refinements()) {
+      ObjectNode ro = out.addObject();
+      ro.put("root", r.rational().branchName());
+      ro.put("kind", r.rational().kind().name().toLowerCase(Locale.ROOT));
+      num(ro, "rational_speed_eas_mps", r.rational().condition().speedEasMps());
+      num(ro, "rational_frequency_hz", r.rational().frequencyHz());
+      ro.put("confirmed_on_exact_loop", r.confirmed());
+      num(ro, "exact_speed_eas_mps", r.exact().map(e -> e.condition().speedEasMps()).orElse(Double.NaN));
+      num(ro, "exact_frequency_hz", r.exact().map(FlutterCrossing::frequencyHz).orElse(Double.NaN));
+      num(ro, "speed_difference_eas_mps", r.speedDifferenceEasMps());
+      num(ro, "frequency_difference_hz", r.frequencyDifferenceHz());
+      num(ro, "residual", r.residual());
+      ro.put("remark", r.remark());
+    }
+  }
+
   private static void loop(ObjectNode o, ServoResult servo) {
     ClosedLoopResult cl = servo.closedLoop();
     o.put("rational_approximation", cl.fitDescription());
@@ -202,6 +228,7 @@ public final class ResultFiles {
       num(xo, "frequency_hz", x.frequencyHz());
       xo.put("evaluations", x.evaluations());
     }
+    onsetRefinements(o.putArray("closed_loop_onset_refinements"), cl);
     ArrayNode pts = o.putArray("points");
     for (int i = 0; i < servo.points().size(); i++) {
       ServoPoint p = servo.points().get(i);
@@ -282,7 +309,10 @@ public final class ResultFiles {
   private static void clearance(ObjectNode o, ClearanceResult r) {
     o.put("passed", r.passed());
     o.put("requirements_source", r.requirementsSource());
-    r.governing().ifPresent(g -> check(o.putObject("governing"), g));
+    r.governingFinding().ifPresent(g -> ranked(o.putObject("governing"), g));
+    o.put("ranking_rule", r.rankingRule());
+    ArrayNode failures = o.putArray("failures_ranked");
+    r.failures().forEach(f -> ranked(failures.addObject(), f));
     ObjectNode fl = o.putObject("flutter_rule");
     fl.put("passed", r.flutter().passed());
     num(fl, "limit_speed_eas_mps", r.flutter().limitSpeedEasMps());
@@ -325,6 +355,26 @@ public final class ResultFiles {
         so.put("status", s.status().name().toLowerCase(Locale.ROOT));
       }
     }
+  }
+
+  private static void ranked(ObjectNode o, RankedFinding f) {
+    check(o, f.check());
+    o.put("severity", f.severity().key());
+    o.put("severity_rank", f.severity().rank());
+    num(o, "speed_eas_mps", f.speedEasMps());
+  }
+
+  private static void instability(ObjectNode o, String key, Optional<Instability> i) {
+    if (i.isEmpty()) {
+      o.putNull(key);
+      return;
+    }
+    ObjectNode x = o.putObject(key);
+    x.put("kind", i.get().kind().key());
+    x.put("mode", i.get().mode());
+    num(x, "speed_eas_mps", i.get().speedEasMps());
+    num(x, "frequency_hz", i.get().frequencyHz());
+    x.put("at_sweep_start", i.get().atSweepStart());
   }
 
   private static void check(ObjectNode o, ClearanceCheck c) {

@@ -47,9 +47,9 @@ public final class AircraftSimulationModel {
   /** Output: the control law's output (rad). */
   public static final String LAW_OUTPUT = "law_output_rad";
   /** Output: rigid-body pitch rate (rad/s). */
-  public static final String PITCH_RATE = "pitch_rate_rad_per_s";
+  public static final String PITCH_RATE = "rigid_pitch_rate_rad_per_s";
   /** Output: angle of attack (rad). */
-  public static final String ALPHA = "alpha_rad";
+  public static final String ALPHA = "rigid_alpha_rad";
 
   private final StateSpace system;
   private final int actuatorPosition;
@@ -58,10 +58,12 @@ public final class AircraftSimulationModel {
   private final double actuatorDamping;
   private final int commandOutput;
   private final List<String> modeNames;
+  private final double speedTasMps;
 
   private AircraftSimulationModel(StateSpace system, int actuatorPosition, int actuatorRate, double actuatorOmega,
-      double actuatorDamping, int commandOutput, List<String> modeNames) {
+      double actuatorDamping, int commandOutput, List<String> modeNames, double speedTasMps) {
     this.system = system;
+    this.speedTasMps = speedTasMps;
     this.actuatorPosition = actuatorPosition;
     this.actuatorRate = actuatorRate;
     this.actuatorOmega = actuatorOmega;
@@ -73,6 +75,11 @@ public final class AircraftSimulationModel {
   /** @return the linear system (inputs pilot and gust; outputs as described above) */
   public StateSpace system() {
     return system;
+  }
+
+  /** @return true airspeed of the flight condition (m/s) */
+  public double speedTasMps() {
+    return speedTasMps;
   }
 
   /** @return index of the actuator position state */
@@ -105,17 +112,61 @@ public final class AircraftSimulationModel {
     return modeNames;
   }
 
+  /**
+   * The model flying through continuous turbulence: the shaping filter feeds the gust input.
+   * Inputs: {@link #PILOT_INPUT} and {@code white_noise} (unit intensity); states: the model's,
+   * then the filter's; outputs as the model's (the gust output is the filter's output).
+   *
+   * @param turbulence the turbulence
+   * @return the augmented system
+   */
+  public StateSpace withTurbulence(Turbulence turbulence) {
+    StateSpace f = turbulence.shapingFilter(speedTasMps);
+    int n = system.stateCount();
+    int nf = f.stateCount();
+    int p = system.outputCount();
+    DMatrixRMaj a = new DMatrixRMaj(n + nf, n + nf);
+    CommonOps_DDRM.insert(system.a(), a, 0, 0);
+    DMatrixRMaj bg = CommonOps_DDRM.extract(system.b(), 0, n, 1, 2);
+    DMatrixRMaj bgcf = new DMatrixRMaj(n, nf);
+    CommonOps_DDRM.mult(bg, f.c(), bgcf);
+    CommonOps_DDRM.insert(bgcf, a, 0, n);
+    CommonOps_DDRM.insert(f.a(), a, n, n);
+    DMatrixRMaj b = new DMatrixRMaj(n + nf, 2);
+    CommonOps_DDRM.insert(CommonOps_DDRM.extract(system.b(), 0, n, 0, 1), b, 0, 0);
+    CommonOps_DDRM.insert(f.b(), b, n, 1);
+    DMatrixRMaj c = new DMatrixRMaj(p, n + nf);
+    CommonOps_DDRM.insert(system.c(), c, 0, 0);
+    DMatrixRMaj dg = CommonOps_DDRM.extract(system.d(), 0, p, 1, 2);
+    DMatrixRMaj dgcf = new DMatrixRMaj(p, nf);
+    CommonOps_DDRM.mult(dg, f.c(), dgcf);
+    CommonOps_DDRM.insert(dgcf, c, 0, n);
+    DMatrixRMaj d = new DMatrixRMaj(p, 2);
+    CommonOps_DDRM.insert(CommonOps_DDRM.extract(system.d(), 0, p, 0, 1), d, 0, 0);
+    List<String> states = new ArrayList<>(system.stateNames());
+    for (int i = 0; i < nf; i++) {
+      states.add("turbulence_x" + (i + 1));
+    }
+    return new StateSpace(a, b, c, d, List.of(PILOT_INPUT, "white_noise"), system.outputNames(), states);
+  }
+
+  /** @return the model with its actuator marked for rate and position limits */
+  public LimitedActuatorSystem limited() {
+    return new LimitedActuatorSystem(system, actuatorPosition, actuatorRate, actuatorOmega, actuatorDamping,
+        commandOutput, system.outputNames().indexOf(ELEVATOR_RATE));
+  }
+
   /** @return output name of a modal coordinate (unit: that of the mode table's normalisation) */
   public static String modalOutput(String mode) {
     return mode + "_modal_coordinate";
   }
 
-  /** @return output name of a sensor, with its unit */
+  /** @return output name of a sensor, with its unit: {@code sensor_NAME_UNIT} */
   public static String sensorOutput(SensorSpec s) {
     return switch (s.kind()) {
-      case PITCH_RATE_GYRO -> s.name() + "_rad_per_s";
-      case NORMAL_ACCELEROMETER -> s.name() + "_g";
-      case ANGLE_OF_ATTACK_VANE -> s.name() + "_rad";
+      case PITCH_RATE_GYRO -> "sensor_" + s.name() + "_rad_per_s";
+      case NORMAL_ACCELEROMETER -> "sensor_" + s.name() + "_g";
+      case ANGLE_OF_ATTACK_VANE -> "sensor_" + s.name() + "_rad";
     };
   }
 
@@ -345,7 +396,7 @@ public final class AircraftSimulationModel {
           CommonOps_DDRM.extract(out, 0, out.numRows, 0, n), CommonOps_DDRM.extract(out, 0, out.numRows, n, n + 2),
           List.of(PILOT_INPUT, GUST_INPUT), names, states);
       return new AircraftSimulationModel(sys, actOffset, nq == 2 ? actOffset + 1 : -1, w, zeta, commandIndex,
-          modes);
+          modes, v);
     }
 
     private DMatrixRMaj unit(int column) {

@@ -54,8 +54,8 @@ public record ExactDiscretization(double periodS, DMatrixRMaj stateTransition, D
     CommonOps_DDRM.insert(b, big, 0, n);
     CommonOps_DDRM.scale(periodS, big);
     DMatrixRMaj e = MatrixExponential.of(big);
-    return new ExactDiscretization(periodS, CommonOps_DDRM.extract(e, 0, n, 0, n),
-        CommonOps_DDRM.extract(e, 0, n, n, n + m));
+    DMatrixRMaj bd = m == 0 ? new DMatrixRMaj(n, 0) : CommonOps_DDRM.extract(e, 0, n, n, n + m);
+    return new ExactDiscretization(periodS, CommonOps_DDRM.extract(e, 0, n, 0, n), bd);
   }
 
   /**

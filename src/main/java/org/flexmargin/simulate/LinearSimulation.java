@@ -70,16 +70,7 @@ public final class LinearSimulation {
       double tk = k * t;
       times[k] = tk;
       sample(inputs, tk, u);
-      for (int i = 0; i < p; i++) {
-        double s = 0;
-        for (int j = 0; j < n; j++) {
-          s += c[i * n + j] * x[j];
-        }
-        for (int j = 0; j < m; j++) {
-          s += d[i * m + j] * u[j];
-        }
-        y[i][k] = s;
-      }
+      outputs(c, d, x, u, y, k);
       if (k == steps) {
         break;
       }
@@ -104,7 +95,24 @@ public final class LinearSimulation {
     return new TimeHistory(times, system.outputNames(), y);
   }
 
-  private static void sample(List<DoubleUnaryOperator> inputs, double timeS, double[] u) {
+  /** y[i][k] = (C x + D u)_i for every output i; C and D row-major (p x n, p x m). */
+  static void outputs(double[] c, double[] d, double[] x, double[] u, double[][] y, int k) {
+    int n = x.length;
+    int m = u.length;
+    for (int i = 0; i < y.length; i++) {
+      double s = 0;
+      for (int j = 0; j < n; j++) {
+        s += c[i * n + j] * x[j];
+      }
+      for (int j = 0; j < m; j++) {
+        s += d[i * m + j] * u[j];
+      }
+      y[i][k] = s;
+    }
+  }
+
+  /** u[j] = inputs[j](t), null inputs zero. */
+  static void sample(List<DoubleUnaryOperator> inputs, double timeS, double[] u) {
     for (int j = 0; j < u.length; j++) {
       DoubleUnaryOperator f = inputs.get(j);
       u[j] = f == null ? 0.0 : f.applyAsDouble(timeS);

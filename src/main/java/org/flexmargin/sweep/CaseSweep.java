@@ -117,16 +117,17 @@ public final class CaseSweep {
     progress.stageDone(c.name(), "divergence and flutter");
     ServoResult servo = null;
     if (analysisCase.loop() != null) {
-      List<ServoPoint> margins = ServoMargins.withDefaults().along(model, c, analysisCase.loop(), path, flutter);
-      progress.stageDone(c.name(), "loop margins");
       ClosedLoopResult closed = new ClosedLoopSweep().analyse(model, c, analysisCase.loop(), path, flutter,
           analysisCase.options());
       progress.stageDone(c.name(), "closed loop");
+      List<ServoPoint> margins = ServoMargins.withDefaults().along(model, c, analysisCase.loop(), path, flutter,
+          closed);
+      progress.stageDone(c.name(), "loop margins");
       servo = new ServoResult(margins, closed);
     }
     ClearanceResult clearance = null;
     if (analysisCase.requirements() != null) {
-      clearance = new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, servo,
+      clearance = new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, divergence, servo,
           analysisCase.requirements(), Math.max(0.05, analysisCase.options().onsetSpeedToleranceMps()));
       progress.stageDone(c.name(), "clearance");
     }

@@ -1,7 +1,9 @@
 package org.flexmargin.sweep;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
@@ -9,6 +11,7 @@ import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.flexmargin.ase.ServoLoop;
 import org.flexmargin.atmosphere.FlightCondition;
+import org.flexmargin.clearance.CheckKey;
 import org.flexmargin.clearance.CheckKind;
 import org.flexmargin.clearance.ClearanceCheck;
 import org.flexmargin.clearance.FlutterClearance;
@@ -18,8 +21,10 @@ import org.flexmargin.clearance.ModeFrequency;
 import org.flexmargin.clearance.OnsetSearch;
 import org.flexmargin.clearance.PointAssessment;
 import org.flexmargin.clearance.PointAssessor;
+import org.flexmargin.clearance.RankedFinding;
 import org.flexmargin.flutter.BranchCurve;
 import org.flexmargin.flutter.CrossingKind;
+import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
 import org.flexmargin.loop.ClosedLoopStability;
@@ -44,14 +49,15 @@ public final class ClearanceSweep {
    * @param loop loop, or null (flutter rule only)
    * @param path sweep path
    * @param flutter open-loop flutter solution
+   * @param divergence static divergence (rigid body restrained)
    * @param servo loop results, or null
    * @param requirements the table
    * @param speedToleranceMps onset refinement tolerance (m/s EAS)
    * @return the verdict
    */
   public ClearanceResult assess(ConfigurationModel model, Configuration configuration, LoopSpec loop,
-      PlannedPath path, FlutterSolution flutter, ServoResult servo, ClearanceRequirements requirements,
-      double speedToleranceMps) {
+      PlannedPath path, FlutterSolution flutter, DivergenceResult divergence, ServoResult servo,
+      ClearanceRequirements requirements, double speedToleranceMps) {
     List<PointAssessment> points = new ArrayList<>();
     List<MarginOnset> onsets = new ArrayList<>();
     if (servo != null) {
@@ -78,9 +84,54 @@ public final class ClearanceSweep {
     if (servo != null) {
       searches.add(OnsetSearch.closedLoop(firstOnset(servo.closedLoop().crossings()), top));
     }
-    FlutterClearance fc = FlutterClearanceRule.assess(requirements, searches,
-        highestG(flutter, servo, requirements.limitSpeedEasMps()));
-    return new ClearanceResult(points, onsets, fc, requirements.source());
+    DampingPeak damping = highestG(flutter, servo, requirements);
+    FlutterClearance fc = FlutterClearanceRule.assess(requirements, searches, damping.highestG(),
+        divergence.found() ? OptionalDouble.of(divergence.speedEasMps()) : OptionalDouble.empty());
+    return new ClearanceResult(points, onsets, fc, requirements.source(),
+        rank(points, onsets, fc, damping, requirements.limitSpeedEasMps()));
+  }
+
+  /**
+   * Every requirement once, with the speed that ranks it: point checks at their first failing
+   * point (the refined onset when one lies in the bracket) or where they are tightest; flutter
+   * and divergence checks at their onset speed; the damping check at the first speed where a root
+   * falls below the minimum damping (or where damping is least).
+   */
+  private static List<RankedFinding> rank(List<PointAssessment> points, List<MarginOnset> onsets,
+      FlutterClearance fc, DampingPeak damping, double limitEas) {
+    Map<CheckKey, RankedFinding> byKey = new LinkedHashMap<>();
+    for (int p = 0; p < points.size(); p++) {
+      PointAssessment pa = points.get(p);
+      double lower = p == 0 ? pa.speedEasMps() : points.get(p - 1).speedEasMps();
+      for (ClearanceCheck c : pa.checks()) {
+        RankedFinding before = byKey.get(c.key());
+        if (before != null && (!before.check().passed() || c.passed()
+            && before.check().normalisedExcess() <= c.normalisedExcess())) {
+          continue;
+        }
+        double speed = c.passed() ? pa.speedEasMps() : onsetSpeed(onsets, c, lower, pa.speedEasMps());
+        byKey.put(c.key(), RankedFinding.of(c, speed, limitEas));
+      }
+    }
+    for (ClearanceCheck c : fc.checks()) {
+      double speed = switch (c.kind()) {
+        case MINIMUM_DAMPING -> c.passed() ? damping.highestAtEasMps() : damping.firstBelowMinimumEasMps();
+        default -> c.achievedValue();
+      };
+      byKey.put(c.key(), RankedFinding.of(c, speed, limitEas));
+    }
+    return new ArrayList<>(byKey.values());
+  }
+
+  /** The refined onset of a check's requirement within (lower, upper], else upper. */
+  private static double onsetSpeed(List<MarginOnset> onsets, ClearanceCheck c, double lower, double upper) {
+    for (MarginOnset m : onsets) {
+      double v = m.condition().speedEasMps();
+      if (m.key().equals(c.key()) && v >= lower && v <= upper) {
+        return v;
+      }
+    }
+    return upper;
   }
 
   private static OptionalDouble firstOnset(List<FlutterCrossing> crossings) {
@@ -88,15 +139,29 @@ public final class ClearanceSweep {
         .mapToDouble(c -> c.condition().speedEasMps()).min();
   }
 
-  /** Highest g of any open-loop root, and of any closed-loop oscillatory root, up to V_L. */
-  private static double highestG(FlutterSolution flutter, ServoResult servo, double limitEas) {
-    double g = -1.0;
+  /**
+   * The least damping up to V_L: highest g (V-g convention) of any open-loop root and any
+   * closed-loop oscillatory root, the speed where it occurs, and the lowest speed at which any
+   * root's g exceeds -minimum damping (NaN if none).
+   */
+  private record DampingPeak(double highestG, double highestAtEasMps, double firstBelowMinimumEasMps) {
+    DampingPeak add(double g, double eas, double limitG) {
+      double first = g > limitG && !(firstBelowMinimumEasMps <= eas) ? eas : firstBelowMinimumEasMps;
+      return g > highestG ? new DampingPeak(g, eas, first) : new DampingPeak(highestG, highestAtEasMps, first);
+    }
+  }
+
+  private static DampingPeak highestG(FlutterSolution flutter, ServoResult servo, ClearanceRequirements req) {
+    double limitEas = req.limitSpeedEasMps();
+    double limitG = -req.minimumDampingG();
+    DampingPeak d = new DampingPeak(-1.0, flutter.branches().isEmpty() ? 0.0
+        : flutter.branches().get(0).speedEasMps()[0], Double.NaN);
     for (BranchCurve b : flutter.branches()) {
       double[] eas = b.speedEasMps();
       double[] gg = b.dampingG();
       for (int i = 0; i < b.size(); i++) {
         if (b.converged()[i] && eas[i] <= limitEas && Double.isFinite(gg[i])) {
-          g = Math.max(g, gg[i]);
+          d = d.add(gg[i], eas[i], limitG);
         }
       }
     }
@@ -105,13 +170,13 @@ public final class ClearanceSweep {
         if (p.condition().speedEasMps() <= limitEas) {
           for (ClosedLoopRoot r : p.roots()) {
             if (r.imagRadPerS() > 1e-6 && Double.isFinite(r.dampingG())) {
-              g = Math.max(g, r.dampingG());
+              d = d.add(r.dampingG(), p.condition().speedEasMps(), limitG);
             }
           }
         }
       }
     }
-    return g;
+    return d;
   }
 
   /** Structural modes and their current (p-k) frequencies at grid point p. */

@@ -8,11 +8,15 @@ import org.flexmargin.flutter.FlutterCrossing;
  *
  * @param points eigenvalues at every grid point
  * @param crossings refined damping crossings of closed-loop roots (g = 0 and the damping limit),
- *     labelled with the open-loop root they are nearest to
+ *     labelled with the open-loop root they are nearest to; each g = 0 crossing is the onset on
+ *     the exact frequency-domain loop when that refinement succeeded (see {@code refinements}),
+ *     damping-limit crossings are those of the rational model
  * @param fitDescription the rational approximation used (lags, range, worst element error)
  * @param eigenSolves closed-loop eigen-decompositions performed
  * @param warnings numerical remarks (fit quality, unmatched roots)
  * @param assumptions modelling assumptions in words
+ * @param refinements every g = 0 crossing of the rational model with its exact-loop refinement
+ *     and the difference between the two, in crossing order
  */
 public record ClosedLoopResult(
     List<ClosedLoopPoint> points,
@@ -20,12 +24,35 @@ public record ClosedLoopResult(
     String fitDescription,
     int eigenSolves,
     List<String> warnings,
-    List<String> assumptions) {
+    List<String> assumptions,
+    List<OnsetRefinement> refinements) {
   /** Copies. */
   public ClosedLoopResult {
+    refinements = List.copyOf(refinements);
     points = List.copyOf(points);
     crossings = List.copyOf(crossings);
     warnings = List.copyOf(warnings);
     assumptions = List.copyOf(assumptions);
+  }
+
+  /**
+   * @param crossing one of {@link #crossings()}
+   * @return which model located it, in words: the exact loop with the rational onset and the
+   *     difference beside it, or the closed-loop state space
+   */
+  public String routeOf(FlutterCrossing crossing) {
+    for (OnsetRefinement r : refinements) {
+      if (r.exact().isPresent() && r.exact().get().equals(crossing)) {
+        return String.format(java.util.Locale.ROOT, "exact frequency-domain loop; rational model %.2f m/s EAS, "
+            + "difference %+.2f m/s", r.rational().condition().speedEasMps(), r.speedDifferenceEasMps());
+      }
+    }
+    return "closed-loop state space";
+  }
+
+  /** Without exact-loop refinements (the crossings are those of the rational model). */
+  public ClosedLoopResult(List<ClosedLoopPoint> points, List<FlutterCrossing> crossings, String fitDescription,
+      int eigenSolves, List<String> warnings, List<String> assumptions) {
+    this(points, crossings, fitDescription, eigenSolves, warnings, assumptions, List.of());
   }
 }

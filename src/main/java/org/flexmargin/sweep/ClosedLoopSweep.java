@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.flexmargin.aero.RationalFit;
@@ -15,6 +16,7 @@ import org.flexmargin.flutter.BranchCurve;
 import org.flexmargin.flutter.CrossingKind;
 import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.loop.CriticalPointSolver;
 import org.flexmargin.loop.Eigenvalues;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.Configuration;
@@ -34,7 +36,13 @@ import org.flexmargin.numerics.GreedyAssignment;
  * parameter, re-solving at intermediate conditions and taking the root nearest the linear
  * interpolation of the bracket. Roots are labelled with the open-loop root (p-k structural roots,
  * rigid short period) nearest them, else "rigid body + loop" below half the first elastic
- * frequency and "control loop" above. Stateless and thread-safe.
+ * frequency and "control loop" above.
+ *
+ * <p>Every g = 0 crossing is then refined on the exact frequency-domain loop (exact
+ * aerodynamics, delays and hold): the speed and frequency where the broken loop L(j w) passes
+ * through -1, by Newton's method ({@link CriticalPointSolver}) started at the rational onset. The
+ * exact onset replaces the rational one in {@link ClosedLoopResult#crossings()}; both and their
+ * difference are kept in {@link ClosedLoopResult#refinements()}. Stateless and thread-safe.
  */
 public final class ClosedLoopSweep {
   /** Lag roots of the rational approximation. */
@@ -42,6 +50,13 @@ public final class ClosedLoopSweep {
 
   private static final int BRENT_MAX_EVALUATIONS = 60;
   private static final double LABEL_DISTANCE = 0.3;
+  /** Grid intervals on each side of a rational onset's bracket searched for the exact onset. */
+  private static final int EXACT_SEARCH_INTERVALS = 2;
+  /** Newton tolerance on the path parameter of an exact onset (about 1e-7 m/s on the demo grid). */
+  private static final double EXACT_PARAMETER_TOLERANCE = 1e-7;
+  private static final int EXACT_MAX_ITERATIONS = 40;
+  /** Largest relative frequency difference between a rational onset and its exact refinement. */
+  private static final double EXACT_FREQUENCY_WINDOW = 0.2;
 
   /**
    * @param model configuration model
@@ -121,14 +136,65 @@ public final class ClosedLoopSweep {
       }
     }
     crossings.sort(Comparator.comparingDouble(FlutterCrossing::pathParameter));
+    List<OnsetRefinement> refinements = new ArrayList<>();
+    List<FlutterCrossing> onsets = new ArrayList<>();
+    for (FlutterCrossing x : crossings) {
+      if (x.thresholdG() != 0.0) {
+        onsets.add(x);
+        continue;
+      }
+      OnsetRefinement r = onExactLoop(model, configuration, loop, path, x);
+      refinements.add(r);
+      onsets.add(r.onset());
+      if (!r.confirmed()) {
+        warnings.add(String.format(Locale.ROOT, "closed-loop %s of %s at %.2f m/s EAS (rational model) not "
+            + "confirmed on the exact loop: %s", x.kind().name().toLowerCase(Locale.ROOT).replace('_', ' '),
+            x.branchName(), x.condition().speedEasMps(), r.remark()));
+      }
+    }
+    onsets.sort(Comparator.comparingDouble(FlutterCrossing::pathParameter));
     String fitText = String.format(Locale.ROOT,
         "Roger approximation, %d lag roots, k from 0 to %.3f, worst element error %.2f %%",
         fit.lagCount(), kMax, 100 * fit.error().worstRelativeError());
     ServoLoop first = ServoMargins.loopAt(model, configuration, loop, path.at(0));
     List<String> assumptions = new ArrayList<>(first.plant().assumptions());
-    assumptions.add("closed-loop eigenvalues use the rational approximation of the elastic forces and Pade "
-        + "approximations (order " + loop.padeOrder() + ") of the delay and the zero-order hold");
-    return new ClosedLoopResult(points, crossings, fitText, solves[0], warnings, assumptions);
+    assumptions.add("closed-loop eigenvalues use the rational approximation of the elastic forces, the Pade "
+        + "approximation (order " + loop.padeOrder() + ") of the delay and the rational zero-order hold of the "
+        + "same order (keeping its sinc droop); each g = 0 onset is then refined on the exact frequency-domain "
+        + "loop (where L(jw) passes through -1) and reported beside the rational one");
+    return new ClosedLoopResult(points, onsets, fitText, solves[0], warnings, assumptions, refinements);
+  }
+
+  /**
+   * Refines a g = 0 crossing of the rational model on the exact loop: Newton on the path parameter
+   * and the frequency for 1 + L(j w) = 0, started at the rational onset and kept within two grid
+   * intervals of it.
+   */
+  static OnsetRefinement onExactLoop(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      PlannedPath path, FlutterCrossing x) {
+    double w0 = 2 * Math.PI * x.frequencyHz();
+    if (x.frequencyHz() < ServoMargins.MIN_FREQUENCY_HZ) {
+      return new OnsetRefinement(x, Optional.empty(), Double.NaN, 0,
+          "a real closed-loop root (no oscillation): the frequency-domain loop has no crossing of -1 to refine");
+    }
+    double t0 = x.pathParameter();
+    int base = (int) Math.floor(t0);
+    double lo = Math.max(0, base - EXACT_SEARCH_INTERVALS);
+    double hi = Math.min(path.gridPoints() - 1, base + 1 + EXACT_SEARCH_INTERVALS);
+    CriticalPointSolver.Solution s = CriticalPointSolver.solve(
+        t -> ServoMargins.loopAt(model, configuration, loop, path.at(t)).brokenLoop(), t0, w0, lo, hi,
+        EXACT_PARAMETER_TOLERANCE, EXACT_MAX_ITERATIONS);
+    if (!s.converged()) {
+      return new OnsetRefinement(x, Optional.empty(), s.residual(), s.iterations(), s.remark());
+    }
+    if (Math.abs(s.omegaRadPerS() - w0) > EXACT_FREQUENCY_WINDOW * w0) {
+      return new OnsetRefinement(x, Optional.empty(), s.residual(), s.iterations(), String.format(Locale.ROOT,
+          "the nearest crossing of -1 by the exact loop is at %.3f Hz, not near the root's %.3f Hz",
+          s.omegaRadPerS() / (2 * Math.PI), x.frequencyHz()));
+    }
+    FlutterCrossing exact = new FlutterCrossing(x.branch(), x.branchName(), x.kind(), s.parameter(),
+        path.at(s.parameter()), s.omegaRadPerS() / (2 * Math.PI), 0.0, x.evaluations(), EXACT_PARAMETER_TOLERANCE);
+    return new OnsetRefinement(x, Optional.of(exact), s.residual(), s.iterations(), "");
   }
 
   private static Eigenvalues eigenvaluesAt(ConfigurationModel model, Configuration configuration, LoopSpec loop,

@@ -1,7 +1,7 @@
 package org.flexmargin.sweep;
 
 import org.flexmargin.aero.AeroSource;
-import org.flexmargin.aero.AeroSources;
+import org.flexmargin.lattice.AeroSourceFactory;
 import org.flexmargin.flutter.AeroelasticSystem;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ModeTable;
@@ -25,12 +25,12 @@ public record ConfigurationModel(ModeTable modes, AeroelasticSystem system) {
     AeroSource aero;
     if (configuration.structure() instanceof ModeTable mt) {
       table = mt;
-      aero = AeroSources.of(configuration.aero(), mt);
+      aero = AeroSourceFactory.of(configuration.aero(), mt);
     } else {
       BuiltStructure built = BuiltInStructures.build(configuration.structure());
       table = built.modes();
       StripTheorySpec strips = built.aero();
-      aero = AeroSources.of(strips, table);
+      aero = AeroSourceFactory.of(strips, table);
     }
     return new ConfigurationModel(table, new AeroelasticSystem(StructuralModel.fromModeTable(table), aero));
   }

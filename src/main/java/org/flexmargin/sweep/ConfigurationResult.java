@@ -1,6 +1,7 @@
 package org.flexmargin.sweep;
 
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.FlutterSolution;
@@ -45,6 +46,32 @@ public record ConfigurationResult(
       double divergenceTasAtSweepStartMps, FlutterSolution flutter, double elapsedSeconds) {
     this(configuration, modeNames, modeFrequenciesHz, aeroDescription, divergence, divergenceConfirmedPa,
         divergenceTasAtSweepStartMps, flutter, elapsedSeconds, null, null);
+  }
+
+  /**
+   * @return the lowest open-loop (controls fixed) flutter onset, or a root already unstable at the
+   *     first sweep point
+   */
+  public Optional<Instability> lowestOpenLoopFlutter() {
+    return Instabilities.openLoop(this);
+  }
+
+  /** @return the lowest closed-loop instability; empty without a loop or when none was found */
+  public Optional<Instability> lowestClosedLoopInstability() {
+    return Instabilities.closedLoop(this);
+  }
+
+  /** @return static divergence (rigid body restrained) as an instability, if found */
+  public Optional<Instability> divergenceInstability() {
+    return Instabilities.divergence(this);
+  }
+
+  /**
+   * @return the lowest airspeed at which the aircraft is unstable in any way found: open-loop
+   *     flutter, closed-loop instability or divergence
+   */
+  public Optional<Instability> lowestInstability() {
+    return Instabilities.lowest(this);
   }
 
   @Override

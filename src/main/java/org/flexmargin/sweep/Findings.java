@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import org.flexmargin.atmosphere.FlightCondition;
+import org.flexmargin.clearance.CheckKind;
 import org.flexmargin.flutter.BranchCurve;
 import org.flexmargin.flutter.CrossingKind;
 import org.flexmargin.flutter.DivergenceResult;
@@ -14,6 +15,12 @@ import org.flexmargin.model.FlutterMethodKind;
 /** Builds the findings table of a sweep: per configuration, every finding in order of airspeed. */
 public final class Findings {
   private Findings() {}
+
+  /** Finding name of an open-loop root already unstable at the first sweep point. */
+  public static final String OPEN_LOOP_UNSTABLE_AT_START = "open-loop unstable at sweep start";
+
+  /** Finding name of a closed-loop root already unstable at the first sweep point. */
+  public static final String CLOSED_LOOP_UNSTABLE_AT_START = "closed loop unstable at start";
 
   /**
    * @param result sweep result
@@ -55,8 +62,9 @@ public final class Findings {
       if (c.clearance() != null) {
         for (MarginOnset m : c.clearance().marginOnsets()) {
           FlightCondition fc = m.condition();
-          String subject = m.key().subject().isEmpty() ? "closed loop" : m.key().subject().replace('_', ' ');
-          out.add(new Finding(c.configuration(), m.key().kind().key().replace('_', ' ') + " lost", subject,
+          String subject = m.key().subject().isEmpty() ? "closed loop" : m.key().subject().replace('_', ' ')
+              + (m.key().kind() == CheckKind.STRUCTURAL_MODE ? "" : " band");
+          out.add(new Finding(c.configuration(), requirementOnset(m.key().kind()), subject,
               fc.speedEasMps(), fc.speedTasMps(), fc.mach(), fc.altitudeM(), 0.0,
               m.description() + (m.refined() ? "" : " (not refined: the check vanished between grid points)")));
         }
@@ -74,7 +82,7 @@ public final class Findings {
     for (ClosedLoopRoot root : first.roots()) {
       if (root.realPerS() > 0) {
         FlightCondition fc = first.condition();
-        out.add(new Finding(c.configuration(), "closed loop unstable at start", root.label(), fc.speedEasMps(),
+        out.add(new Finding(c.configuration(), CLOSED_LOOP_UNSTABLE_AT_START, root.label(), fc.speedEasMps(),
             fc.speedTasMps(), fc.mach(), fc.altitudeM(), root.frequencyHz(),
             String.format(Locale.ROOT, "root %.3f %+.3fi 1/s at the first sweep point", root.realPerS(),
                 root.imagRadPerS())));
@@ -84,7 +92,7 @@ public final class Findings {
       FlightCondition fc = x.condition();
       out.add(new Finding(c.configuration(), "closed-loop " + label(x.kind()), x.branchName(), fc.speedEasMps(),
           fc.speedTasMps(), fc.mach(), fc.altitudeM(), x.frequencyHz(),
-          String.format(Locale.ROOT, "g = %.3f crossed (closed-loop state space)", x.thresholdG())));
+          String.format(Locale.ROOT, "g = %.3f crossed (%s)", x.thresholdG(), r.routeOf(x))));
     }
   }
 
@@ -95,13 +103,55 @@ public final class Findings {
       if (b.size() == 0 || !b.converged()[0]) {
         continue;
       }
-      String what = g[0] > 0 ? "unstable at sweep start" : g[0] > -limitG ? "damping below limit at start" : null;
+      String what = g[0] > 0 ? OPEN_LOOP_UNSTABLE_AT_START : g[0] > -limitG ? "damping below limit at start" : null;
       if (what != null) {
         out.add(new Finding(c.configuration(), what, b.name(), start.speedEasMps(), start.speedTasMps(),
             start.mach(), start.altitudeM(), b.frequencyHz()[0],
             String.format(Locale.ROOT, "g = %.4f at the first sweep point", g[0])));
       }
     }
+  }
+
+  /**
+   * The finding name of the speed at which a requirement is first violated: it says which
+   * requirement is no longer met, never that something was lost from the analysis.
+   *
+   * @param kind the requirement
+   * @return e.g. "structural mode not stabilised"
+   */
+  public static String requirementOnset(CheckKind kind) {
+    return switch (kind) {
+      case GAIN_INCREASE_MARGIN -> "gain-increase margin too small";
+      case GAIN_REDUCTION_MARGIN -> "gain-reduction margin too small";
+      case PHASE_MARGIN -> "phase margin too small";
+      case STRUCTURAL_MODE -> "structural mode not stabilised";
+      case CLOSED_LOOP_STABILITY -> "closed loop unstable";
+      case FLUTTER_SPEED -> "flutter speed too low";
+      case DIVERGENCE_SPEED -> "divergence speed too low";
+      case MINIMUM_DAMPING -> "damping too low";
+    };
+  }
+
+  /**
+   * @param f a finding
+   * @return whether it marks the speed at which a requirement is first violated
+   */
+  public static boolean isRequirementOnset(Finding f) {
+    for (CheckKind k : CheckKind.values()) {
+      if (f.what().equals(requirementOnset(k))) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /**
+   * @param f a finding
+   * @return whether it is a closed-loop instability (an onset, or unstable from the first point)
+   */
+  public static boolean isClosedLoopInstability(Finding f) {
+    return f.what().equals("closed-loop " + label(CrossingKind.FLUTTER_ONSET))
+        || f.what().equals(CLOSED_LOOP_UNSTABLE_AT_START);
   }
 
   /** @return plain words for a crossing kind */

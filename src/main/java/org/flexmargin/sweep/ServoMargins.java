@@ -21,9 +21,12 @@ import org.flexmargin.model.NotchFilterSpec;
 
 /**
  * Broken-loop margins of a configuration at flight conditions along the sweep path, from the
- * exact frequency-domain loop ({@link ServoLoop#brokenLoop()}). The open-loop p-k roots at each
- * grid point seed the frequency grid, so that no lightly damped structural peak is stepped over.
- * Stateless and thread-safe.
+ * exact frequency-domain loop ({@link ServoLoop#brokenLoop()}). The frequency grid is seeded, so
+ * that no lightly damped peak is stepped over, at every structural mode's current frequency (the
+ * open-loop p-k root; for a mode whose branch was lost at this point, its frequency at the nearest
+ * point where it converged), and at every lightly damped closed-loop root at the point when the
+ * closed-loop eigenvalues are known. The loop's pure delay keeps the grid fine enough to follow
+ * every phase turn ({@link org.flexmargin.loop.LoopMargins}). Stateless and thread-safe.
  */
 public final class ServoMargins {
   private final LoopMargins margins;
@@ -66,6 +69,35 @@ public final class ServoMargins {
     return margins.analyse(servo.brokenLoop(), 2 * Math.PI * MIN_FREQUENCY_HZ, 2 * Math.PI * maxFrequencyHz, seeds);
   }
 
+  /** Damping ratio given to the seed of a mode whose branch was lost (spacing of its grid points). */
+  static final double LOST_MODE_SEED_DAMPING = 0.02;
+
+  /** @return the converged point of the branch nearest p (p itself if converged), or -1 if none */
+  private static int nearestConverged(BranchCurve b, int p) {
+    boolean[] ok = b.converged();
+    for (int d = 0; d < ok.length; d++) {
+      if (p - d >= 0 && p - d < ok.length && ok[p - d]) {
+        return p - d;
+      }
+      if (p + d < ok.length && ok[p + d]) {
+        return p + d;
+      }
+    }
+    return -1;
+  }
+
+  /** Oscillatory closed-loop roots at a point (upper half plane) as seed poles. */
+  static Eigenvalues closedLoopSeeds(ClosedLoopPoint point) {
+    List<ClosedLoopRoot> roots = point.roots().stream().filter(r -> r.imagRadPerS() > 0).toList();
+    double[] re = new double[roots.size()];
+    double[] im = new double[roots.size()];
+    for (int i = 0; i < roots.size(); i++) {
+      re[i] = roots.get(i).realPerS();
+      im[i] = roots.get(i).imagRadPerS();
+    }
+    return new Eigenvalues(re, im);
+  }
+
   /** Lowest analysed frequency (Hz). */
   public static final double MIN_FREQUENCY_HZ = 0.01;
 
@@ -81,12 +113,29 @@ public final class ServoMargins {
    */
   public List<ServoPoint> along(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       PlannedPath path, FlutterSolution openLoop) {
+    return along(model, configuration, loop, path, openLoop, null);
+  }
+
+  /**
+   * Margins at every grid point, the grid also seeded at the closed-loop roots.
+   *
+   * @param model configuration model
+   * @param configuration configuration
+   * @param loop loop
+   * @param path sweep path
+   * @param openLoop open-loop p-k solution along the same path (for grid seeds)
+   * @param closedLoop closed-loop eigenvalues on the same path (grid seeds), or null
+   * @return one point per grid point
+   */
+  public List<ServoPoint> along(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      PlannedPath path, FlutterSolution openLoop, ClosedLoopResult closedLoop) {
     double maxHz = bandTopHz(model);
     List<ServoPoint> points = new ArrayList<>();
     for (int p = 0; p < path.gridPoints(); p++) {
       FlightCondition fc = path.at(p);
       ServoLoop servo = loopAt(model, configuration, loop, fc);
-      Eigenvalues seeds = seeds(openLoop, p);
+      Eigenvalues seeds = closedLoop == null ? seeds(openLoop, p)
+          : seeds(openLoop, p).concat(closedLoopSeeds(closedLoop.points().get(p)));
       LoopMarginResult main = at(servo, seeds, maxHz);
       List<LoopMarginResult> perPath = new ArrayList<>();
       for (int k = 0; k < loop.paths().size(); k++) {
@@ -145,15 +194,21 @@ public final class ServoMargins {
     return Math.max(50.0, 1.5 * fmax);
   }
 
-  /** Open-loop p-k roots at grid point p as seed poles (s = -zeta w + i w sqrt(1 - zeta^2)). */
+  /**
+   * Open-loop p-k roots at grid point p as seed poles (s = -zeta w + i w sqrt(1 - zeta^2)); a mode
+   * whose branch did not converge at p is seeded at its frequency at the nearest converged point,
+   * with damping ratio {@value #LOST_MODE_SEED_DAMPING} (grid points spread over +-16 % around it).
+   */
   static Eigenvalues seeds(FlutterSolution openLoop, int p) {
     List<double[]> roots = new ArrayList<>();
     for (BranchCurve b : openLoop.branches()) {
-      if (p < b.size() && b.converged()[p]) {
-        double w = 2 * Math.PI * b.frequencyHz()[p];
-        double z = Math.max(-0.99, Math.min(0.99, b.dampingRatio()[p]));
-        roots.add(new double[] {-z * w, w * Math.sqrt(1 - z * z)});
+      int at = nearestConverged(b, p);
+      if (at < 0) {
+        continue;
       }
+      double w = 2 * Math.PI * b.frequencyHz()[at];
+      double z = at == p ? Math.max(-0.99, Math.min(0.99, b.dampingRatio()[p])) : LOST_MODE_SEED_DAMPING;
+      roots.add(new double[] {-z * w, w * Math.sqrt(1 - z * z)});
     }
     double[] re = new double[roots.size()];
     double[] im = new double[roots.size()];

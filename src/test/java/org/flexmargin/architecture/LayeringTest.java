@@ -70,6 +70,16 @@ class LayeringTest {
   }
 
   @Test
+  void latticeIsBesideAero() {
+    onlyDependsOn("lattice", "model", "numerics", "aero", "spline");
+  }
+
+  @Test
+  void splineDependsOnNothingOfOurs() {
+    onlyDependsOn("spline");
+  }
+
+  @Test
   void flutterDependsOnlyOnLowerLayers() {
     onlyDependsOn("flutter", "model", "numerics", "aero", "structure", "atmosphere");
   }
@@ -91,7 +101,7 @@ class LayeringTest {
 
   @Test
   void sweepDependsOnlyOnLowerLayers() {
-    onlyDependsOn("sweep", "model", "numerics", "aero", "structure", "atmosphere", "flutter", "loop", "ase",
+    onlyDependsOn("sweep", "model", "numerics", "aero", "lattice", "structure", "atmosphere", "flutter", "loop", "ase",
         "clearance");
   }
 
@@ -114,7 +124,7 @@ class LayeringTest {
 
   @Test
   void reportReadsOnlyResults() {
-    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase", "clearance");
+    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase", "clearance", "simulate");
   }
 
   @Test

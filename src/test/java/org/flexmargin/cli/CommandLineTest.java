@@ -7,8 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.stream.Stream;
@@ -18,18 +16,13 @@ import org.junit.jupiter.api.io.TempDir;
 /** The command line as a user meets it: exit codes, messages, files written or not. */
 class CommandLineTest {
 
-  private record Run(int code, String out, String err) {}
-
-  private static Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = FlexMargin.execute(args, new PrintWriter(out), new PrintWriter(err));
-    return new Run(code, out.toString(), err.toString());
+  private static CliRun run(String... args) {
+    return CliRun.of(args);
   }
 
   @Test
   void checkSummarisesAValidCase() {
-    Run r = run("check", "mode-tables/validation/goland-wing.json");
+    CliRun r = run("check", "mode-tables/validation/goland-wing.json");
     assertEquals(0, r.code(), r.err());
     assertTrue(r.out().contains("configuration goland: 8 elastic modes"), r.out());
     assertTrue(r.out().contains("sha256"), r.out());
@@ -39,7 +32,7 @@ class CommandLineTest {
   @Test
   void badInputGivesExitTwoAClearMessageAndNoStackTrace(@TempDir Path tmp) {
     Path out = tmp.resolve("report");
-    Run r = run("sweep", "src/test/resources/io/bad-station.json", "--out", out.toString());
+    CliRun r = run("sweep", "src/test/resources/io/bad-station.json", "--out", out.toString());
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code());
     assertTrue(r.err().contains("bad input"), r.err());
     assertTrue(r.err().contains("bad-station.json:13: configurations[0].aero.strip_theory.strips[1].station"), r.err());
@@ -49,7 +42,7 @@ class CommandLineTest {
 
   @Test
   void debugShowsTheStackTrace() {
-    Run r = run("check", "src/test/resources/io/bad-malformed.json", "--debug");
+    CliRun r = run("check", "src/test/resources/io/bad-malformed.json", "--debug");
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code());
     assertTrue(r.err().contains("\tat "), r.err());
   }
@@ -63,7 +56,7 @@ class CommandLineTest {
   @Test
   void sweepWritesResultsWhoseFindingsMatchTheTable(@TempDir Path tmp) throws IOException {
     Path out = tmp.resolve("lpw");
-    Run r = run("sweep", "mode-tables/validation/typical-section-lpw.json", "--out", out.toString(), "--threads", "1");
+    CliRun r = run("sweep", "mode-tables/validation/typical-section-lpw.json", "--out", out.toString(), "--threads", "1");
     assertEquals(0, r.code(), r.err());
     assertTrue(r.out().contains("flutter onset"), r.out());
     assertTrue(r.out().contains("Analysis only"), "cautions in the summary");
@@ -92,7 +85,7 @@ class CommandLineTest {
 
   @Test
   void demoWithFailingRequirementsExitsWithThree(@TempDir Path tmp) throws IOException {
-    Run r = run("demo", "--out", tmp.resolve("demo").toString(), "--quiet");
+    CliRun r = run("demo", "--out", tmp.resolve("demo").toString(), "--quiet");
     assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, r.code(), r.err());
     JsonNode json = new ObjectMapper().readTree(tmp.resolve("demo/results.json").toFile());
     assertFalse(json.get("configurations").get(0).get("clearance").get("passed").asBoolean());
@@ -102,7 +95,7 @@ class CommandLineTest {
   @Test
   void everyCommandHasHelpWithExamples() {
     for (String cmd : new String[] {"check", "sweep", "demo", "bench"}) {
-      Run r = run(cmd, "--help");
+      CliRun r = run(cmd, "--help");
       assertEquals(0, r.code());
       assertTrue(r.out().contains("Example"), cmd + " help lacks examples");
     }

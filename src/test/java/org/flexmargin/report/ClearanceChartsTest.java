@@ -27,6 +27,7 @@ import org.flexmargin.model.NotchFilterSpec;
 import org.flexmargin.model.SpeedRegime;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
+import org.flexmargin.sweep.Findings;
 import org.flexmargin.sweep.MarginOnset;
 import org.flexmargin.sweep.SweepResult;
 import org.junit.jupiter.api.BeforeAll;
@@ -151,10 +152,10 @@ class ClearanceChartsTest {
         for (int i = 0; i < x.length; i++) {
           // the same double: both are MarginOnset.condition().speedEasMps() (m/s axis, factor 1)
           assertEquals(expected.get(i).condition().speedEasMps(), x[i], 0.0);
-          // and the same speed as the findings table's "... lost" line
+          // and the same speed as the findings table's requirement-onset line
           double speed = x[i];
           assertTrue(findings.stream().anyMatch(f -> f.configuration().equals(c.configuration())
-              && f.what().endsWith(" lost") && f.speedEasMps() == speed), "finding at " + speed);
+              && Findings.isRequirementOnset(f) && f.speedEasMps() == speed), "finding at " + speed);
           if (!e.getKey().equals("margins-structural-")) {
             // the excess is zero at a refined onset, so the achieved margin equals the required one there
             assertEquals(expected.get(i).requiredValue(), y[i], 0.0);

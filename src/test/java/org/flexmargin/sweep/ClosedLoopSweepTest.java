@@ -106,7 +106,9 @@ class ClosedLoopSweepTest {
 
   private static double onset(ConfigurationModel m, Configuration cfg, PlannedPath path) {
     FlutterSolution ol = new PkMethod().solve(m.system(), path, DEMO.options());
-    List<FlutterCrossing> x = new ClosedLoopSweep().analyse(m, cfg, DEMO.loop(), path, ol, DEMO.options()).crossings();
+    // the rational-model onset (the eigenvalue route), before its refinement on the exact loop
+    List<FlutterCrossing> x = new ClosedLoopSweep().analyse(m, cfg, DEMO.loop(), path, ol, DEMO.options())
+        .refinements().stream().map(OnsetRefinement::rational).toList();
     return x.stream().filter(c -> c.kind() == CrossingKind.FLUTTER_ONSET).findFirst().orElseThrow()
         .condition().speedEasMps();
   }

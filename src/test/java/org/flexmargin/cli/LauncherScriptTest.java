@@ -1,0 +1,86 @@
+package org.flexmargin.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code scripts/flexmargin} in a copy of the source tree's layout, with stand-ins for Maven and
+ * Java that record how they were called: it builds the jar when missing or stale, not otherwise,
+ * passes every argument through unchanged (spaces included) and returns the program's exit code.
+ */
+class LauncherScriptTest {
+  private record Result(int code, String out, String err) {}
+
+  private static Path executable(Path file, String text) throws IOException {
+    Files.createDirectories(file.getParent());
+    Files.writeString(file, text);
+    file.toFile().setExecutable(true);
+    return file;
+  }
+
+  private static Result launch(Path script, Path cwd, Map<String, String> env, String... args) throws Exception {
+    List<String> cmd = new java.util.ArrayList<>(List.of("bash", script.toString()));
+    cmd.addAll(List.of(args));
+    ProcessBuilder pb = new ProcessBuilder(cmd).directory(cwd.toFile());
+    pb.environment().putAll(env);
+    Process p = pb.start();
+    String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+    String err = new String(p.getErrorStream().readAllBytes(), StandardCharsets.UTF_8);
+    return new Result(p.waitFor(), out, err);
+  }
+
+  @Test
+  void buildsWhenNeededAndPassesArgumentsThrough(@TempDir Path tmp) throws Exception {
+    assumeTrue(Files.isExecutable(Path.of("/bin/bash")) || Files.isExecutable(Path.of("/usr/bin/bash")), "bash");
+    Path root = tmp.resolve("tree");
+    Path script = root.resolve("scripts").resolve("flexmargin");
+    Files.createDirectories(script.getParent());
+    Files.copy(Path.of("scripts", "flexmargin"), script);
+    Files.createDirectories(root.resolve("src/main"));
+    Files.createDirectories(root.resolve("mode-tables/demo"));
+    Files.writeString(root.resolve("pom.xml"), "<project/>");
+    Files.setLastModifiedTime(root.resolve("pom.xml"), FileTime.from(Instant.now().minusSeconds(3600)));
+    Path log = tmp.resolve("calls.log");
+    Path mvn = executable(tmp.resolve("bin/mvn"), "#!/bin/bash\necho \"mvn $*\" >> '" + log + "'\n"
+        + "mkdir -p target && echo jar > target/flexmargin.jar\n");
+    Path java = executable(tmp.resolve("bin/java"), "#!/bin/bash\nfor a in \"$@\"; do echo \"[$a]\"; done\n"
+        + "exit 3\n");
+    Map<String, String> env = Map.of("MVN", mvn.toString(), "JAVA", java.toString());
+    Path elsewhere = Files.createDirectories(tmp.resolve("somewhere else"));
+
+    Result first = launch(script, elsewhere, env, "demo", "--out", "my report");
+    assertEquals(3, first.code(), "the program's exit code: " + first.err());
+    assertTrue(first.out().contains("[-jar]\n[" + root.toRealPath().resolve("target/flexmargin.jar") + "]\n[demo]\n"
+        + "[--out]\n[my report]\n"), first.out());
+    assertTrue(first.err().contains("building"), first.err());
+    assertEquals(1, Files.readAllLines(log).size(), "built once");
+
+    launch(script, elsewhere, env, "check", "x.json");
+    assertEquals(1, Files.readAllLines(log).size(), "an up-to-date jar is not rebuilt");
+
+    Path source = root.resolve("src/main/Changed.java");
+    Files.writeString(source, "class Changed {}");
+    Files.setLastModifiedTime(source, FileTime.from(Instant.now().plusSeconds(60)));
+    launch(script, elsewhere, env, "--version");
+    assertEquals(2, Files.readAllLines(log).size(), "a jar older than the sources is rebuilt");
+
+    Path failing = executable(tmp.resolve("bin/mvn-fails"), "#!/bin/bash\nexit 1\n");
+    Files.delete(root.resolve("target/flexmargin.jar"));
+    Result broken = launch(script, elsewhere, Map.of("MVN", failing.toString(), "JAVA", java.toString()), "demo");
+    assertEquals(1, broken.code());
+    assertTrue(broken.err().contains("the build failed"), broken.err());
+    assertEquals("", broken.out(), "the program is not started after a failed build");
+  }
+}

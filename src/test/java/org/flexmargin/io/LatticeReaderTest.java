@@ -1,0 +1,49 @@
+package org.flexmargin.io;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.FlowSymmetry;
+import org.flexmargin.model.LatticeSpec;
+import org.flexmargin.model.SplineKind;
+import org.junit.jupiter.api.Test;
+
+/** The lifting_surfaces section of a case file: a good case and one test per kind of error. */
+class LatticeReaderTest {
+  private static final Path DIR = Path.of("src/test/resources/lattice");
+
+  private static String fails(String file) {
+    return assertThrows(InputFileException.class, () -> CaseReader.read(DIR.resolve(file))).getMessage();
+  }
+
+  private static void assertHas(String message, String... parts) {
+    for (String p : parts) {
+      assertTrue(message.contains(p), () -> "message <" + message + "> lacks <" + p + ">");
+    }
+  }
+
+  @Test
+  void readsSurfacesSplinesAndSettings() {
+    AnalysisCase c = CaseReader.read(DIR.resolve("lattice-case.json"));
+    LatticeSpec s = assertInstanceOf(LatticeSpec.class, c.configurations().get(0).aero());
+    assertEquals(0.3, s.mach());
+    assertEquals(FlowSymmetry.SYMMETRIC, s.symmetry(), "enum values in any case");
+    assertEquals(32, s.boxCount());
+    assertEquals(0.8, s.surfaces().get(0).tipLeadingEdge().xM());
+    assertEquals(SplineKind.BEAM, s.splines().get(0).kind());
+    assertEquals(3, s.splines().get(0).points().size());
+    assertEquals(5, s.reducedFrequencies().length);
+  }
+
+  @Test
+  void namesTheFieldOfEachError() {
+    assertHas(fails("bad-station.json"), "bad-station.json", "points[2].station", "\"tipp\"", "mid, root, tip");
+    assertHas(fails("bad-symmetry.json"), "flow_symmetry", "none, symmetric or antisymmetric", "\"mirror\"");
+    assertHas(fails("bad-boxes.json"), "surfaces[0].chordwise_boxes");
+    assertHas(fails("bad-key.json"), "spline_list", "unknown key");
+  }
+}
