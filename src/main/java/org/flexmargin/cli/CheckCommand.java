@@ -37,6 +37,7 @@ final class CheckCommand implements Callable<Integer> {
   @Override
   public Integer call() {
     AnalysisCase c = CaseReader.read(caseFile);
+    c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     if (common.quiet) {
       return FlexMargin.EXIT_OK;
     }

@@ -15,6 +15,7 @@ import org.flexmargin.model.ActuatorOrder;
 import org.flexmargin.model.ActuatorSpec;
 import org.flexmargin.model.AeroSpec;
 import org.flexmargin.model.AirspeedKind;
+import org.flexmargin.atmosphere.StandardAtmosphere;
 import org.flexmargin.model.Altitudes;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.AnalysisOptions;
@@ -28,12 +29,14 @@ import org.flexmargin.model.GafTable;
 import org.flexmargin.model.GainSchedule;
 import org.flexmargin.model.InertiaAxis;
 import org.flexmargin.model.InputFile;
+import org.flexmargin.model.InputWarning;
 import org.flexmargin.model.LoopSpec;
 import org.flexmargin.model.LowPassFilterSpec;
 import org.flexmargin.model.MachSweep;
 import org.flexmargin.model.ModeCoupling;
 import org.flexmargin.model.ModeTable;
 import org.flexmargin.model.NotchFilterSpec;
+import org.flexmargin.model.PlausibleRange;
 import org.flexmargin.model.PointList;
 import org.flexmargin.model.RigidBody;
 import org.flexmargin.model.SensorKind;
@@ -88,7 +91,8 @@ public final class CaseReader {
   public static final double METRES_PER_FOOT = 0.3048;
 
   private static final List<String> CASE_KEYS =
-      List.of("format", "name", "description", "configurations", "sweep", "options", "loop", "requirements");
+      List.of("format", "name", "description", "plausibility_overrides", "configurations", "sweep", "options",
+          "loop", "requirements");
   private static final List<String> CONFIG_KEYS =
       List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
   private static final List<String> RIGID_BODY_KEYS = List.of("mass_kg", "pitch_inertia_kg_m2",
@@ -124,7 +128,10 @@ public final class CaseReader {
    */
   public static AnalysisCase read(Path caseFile) {
     SourceFile src = SourceFile.read(caseFile, caseFile.toString());
-    JsonField root = JsonInput.parse(src).root().object("a case file");
+    Context ctx = new Context(caseFile, src);
+    JsonInput caseDoc = JsonInput.parse(src, ctx.log);
+    ctx.log.validateLater(Schemas.Kind.CASE_FILE, caseDoc);
+    JsonField root = caseDoc.root().object("a case file");
     root.allowOnly(CASE_KEYS);
     int format = readFormat(root);
     String name = root.required("name", "a case name").text();
@@ -134,8 +141,7 @@ public final class CaseReader {
           "\"" + name + "\"");
     }
     String description = textOrEmpty(root, "description");
-
-    Context ctx = new Context(caseFile, src);
+    readOverrides(root.optional("plausibility_overrides"), ctx.log);
     List<JsonField> configs = root.required("configurations", "a list of configurations")
         .list("a list of configurations");
     if (configs.isEmpty()) {
@@ -149,12 +155,14 @@ public final class CaseReader {
     JsonField opts = root.optional("options");
     AnalysisOptions options = opts == null ? AnalysisOptions.defaults() : readOptions(opts.object("options"));
     JsonField loopField = root.optional("loop");
-    LoopSpec loop = loopField == null ? null : readLoop(loopField.object("a loop section"), configs, configurations);
+    LoopSpec loop = loopField == null ? null : readLoop(loopField.object("a loop section"), configs, configurations, ctx);
     JsonField rq = root.optional("requirements");
-    ClearanceRequirements requirements = rq == null ? null : RequirementsReader.readSection(rq);
+    ClearanceRequirements requirements = rq == null ? null : readRequirements(rq, ctx);
     List<InputFile> inputs = new ArrayList<>(ctx.inputs.values());
+    ctx.log.validatePending();
+    List<InputWarning> warnings = ctx.log.warnings();
     return root.build(() -> new AnalysisCase(format, name, description, configurations, sweep, options, inputs,
-        loop, requirements));
+        loop, requirements, warnings));
   }
 
   /**
@@ -165,7 +173,10 @@ public final class CaseReader {
    * @throws InputFileException on any unreadable, malformed or invalid input
    */
   public static ModeTable readModeTable(Path file) {
-    return parseModeTable(SourceFile.read(file, file.toString()));
+    ReadLog log = new ReadLog();
+    ModeTable t = parseModeTable(SourceFile.read(file, file.toString()), log);
+    log.validatePending();
+    return t;
   }
 
   /**
@@ -177,7 +188,10 @@ public final class CaseReader {
    * @throws InputFileException on any unreadable, malformed or invalid input
    */
   public static GafTable readForceTable(Path file) {
-    return parseForceTable(SourceFile.read(file, file.toString()), null);
+    ReadLog log = new ReadLog();
+    GafTable t = parseForceTable(SourceFile.read(file, file.toString()), null, log);
+    log.validatePending();
+    return t;
   }
 
   // ----------------------------------------------------------------------------------------------
@@ -188,6 +202,7 @@ public final class CaseReader {
     final Path baseDir;
     final Map<Path, InputFile> inputs = new LinkedHashMap<>();
     final Map<Path, ModeTable> modeTables = new LinkedHashMap<>();
+    final ReadLog log = new ReadLog();
 
     Context(Path caseFile, SourceFile src) {
       Path parent = caseFile.toAbsolutePath().normalize().getParent();
@@ -198,6 +213,20 @@ public final class CaseReader {
     /** Resolves a path written in the case file and its display name. */
     Path resolve(String relative) {
       return baseDir.resolve(relative).normalize();
+    }
+
+    /**
+     * Reads and parses the JSON file named by the text value {@code from}, to be validated against
+     * the schema of {@code kind}; returns its top level.
+     */
+    JsonField readReferenced(JsonField from, Schemas.Kind kind) {
+      String rel = from.text();
+      if (!rel.toLowerCase(Locale.ROOT).endsWith(".json")) {
+        throw from.fail("a .json file (path relative to the case file) or the data in place", "\"" + rel + "\"");
+      }
+      JsonInput doc = JsonInput.parse(read(from, rel), log);
+      log.validateLater(kind, doc);
+      return doc.root();
     }
 
     SourceFile read(JsonField from, String relative) {
@@ -213,6 +242,40 @@ public final class CaseReader {
       Path p = resolve(relative);
       return p.startsWith(cwd) ? cwd.relativize(p).toString() : p.toString();
     }
+  }
+
+  /**
+   * Reads {@code plausibility_overrides}: the ids of plausible ranges ({@link PlausibleRange}) whose
+   * bounds this case lifts; values beyond them are then read with a warning.
+   */
+  private static void readOverrides(JsonField f, ReadLog log) {
+    if (f == null) {
+      return;
+    }
+    List<String> ids = new ArrayList<>();
+    for (PlausibleRange r : PlausibleRange.values()) {
+      if (r.overridable()) {
+        ids.add(r.id());
+      }
+    }
+    for (JsonField item : f.list("a list of plausible-range names")) {
+      String id = item.text();
+      PlausibleRange r = PlausibleRange.byId(id);
+      if (r == null || !r.overridable()) {
+        throw item.fail("the name of a plausible range that may be lifted (see docs/case-files.md, "
+            + "\"Plausible ranges\")", "\"" + id + "\"" + (r != null ? " (a physical limit, which no override lifts)"
+            : Suggest.hint(id, ids)));
+      }
+      log.override(r);
+    }
+  }
+
+  /** The requirements section in place, or a file reference to a standalone requirements file. */
+  private static ClearanceRequirements readRequirements(JsonField rq, Context ctx) {
+    if (rq.node().isTextual()) {
+      return RequirementsReader.readFile(ctx.readReferenced(rq, Schemas.Kind.REQUIREMENTS));
+    }
+    return RequirementsReader.readSection(rq);
   }
 
   private static int readFormat(JsonField obj) {
@@ -247,7 +310,7 @@ public final class CaseReader {
           if (!lower.endsWith(".json") && !lower.endsWith(".csv")) {
             throw s.fail("a .json or .csv mode table file", "\"" + rel + "\"");
           }
-          table = parseModeTable(ctx.read(s, rel));
+          table = parseModeTable(ctx.read(s, rel), ctx.log);
           ctx.modeTables.put(p, table);
         }
         structure = table;
@@ -278,17 +341,24 @@ public final class CaseReader {
 
   private static RigidBody readRigidBody(JsonField r, StructureSpec structure, String kind) {
     r.allowOnly(RIGID_BODY_KEYS);
-    double mass = r.required("mass_kg", "the mass (kg; of the half for a half model)").number();
-    double iyy = r.required("pitch_inertia_kg_m2", "the pitch moment of inertia I_yy (kg m^2)").number();
-    double area = r.required("reference_area_m2", "the reference wing area (m^2)").number();
-    double chord = r.required("reference_chord_m", "the mean aerodynamic chord (m)").number();
-    double cla = r.required("lift_slope_per_rad", "C_L_alpha (1/rad)").number();
-    double cma = r.required("pitch_moment_slope_per_rad", "C_m_alpha (1/rad)").number();
-    double cmq = r.required("pitch_damping_cmq", "C_m_q (per unit q c / 2V)").number();
+    double mass = r.required("mass_kg", "the mass (kg; of the half for a half model)")
+        .quantity(PlausibleRange.RIGID_MASS);
+    double iyy = r.required("pitch_inertia_kg_m2", "the pitch moment of inertia I_yy (kg m^2)")
+        .quantity(PlausibleRange.RIGID_PITCH_INERTIA);
+    double area = r.required("reference_area_m2", "the reference wing area (m^2)")
+        .quantity(PlausibleRange.REFERENCE_AREA);
+    double chord = r.required("reference_chord_m", "the mean aerodynamic chord (m)")
+        .quantity(PlausibleRange.REFERENCE_CHORD);
+    double cla = r.required("lift_slope_per_rad", "C_L_alpha (1/rad)").quantity(PlausibleRange.RIGID_LIFT_SLOPE);
+    double cma = r.required("pitch_moment_slope_per_rad", "C_m_alpha (1/rad)")
+        .quantity(PlausibleRange.PITCH_MOMENT_SLOPE);
+    double cmq = r.required("pitch_damping_cmq", "C_m_q (per unit q c / 2V)").quantity(PlausibleRange.PITCH_DAMPING);
     double cmad = r.required("alpha_dot_damping_cm_alpha_dot", "C_m_alphadot (per unit alphadot c / 2V)")
-        .number();
-    double cld = r.required("lift_per_elevator_per_rad", "C_L_delta (1/rad)").number();
-    double cmd = r.required("pitch_moment_per_elevator_per_rad", "C_m_delta (1/rad)").number();
+        .quantity(PlausibleRange.PITCH_DAMPING);
+    double cld = r.required("lift_per_elevator_per_rad", "C_L_delta (1/rad)")
+        .quantity(PlausibleRange.ELEVATOR_DERIVATIVE);
+    double cmd = r.required("pitch_moment_per_elevator_per_rad", "C_m_delta (1/rad)")
+        .quantity(PlausibleRange.ELEVATOR_DERIVATIVE);
     Map<String, ModeCoupling> coupling = new LinkedHashMap<>();
     JsonField mc = r.optional("mode_coupling");
     if (mc != null) {
@@ -300,14 +370,15 @@ public final class CaseReader {
       for (Map.Entry<String, JsonField> e : mc.entries()) {
         if (!table.modeNames().contains(e.getKey())) {
           throw e.getValue().fail("a mode of mode table \"" + table.name() + "\" ("
-              + String.join(", ", table.modeNames()) + ")", "\"" + e.getKey() + "\"");
+              + String.join(", ", table.modeNames()) + ")", "\"" + e.getKey() + "\""
+              + Suggest.hint(e.getKey(), table.modeNames()));
         }
         JsonField m = e.getValue().object("the coupling coefficients of a mode");
         m.allowOnly(COUPLING_KEYS);
-        double lift = numberOr(m, "lift_coefficient_per_unit_coordinate", 0.0);
-        double moment = numberOr(m, "pitch_moment_coefficient_per_unit_coordinate", 0.0);
-        double fAlpha = numberOr(m, "generalized_force_per_alpha_m2", 0.0);
-        double fElev = numberOr(m, "generalized_force_per_elevator_m2", 0.0);
+        double lift = numberOr(m, "lift_coefficient_per_unit_coordinate", 0.0, PlausibleRange.COUPLING);
+        double moment = numberOr(m, "pitch_moment_coefficient_per_unit_coordinate", 0.0, PlausibleRange.COUPLING);
+        double fAlpha = numberOr(m, "generalized_force_per_alpha_m2", 0.0, PlausibleRange.COUPLING);
+        double fElev = numberOr(m, "generalized_force_per_elevator_m2", 0.0, PlausibleRange.COUPLING);
         coupling.put(e.getKey(), m.build(() -> new ModeCoupling(lift, moment, fAlpha, fElev)));
       }
     }
@@ -321,7 +392,8 @@ public final class CaseReader {
    * @param configFields the configuration objects, in order, for error locations
    * @param configurations the configurations read from them
    */
-  private static LoopSpec readLoop(JsonField l, List<JsonField> configFields, List<Configuration> configurations) {
+  private static LoopSpec readLoop(JsonField l, List<JsonField> configFields, List<Configuration> configurations,
+      Context ctx) {
     l.allowOnly(LOOP_KEYS);
     ActuatorSpec actuator = readActuator(l.required("actuator", "an actuator section").object("an actuator section"));
     List<JsonField> sensorItems = l.required("sensors", "a list of sensors").list("a list of sensors");
@@ -340,17 +412,18 @@ public final class CaseReader {
         if (!stations.contains(sensors.get(j).station())) {
           throw sensorItems.get(j).optional("station").fail("a station of mode table \"" + table.name()
               + "\" of configuration \"" + configurations.get(i).name() + "\" ("
-              + String.join(", ", new TreeSet<>(stations)) + ")", "\"" + sensors.get(j).station() + "\"");
+              + String.join(", ", new TreeSet<>(stations)) + ")", "\"" + sensors.get(j).station() + "\""
+              + Suggest.hint(sensors.get(j).station(), stations));
         }
       }
     }
     List<JsonField> pathItems = l.required("paths", "a list of feedback paths").list("a list of feedback paths");
     List<FeedbackPath> paths = new ArrayList<>();
-    for (JsonField p : pathItems) {
-      paths.add(readPath(p.object("a feedback path")));
+    for (int i = 0; i < pathItems.size(); i++) {
+      paths.add(readPath(pathItems.get(i).object("a feedback path"), i, ctx));
     }
-    double delay = numberOr(l, "computation_delay_s", 0.0);
-    double period = numberOr(l, "sample_period_s", 0.0);
+    double delay = numberOr(l, "computation_delay_s", 0.0, PlausibleRange.COMPUTATION_DELAY);
+    double period = numberOr(l, "sample_period_s", 0.0, PlausibleRange.COMPUTATION_DELAY);
     int pade = l.has("pade_order") ? l.optional("pade_order").integer() : DEFAULT_PADE_ORDER;
     return l.build(() -> new LoopSpec(actuator, sensors, paths, delay, period, pade));
   }
@@ -358,16 +431,15 @@ public final class CaseReader {
   private static ActuatorSpec readActuator(JsonField a) {
     a.allowOnly(ACTUATOR_KEYS);
     JsonField o = a.required("order", "\"first\" or \"second\"");
-    ActuatorOrder order = switch (o.text()) {
-      case "first" -> ActuatorOrder.FIRST;
-      case "second" -> ActuatorOrder.SECOND;
-      default -> throw o.fail("\"first\" or \"second\"", o.describe());
-    };
+    ActuatorOrder order = o.choice(List.of("first", "second")).equals("first")
+        ? ActuatorOrder.FIRST : ActuatorOrder.SECOND;
     double bandwidth = a.required("bandwidth_hz",
-        "the bandwidth (Hz): corner of a first-order or natural frequency of a second-order actuator").number();
+        "the bandwidth (Hz): corner of a first-order or natural frequency of a second-order actuator")
+        .quantity(PlausibleRange.ACTUATOR_BANDWIDTH);
     double zeta;
     if (order == ActuatorOrder.SECOND) {
-      zeta = a.required("damping_ratio", "the damping ratio of the second-order actuator").number();
+      zeta = a.required("damping_ratio", "the damping ratio of the second-order actuator")
+          .quantity(PlausibleRange.ACTUATOR_DAMPING);
     } else {
       if (a.has("damping_ratio")) {
         throw a.optional("damping_ratio").fail("no damping_ratio for a first-order actuator",
@@ -382,28 +454,27 @@ public final class CaseReader {
     s.allowOnly(SENSOR_KEYS);
     String name = s.required("name", "a sensor name").text();
     JsonField k = s.required("kind", "\"pitch_rate_gyro\", \"normal_accelerometer\" or \"angle_of_attack_vane\"");
-    SensorKind kind = switch (k.text()) {
+    SensorKind kind = switch (k.choice(List.of("pitch_rate_gyro", "normal_accelerometer", "angle_of_attack_vane"))) {
       case "pitch_rate_gyro" -> SensorKind.PITCH_RATE_GYRO;
       case "normal_accelerometer" -> SensorKind.NORMAL_ACCELEROMETER;
-      case "angle_of_attack_vane" -> SensorKind.ANGLE_OF_ATTACK_VANE;
-      default -> throw k.fail("\"pitch_rate_gyro\", \"normal_accelerometer\" or \"angle_of_attack_vane\"",
-          k.describe());
+      default -> SensorKind.ANGLE_OF_ATTACK_VANE;
     };
     String station = s.required("station", "the mode-table station of the sensor").text();
-    double lever = numberOr(s, "lever_arm_m", 0.0);
-    double bandwidth = numberOr(s, "bandwidth_hz", 0.0);
+    double lever = numberOr(s, "lever_arm_m", 0.0, PlausibleRange.SENSOR_LEVER_ARM);
+    double bandwidth = numberOr(s, "bandwidth_hz", 0.0, PlausibleRange.SENSOR_BANDWIDTH);
     return s.build(() -> new SensorSpec(name, kind, station, lever, bandwidth));
   }
 
-  private static FeedbackPath readPath(JsonField p) {
+  private static FeedbackPath readPath(JsonField p, int index, Context ctx) {
     p.allowOnly(PATH_KEYS);
     String sensor = p.required("sensor", "the name of one of the loop's sensors").text();
-    double kp = p.required("proportional_gain", "Kp (rad of elevator per sensor unit)").number();
-    double ki = numberOr(p, "integral_gain_per_s", 0.0);
+    double kp = p.required("proportional_gain", "Kp (rad of elevator per sensor unit)")
+        .quantity(PlausibleRange.PROPORTIONAL_GAIN);
+    double ki = numberOr(p, "integral_gain_per_s", 0.0, PlausibleRange.INTEGRAL_GAIN);
     List<FilterSpec> filters = new ArrayList<>();
     JsonField fl = p.optional("filters");
     if (fl != null) {
-      for (JsonField f : fl.list("a list of filters")) {
+      for (JsonField f : FilterFiles.filterList(fl, index, sensor, f -> ctx.readReferenced(f, Schemas.Kind.FILTERS))) {
         filters.add(readFilter(f.object("a filter: {\"notch\": {...}} or {\"low_pass\": {...}}")));
       }
     }
@@ -418,13 +489,13 @@ public final class CaseReader {
     JsonField d = f.optional(kind).object("the filter data");
     if (kind.equals("notch")) {
       d.allowOnly(List.of("centre_hz", "numerator_damping_ratio", "denominator_damping_ratio"));
-      double centre = d.required("centre_hz", "the centre frequency (Hz)").number();
+      double centre = d.required("centre_hz", "the centre frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
       double zz = d.required("numerator_damping_ratio", "zeta_z, the numerator damping ratio").number();
       double zp = d.required("denominator_damping_ratio", "zeta_p, the denominator damping ratio").number();
       return d.build(() -> new NotchFilterSpec(centre, zz, zp));
     }
     d.allowOnly(List.of("corner_hz", "damping_ratio"));
-    double corner = d.required("corner_hz", "the corner frequency (Hz)").number();
+    double corner = d.required("corner_hz", "the corner frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
     double zeta = d.required("damping_ratio", "the damping ratio (0.7071 = Butterworth)").number();
     return d.build(() -> new LowPassFilterSpec(corner, zeta));
   }
@@ -433,8 +504,8 @@ public final class CaseReader {
     s.allowOnly(List.of("dynamic_pressure_pa", "factor"));
     JsonField qf = s.required("dynamic_pressure_pa", "the list of dynamic-pressure breakpoints (Pa)");
     JsonField ff = s.required("factor", "the list of gain factors, one per breakpoint");
-    double[] q = qf.numbers("a list of dynamic pressures (Pa)");
-    double[] k = ff.numbers("a list of gain factors");
+    double[] q = qf.quantities("a list of dynamic pressures (Pa)", PlausibleRange.SCHEDULE_DYNAMIC_PRESSURE);
+    double[] k = ff.quantities("a list of gain factors", PlausibleRange.SCHEDULE_FACTOR);
     if (q.length == 0) {
       throw qf.fail("at least one breakpoint", "an empty list");
     }
@@ -456,11 +527,11 @@ public final class CaseReader {
       if (!rel.toLowerCase(Locale.ROOT).endsWith(".json")) {
         throw f.fail("a .json force table file", "\"" + rel + "\"");
       }
-      return parseForceTable(ctx.read(f, rel), table);
+      return parseForceTable(ctx.read(f, rel), table, ctx.log);
     }
     f.object("strip-theory data");
     f.allowOnly(List.of("reference_semichord_m", "strips"));
-    double bRef = f.required("reference_semichord_m", "the reference semichord (m)").positive();
+    double bRef = f.required("reference_semichord_m", "the reference semichord (m)").quantity(PlausibleRange.SEMICHORD);
     List<JsonField> items = f.required("strips", "a list of strips").list("a list of strips");
     if (items.isEmpty()) {
       throw f.optional("strips").fail("at least one strip", "an empty list");
@@ -475,15 +546,15 @@ public final class CaseReader {
       String station = st.text();
       if (!stations.contains(station)) {
         throw st.fail("a station of mode table \"" + table.name() + "\" (" + String.join(", ",
-            new TreeSet<>(stations)) + ")", "\"" + station + "\"");
+            new TreeSet<>(stations)) + ")", "\"" + station + "\"" + Suggest.hint(station, stations));
       }
       if (!used.add(station)) {
         throw st.fail("a station not used by another strip", "\"" + station + "\" a second time");
       }
-      double w = s.required("width_m", "the strip width (m)").number();
-      double b = s.required("semichord_m", "the local semichord (m)").number();
+      double w = s.required("width_m", "the strip width (m)").quantity(PlausibleRange.STRIP_WIDTH);
+      double b = s.required("semichord_m", "the local semichord (m)").quantity(PlausibleRange.SEMICHORD);
       double ea = s.required("elastic_axis_a", "the elastic axis aft of mid-chord (semichords)").number();
-      double cla = s.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").number();
+      double cla = s.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").quantity(PlausibleRange.LIFT_SLOPE);
       strips.add(s.build(() -> new Strip(station, w, b, ea, cla)));
     }
     return f.build(() -> new StripTheorySpec(bRef, strips));
@@ -494,21 +565,20 @@ public final class CaseReader {
         "mass_axis_chord_fraction", "mass_per_length_kg_per_m", "pitch_inertia_kg_m", "inertia_axis",
         "bending_stiffness_n_m2", "torsion_stiffness_n_m2", "lift_slope_per_rad", "bending_modes",
         "torsion_modes", "strips", "damping_ratio", "structural_damping_g"));
-    double span = w.required("semi_span_m", "the semi-span (m)").number();
-    double chord = w.required("chord_m", "the chord (m)").number();
+    double span = w.required("semi_span_m", "the semi-span (m)").quantity(PlausibleRange.SPAN);
+    double chord = w.required("chord_m", "the chord (m)").quantity(PlausibleRange.CHORD);
     double ea = w.required("elastic_axis_chord_fraction", "the elastic axis (fraction of chord)").number();
     double cg = w.required("mass_axis_chord_fraction", "the centre of mass (fraction of chord)").number();
-    double m = w.required("mass_per_length_kg_per_m", "the mass per length (kg/m)").number();
-    double inertia = w.required("pitch_inertia_kg_m", "the pitch inertia per length (kg m)").number();
+    double m = w.required("mass_per_length_kg_per_m", "the mass per length (kg/m)")
+        .quantity(PlausibleRange.MASS_PER_LENGTH);
+    double inertia = w.required("pitch_inertia_kg_m", "the pitch inertia per length (kg m)")
+        .quantity(PlausibleRange.PITCH_INERTIA_PER_LENGTH);
     JsonField axisField = w.required("inertia_axis", "\"elastic_axis\" or \"centre_of_mass\"");
-    InertiaAxis axis = switch (axisField.text()) {
-      case "elastic_axis" -> InertiaAxis.ELASTIC_AXIS;
-      case "centre_of_mass" -> InertiaAxis.CENTRE_OF_MASS;
-      default -> throw axisField.fail("\"elastic_axis\" or \"centre_of_mass\"", axisField.describe());
-    };
-    double ei = w.required("bending_stiffness_n_m2", "EI (N m^2)").number();
-    double gj = w.required("torsion_stiffness_n_m2", "GJ (N m^2)").number();
-    double cla = w.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").number();
+    InertiaAxis axis = axisField.choice(List.of("elastic_axis", "centre_of_mass")).equals("elastic_axis")
+        ? InertiaAxis.ELASTIC_AXIS : InertiaAxis.CENTRE_OF_MASS;
+    double ei = w.required("bending_stiffness_n_m2", "EI (N m^2)").quantity(PlausibleRange.STIFFNESS);
+    double gj = w.required("torsion_stiffness_n_m2", "GJ (N m^2)").quantity(PlausibleRange.STIFFNESS);
+    double cla = w.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").quantity(PlausibleRange.LIFT_SLOPE);
     int nb = w.required("bending_modes", "the number of bending functions").integer();
     int nt = w.required("torsion_modes", "the number of torsion functions").integer();
     int ns = w.required("strips", "the number of strips").integer();
@@ -521,15 +591,16 @@ public final class CaseReader {
     t.allowOnly(List.of("semichord_m", "mass_per_span_kg_per_m", "elastic_axis_a",
         "mass_offset_x_alpha", "radius_of_gyration_squared", "heave_frequency_hz",
         "pitch_frequency_hz", "lift_slope_per_rad", "span_m", "damping_ratio", "structural_damping_g"));
-    double b = t.required("semichord_m", "the semichord b (m)").number();
-    double m = t.required("mass_per_span_kg_per_m", "the mass per span (kg/m)").number();
+    double b = t.required("semichord_m", "the semichord b (m)").quantity(PlausibleRange.SEMICHORD);
+    double m = t.required("mass_per_span_kg_per_m", "the mass per span (kg/m)").quantity(PlausibleRange.MASS_PER_LENGTH);
     double a = t.required("elastic_axis_a", "a, elastic axis aft of mid-chord (semichords)").number();
-    double xa = t.required("mass_offset_x_alpha", "x_alpha (semichords)").number();
-    double r2 = t.required("radius_of_gyration_squared", "r_alpha^2 (semichords^2)").number();
-    double fh = t.required("heave_frequency_hz", "the heave frequency (Hz)").number();
-    double fa = t.required("pitch_frequency_hz", "the pitch frequency (Hz)").number();
-    double cla = t.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").number();
-    double span = t.required("span_m", "the span (m)").number();
+    double xa = t.required("mass_offset_x_alpha", "x_alpha (semichords)").quantity(PlausibleRange.SECTION_NONDIMENSIONAL);
+    double r2 = t.required("radius_of_gyration_squared", "r_alpha^2 (semichords^2)")
+        .quantity(PlausibleRange.SECTION_NONDIMENSIONAL);
+    double fh = t.required("heave_frequency_hz", "the heave frequency (Hz)").quantity(PlausibleRange.SECTION_FREQUENCY);
+    double fa = t.required("pitch_frequency_hz", "the pitch frequency (Hz)").quantity(PlausibleRange.SECTION_FREQUENCY);
+    double cla = t.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").quantity(PlausibleRange.LIFT_SLOPE);
+    double span = t.required("span_m", "the span (m)").quantity(PlausibleRange.SPAN);
     double zeta = readDamping(t);
     return t.build(() -> new TypicalSection(b, m, a, xa, r2, fh, fa, cla, span, zeta));
   }
@@ -543,21 +614,21 @@ public final class CaseReader {
       if (!(v >= 0 && v < 1)) {
         throw f.fail("a damping ratio in [0, 1)", f.describe());
       }
-      return v;
+      return f.quantity(PlausibleRange.MODE_DAMPING_RATIO);
     }
     if (!(v >= 0 && v < 2)) {
       throw f.fail("a structural damping g in [0, 2) (g = 2 zeta)", f.describe());
     }
-    return v / 2;
+    return f.quantity(PlausibleRange.MODE_DAMPING_RATIO, 0.5, "(g, that is a damping ratio of " + v / 2 + ")");
   }
 
   private static SweepPlan readSweep(JsonField s) {
     JsonField kindField = s.required("kind", "\"speed\", \"mach\" or \"points\"");
-    String kind = kindField.text();
+    String kind = kindField.choice(List.of("speed", "mach", "points"));
     switch (kind) {
       case "speed": {
-        s.allowOnly(List.of("kind", "altitude_m", "altitude_ft", "speed_kind", "from_mps", "from_kt",
-            "to_mps", "to_kt", "points"));
+        s.allowOnly(List.of("kind", "altitude_m", "altitude_ft", "density_kg_per_m3", "speed_kind", "from_mps",
+            "from_kt", "to_mps", "to_kt", "points"));
         double alt = readAltitude(s, "altitude");
         AirspeedKind sk = readSpeedKind(s);
         double from = readSpeed(s, "from");
@@ -573,7 +644,7 @@ public final class CaseReader {
       case "mach": {
         s.allowOnly(List.of("kind", "mach", "from_altitude_m", "from_altitude_ft", "to_altitude_m",
             "to_altitude_ft", "points"));
-        double mach = s.required("mach", "the Mach number").number();
+        double mach = s.required("mach", "the Mach number").quantity(PlausibleRange.SWEEP_MACH);
         double from = readAltitude(s, "from_altitude");
         double to = readAltitude(s, "to_altitude");
         if (from == to) {
@@ -592,7 +663,8 @@ public final class CaseReader {
         List<SweepPoint> points = new ArrayList<>();
         for (JsonField p : items) {
           p.object("a flight point");
-          p.allowOnly(List.of("altitude_m", "altitude_ft", "speed_kind", "speed_mps", "speed_kt"));
+          p.allowOnly(List.of("altitude_m", "altitude_ft", "density_kg_per_m3", "speed_kind", "speed_mps",
+              "speed_kt"));
           double alt = readAltitude(p, "altitude");
           AirspeedKind sk = readSpeedKind(p);
           double v = readSpeed(p, "speed");
@@ -601,13 +673,23 @@ public final class CaseReader {
         return s.build(() -> new PointList(points));
       }
       default:
-        throw kindField.fail("\"speed\", \"mach\" or \"points\"", kindField.describe());
+        throw new IllegalStateException(kind);
     }
   }
 
-  /** Reads {@code <stem>_m} or {@code <stem>_ft} and checks the atmosphere range; returns metres. */
+  /**
+   * Reads {@code <stem>_m} or {@code <stem>_ft} and checks the atmosphere range; where
+   * {@code stem} is {@code altitude}, {@code density_kg_per_m3} may stand instead (the air density
+   * of a published example), read as the altitude of the US Standard Atmosphere 1976 with that
+   * density. Returns metres.
+   */
   private static double readAltitude(JsonField obj, String stem) {
-    String key = obj.exactlyOne("the altitude", stem + "_m", stem + "_ft");
+    String key = stem.equals("altitude")
+        ? obj.exactlyOne("the altitude or the air density", stem + "_m", stem + "_ft", "density_kg_per_m3")
+        : obj.exactlyOne("the altitude", stem + "_m", stem + "_ft");
+    if (key.equals("density_kg_per_m3")) {
+      return altitudeAtDensity(obj.optional(key));
+    }
     JsonField f = obj.optional(key);
     double v = f.number();
     double m = key.endsWith("_ft") ? v * METRES_PER_FOOT : v;
@@ -618,21 +700,45 @@ public final class CaseReader {
     return m;
   }
 
+  /**
+   * @return the geometric altitude (m) at which the US Standard Atmosphere 1976 has the given
+   *     density, by bisection (density falls monotonically with altitude over the model's range)
+   */
+  private static double altitudeAtDensity(JsonField f) {
+    double rho = f.quantity(PlausibleRange.DENSITY);
+    double hi = StandardAtmosphere.densityKgPerM3(Altitudes.MIN_M);
+    double lo = StandardAtmosphere.densityKgPerM3(Altitudes.MAX_M);
+    if (!(rho >= lo && rho <= hi)) {
+      throw f.fail(String.format(Locale.ROOT, "an air density in [%.4g, %.4g] kg/m^3 (the standard atmosphere"
+          + " from %.0f to %.0f m)", lo, hi, Altitudes.MIN_M, Altitudes.MAX_M), f.describe() + " kg/m^3");
+    }
+    double a = Altitudes.MIN_M;
+    double b = Altitudes.MAX_M;
+    for (int i = 0; i < 200 && b - a > 1e-9; i++) {
+      double mid = 0.5 * (a + b);
+      if (StandardAtmosphere.densityKgPerM3(mid) > rho) {
+        a = mid;
+      } else {
+        b = mid;
+      }
+    }
+    // to the micrometre (density changes by about 1e-10 kg/m^3), and sea level as 0 rather than -0
+    return Math.rint(0.5 * (a + b) * 1e6) / 1e6 + 0.0;
+  }
+
   /** Reads {@code <stem>_mps} or {@code <stem>_kt} (&gt; 0); returns m/s. */
   private static double readSpeed(JsonField obj, String stem) {
     String key = obj.exactlyOne("the airspeed", stem + "_mps", stem + "_kt");
     JsonField f = obj.optional(key);
     double v = f.positive();
-    return key.endsWith("_kt") ? v * METRES_PER_SECOND_PER_KNOT : v;
+    return key.endsWith("_kt")
+        ? f.quantity(PlausibleRange.AIRSPEED, METRES_PER_SECOND_PER_KNOT, "kt")
+        : f.quantity(PlausibleRange.AIRSPEED);
   }
 
   private static AirspeedKind readSpeedKind(JsonField obj) {
     JsonField f = obj.required("speed_kind", "\"eas\" or \"tas\"");
-    return switch (f.text()) {
-      case "eas" -> AirspeedKind.EQUIVALENT;
-      case "tas" -> AirspeedKind.TRUE;
-      default -> throw f.fail("\"eas\" (equivalent) or \"tas\" (true airspeed)", f.describe());
-    };
+    return f.choice(List.of("eas", "tas")).equals("eas") ? AirspeedKind.EQUIVALENT : AirspeedKind.TRUE;
   }
 
   private static AnalysisOptions readOptions(JsonField o) {
@@ -643,11 +749,10 @@ public final class CaseReader {
     FlutterMethodKind method = d.method();
     JsonField m = o.optional("method");
     if (m != null) {
-      method = switch (m.text()) {
+      method = switch (m.choice(List.of("pk", "k", "state_space"))) {
         case "pk" -> FlutterMethodKind.PK;
         case "k" -> FlutterMethodKind.K;
-        case "state_space" -> FlutterMethodKind.STATE_SPACE;
-        default -> throw m.fail("\"pk\", \"k\" or \"state_space\"", m.describe());
+        default -> FlutterMethodKind.STATE_SPACE;
       };
     }
     FlutterMethodKind meth = method;
@@ -666,18 +771,25 @@ public final class CaseReader {
     return f == null ? dflt : f.number();
   }
 
+  private static double numberOr(JsonField obj, String key, double dflt, PlausibleRange range) {
+    JsonField f = obj.optional(key);
+    return f == null ? dflt : f.quantity(range);
+  }
+
   // ----------------------------------------------------------------------------------------------
   // mode tables and force tables
 
-  private static ModeTable parseModeTable(SourceFile src) {
+  private static ModeTable parseModeTable(SourceFile src, ReadLog log) {
     String lower = src.display().toLowerCase(Locale.ROOT);
     if (lower.endsWith(".csv")) {
-      return ModeTableCsv.parse(src);
+      return ModeTableCsv.parse(src, log);
     }
     if (!lower.endsWith(".json")) {
       throw new InputFileException(src.display(), 0, "", "a .json or .csv mode table", "another file type");
     }
-    JsonField root = JsonInput.parse(src).root().object("a mode table");
+    JsonInput doc = JsonInput.parse(src, log);
+    log.validateLater(Schemas.Kind.MODE_TABLE, doc);
+    JsonField root = doc.root().object("a mode table");
     root.allowOnly(MODE_TABLE_KEYS);
     readFormat(root);
     JsonField nameField = root.optional("name");
@@ -692,16 +804,19 @@ public final class CaseReader {
       m.object("a mode");
       m.allowOnly(MODE_KEYS);
       String modeName = m.required("name", "a mode name").text();
-      double f = m.required("frequency_hz", "the natural frequency (Hz)").number();
+      double f = m.required("frequency_hz", "the natural frequency (Hz)").quantity(PlausibleRange.MODE_FREQUENCY);
       double zeta = readDamping(m);
-      double mass = m.required("generalized_mass_kg", "the generalized mass (kg)").number();
+      double mass = m.required("generalized_mass_kg", "the generalized mass (kg)")
+          .quantity(PlausibleRange.MODE_GENERALIZED_MASS);
       JsonField shapesField = m.required("shapes", "the mode shape by station").object("the mode shape by station");
       Map<String, ShapeValue> shapes = new LinkedHashMap<>();
       for (Map.Entry<String, JsonField> e : shapesField.entries()) {
         JsonField v = e.getValue().object("a shape value with displacement_m and rotation_rad");
         v.allowOnly(SHAPE_KEYS);
-        double d = v.required("displacement_m", "the displacement (m per unit coordinate)").number();
-        double r = v.required("rotation_rad", "the rotation (rad per unit coordinate)").number();
+        double d = v.required("displacement_m", "the displacement (m per unit coordinate)")
+            .quantity(PlausibleRange.MODE_SHAPE_DISPLACEMENT);
+        double r = v.required("rotation_rad", "the rotation (rad per unit coordinate)")
+            .quantity(PlausibleRange.MODE_SHAPE_ROTATION);
         shapes.put(e.getKey(), v.build(() -> new ShapeValue(d, r)));
       }
       if (shapes.isEmpty()) {
@@ -743,13 +858,16 @@ public final class CaseReader {
     return dot > 0 ? f.substring(0, dot) : f;
   }
 
-  private static GafTable parseForceTable(SourceFile src, ModeTable table) {
-    JsonField root = JsonInput.parse(src).root().object("a force table");
+  private static GafTable parseForceTable(SourceFile src, ModeTable table, ReadLog log) {
+    JsonInput doc = JsonInput.parse(src, log);
+    log.validateLater(Schemas.Kind.FORCE_TABLE, doc);
+    JsonField root = doc.root().object("a force table");
     root.allowOnly(FORCE_KEYS);
     readFormat(root);
     textOrEmpty(root, "description");
-    double bRef = root.required("reference_semichord_m", "the reference semichord (m)").number();
-    double mach = root.required("mach", "the Mach number of the table").number();
+    double bRef = root.required("reference_semichord_m", "the reference semichord (m)")
+        .quantity(PlausibleRange.SEMICHORD);
+    double mach = root.required("mach", "the Mach number of the table").quantity(PlausibleRange.FORCE_TABLE_MACH);
     JsonField modesField = root.required("modes", "the list of mode names (rows and columns)");
     List<String> names = new ArrayList<>();
     for (JsonField f : modesField.list("a list of mode names")) {
@@ -763,7 +881,7 @@ public final class CaseReader {
           + table.modeNames(), names.toString());
     }
     double[] k = root.required("reduced_frequencies", "the list of reduced frequencies")
-        .numbers("a list of reduced frequencies");
+        .quantities("a list of reduced frequencies", PlausibleRange.REDUCED_FREQUENCY);
     double[][][] re = cube(root.required("real", "the real parts as [k][row][column]"));
     double[][][] im = cube(root.required("imag", "the imaginary parts as [k][row][column]"));
     return root.build(() -> new GafTable(bRef, mach, names, k, re, im));

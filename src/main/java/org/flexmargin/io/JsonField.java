@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Supplier;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.PlausibleRange;
 
 /**
  * One value of a {@link JsonInput} with its field path: typed, validated access that reports
@@ -98,7 +99,8 @@ final class JsonField {
       String name = names.next();
       if (!allowed.contains(name)) {
         JsonField c = new JsonField(doc, node.get(name), childPath(path, name));
-        throw c.fail("one of the keys " + String.join(", ", allowed), "unknown key \"" + name + "\"");
+        throw c.fail("one of the keys " + String.join(", ", allowed),
+            "unknown key \"" + name + "\"" + Suggest.hint(name, allowed));
       }
     }
   }
@@ -142,7 +144,8 @@ final class JsonField {
       }
     }
     if (present == null) {
-      throw fail("exactly one of the keys " + String.join(", ", keys) + " (" + what + ")", "none of them");
+      throw new InputFileException(doc.source().display(), line(), childPath(path, keys[0]),
+          "exactly one of the keys " + String.join(", ", keys) + " (" + what + ")", "none of them");
     }
     return present;
   }
@@ -169,6 +172,65 @@ final class JsonField {
       throw fail("a text value in double quotes", describe());
     }
     return node.textValue();
+  }
+
+  /**
+   * Reads one of a fixed set of words, ignoring case ({@code "EAS"} reads as {@code "eas"}: every
+   * set of words here differs in more than case, so this is never ambiguous).
+   *
+   * @param allowed the accepted words, as documented
+   * @return the accepted word as documented
+   */
+  String choice(List<String> allowed) {
+    String t = text();
+    for (String a : allowed) {
+      if (a.equalsIgnoreCase(t.strip())) {
+        return a;
+      }
+    }
+    throw fail(words(allowed), describe() + Suggest.hint(t, allowed));
+  }
+
+  /** @return {@code "a", "b" or "c"} */
+  static String words(List<String> allowed) {
+    StringBuilder sb = new StringBuilder();
+    for (int i = 0; i < allowed.size(); i++) {
+      if (i > 0) {
+        sb.append(i == allowed.size() - 1 ? " or " : ", ");
+      }
+      sb.append('"').append(allowed.get(i)).append('"');
+    }
+    return sb.toString();
+  }
+
+  /**
+   * Reads a number and checks it against its plausible and usual ranges ({@link ReadLog#check}).
+   *
+   * @param r the quantity
+   * @return the value (not yet checked for sign: the model records do that)
+   */
+  double quantity(PlausibleRange r) {
+    return quantity(r, 1.0, r.unit());
+  }
+
+  /**
+   * Reads a number given in another unit, converts it to the range's SI unit and checks it.
+   *
+   * @param r the quantity
+   * @param toSi factor from the written unit to the range's unit
+   * @param writtenUnit the unit as written (for messages)
+   * @return the value in the range's unit
+   */
+  double quantity(PlausibleRange r, double toSi, String writtenUnit) {
+    double v = number();
+    double si = v * toSi;
+    String shown = describe() + (writtenUnit.isEmpty() ? "" : " " + writtenUnit);
+    return doc.log().check(r, si, shown, doc.source().display(), line(), path);
+  }
+
+  /** @return the log of the read this field belongs to */
+  ReadLog log() {
+    return doc.log();
   }
 
   /** @return this value as a double (may be non-finite; range checks follow) */
@@ -238,6 +300,17 @@ final class JsonField {
     double[] out = new double[items.size()];
     for (int i = 0; i < out.length; i++) {
       out[i] = items.get(i).finite();
+    }
+    return out;
+  }
+
+  /** @return this value as a list of numbers, each checked against {@code range} */
+  double[] quantities(String what, PlausibleRange range) {
+    List<JsonField> items = list(what);
+    double[] out = new double[items.size()];
+    for (int i = 0; i < out.length; i++) {
+      out[i] = items.get(i).finite();
+      items.get(i).quantity(range);
     }
     return out;
   }

@@ -4,14 +4,19 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.exc.StreamReadException;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.core.JsonStreamContext;
 import java.io.IOException;
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -22,30 +27,53 @@ import java.util.Map;
  * range checks can name them.
  */
 final class JsonInput {
-  private static final JsonFactory FACTORY =
-      JsonFactory.builder().enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS).build();
+  /** Deepest nesting of objects and lists accepted (the deepest format needs 6). */
+  static final int MAX_NESTING_DEPTH = 64;
+  /** Longest text value accepted (characters). */
+  static final int MAX_STRING_LENGTH = 1_000_000;
+  /** Longest number accepted (characters). */
+  static final int MAX_NUMBER_LENGTH = 400;
+
+  private static final JsonFactory FACTORY = JsonFactory.builder()
+      .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
+      .streamReadConstraints(StreamReadConstraints.builder()
+          .maxNestingDepth(MAX_NESTING_DEPTH)
+          .maxStringLength(MAX_STRING_LENGTH)
+          .maxNumberLength(MAX_NUMBER_LENGTH)
+          .build())
+      .build();
 
   private final SourceFile source;
   private final JsonNode root;
   private final Map<String, Integer> lines;
+  private final ReadLog log;
 
-  private JsonInput(SourceFile source, JsonNode root, Map<String, Integer> lines) {
+  private JsonInput(SourceFile source, JsonNode root, Map<String, Integer> lines, ReadLog log) {
     this.source = source;
     this.root = root;
     this.lines = lines;
+    this.log = log;
+  }
+
+  /** As {@link #parse(SourceFile, ReadLog)} with a log of its own. */
+  static JsonInput parse(SourceFile source) {
+    return parse(source, new ReadLog());
   }
 
   /**
    * Parses a JSON file.
    *
    * @param source the file
+   * @param log where range warnings of this file's values go
    * @return the tree with locations
    * @throws InputFileException on malformed JSON (Jackson's line and column), duplicate keys or an
    *     empty file
    */
-  static JsonInput parse(SourceFile source) {
+  static JsonInput parse(SourceFile source, ReadLog log) {
     Map<String, Integer> lines = new HashMap<>();
-    try (JsonParser p = FACTORY.createParser(source.bytes())) {
+    JsonParser p = null;
+    try {
+      p = FACTORY.createParser(source.bytes());
       if (p.nextToken() == null) {
         throw new InputFileException(source.display(), 1, "", "a JSON object", "an empty file");
       }
@@ -55,17 +83,72 @@ final class JsonInput {
         throw new InputFileException(source.display(), p.currentTokenLocation().getLineNr(), "",
             "the end of the file after the top-level value", "more content (" + extra.asString() + ")");
       }
-      return new JsonInput(source, root, lines);
+      return new JsonInput(source, root, lines, log);
+    } catch (StreamConstraintsException e) {
+      throw limit(source, p, e);
     } catch (StreamReadException e) {
       JsonLocation loc = e.getLocation();
       int line = loc == null ? 0 : loc.getLineNr();
       String column = loc == null ? "" : " at column " + loc.getColumnNr();
+      String where = p == null ? "" : contextPath(p.getParsingContext());
       throw new InputFileException(
-          source.display(), line, "", "well-formed JSON", e.getOriginalMessage() + column, e);
+          source.display(), line, where, "well-formed JSON", e.getOriginalMessage() + column, e);
     } catch (IOException e) {
       throw new InputFileException(
           source.display(), 0, "", "a readable JSON file", e.getClass().getSimpleName() + " " + e.getMessage(), e);
+    } finally {
+      if (p != null) {
+        try {
+          p.close();
+        } catch (IOException ignored) {
+          // the bytes are in memory: closing cannot fail in a way that matters
+        }
+      }
     }
+  }
+
+  /**
+   * @return the field path of the value the parser was reading ({@code configurations[0].aero}),
+   *     empty at the top level; names the field where a file is cut short or malformed
+   */
+  static String contextPath(JsonStreamContext ctx) {
+    List<String> parts = new ArrayList<>();
+    for (JsonStreamContext c = ctx; c != null && !c.inRoot(); c = c.getParent()) {
+      if (c.inArray()) {
+        parts.add("[" + Math.max(0, c.getCurrentIndex()) + "]");
+      } else if (c.getCurrentName() != null) {
+        parts.add("." + c.getCurrentName());
+      }
+    }
+    StringBuilder sb = new StringBuilder();
+    for (int i = parts.size() - 1; i >= 0; i--) {
+      sb.append(parts.get(i));
+    }
+    return sb.length() > 0 && sb.charAt(0) == '.' ? sb.substring(1) : sb.toString();
+  }
+
+  /** Translates a parser limit into our own words, at the line where the parser stopped. */
+  private static InputFileException limit(SourceFile source, JsonParser p, StreamConstraintsException e) {
+    int line = p == null ? 0 : Math.max(p.currentLocation().getLineNr(), p.currentTokenLocation().getLineNr());
+    String msg = String.valueOf(e.getOriginalMessage());
+    String expected;
+    String found;
+    if (msg.contains("nesting depth")) {
+      expected = "objects and lists nested at most " + MAX_NESTING_DEPTH + " levels deep";
+      found = "deeper nesting";
+    } else if (msg.contains("String value length")) {
+      expected = "a text value of at most " + MAX_STRING_LENGTH + " characters";
+      found = "a longer text value";
+    } else if (msg.contains("Number value length") || msg.contains("Number length")) {
+      expected = "a number of at most " + MAX_NUMBER_LENGTH + " characters";
+      found = "a longer number";
+    } else {
+      expected = "JSON within the reader's limits (nesting " + MAX_NESTING_DEPTH + " levels, text "
+          + MAX_STRING_LENGTH + " characters, numbers " + MAX_NUMBER_LENGTH + " characters)";
+      found = "content beyond them";
+    }
+    String where = p == null ? "" : contextPath(p.getParsingContext());
+    return new InputFileException(source.display(), line, where, expected, found, e);
   }
 
   private static JsonNode readValue(JsonParser p, String path, Map<String, Integer> lines, SourceFile src)
@@ -116,6 +199,16 @@ final class JsonInput {
       default:
         throw new InputFileException(src.display(), line, path, "a JSON value", String.valueOf(t));
     }
+  }
+
+  /** @return the log of the read this file belongs to */
+  ReadLog log() {
+    return log;
+  }
+
+  /** @return the tree (read only) */
+  JsonNode tree() {
+    return root;
   }
 
   /** @return the file */

@@ -1,6 +1,7 @@
 package org.flexmargin.io;
 
-import java.nio.charset.CharacterCodingException;
+import java.nio.CharBuffer;
+import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.ByteBuffer;
@@ -8,12 +9,14 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.model.ModeTable;
+import org.flexmargin.model.PlausibleRange;
 import org.flexmargin.model.ShapeValue;
 
 /**
@@ -63,19 +66,13 @@ final class ModeTableCsv {
 
   /**
    * @param src the CSV file
+   * @param log where warnings about unusual values go
    * @return the validated table
    * @throws InputFileException on malformed or invalid content
    */
-  static ModeTable parse(SourceFile src) {
+  static ModeTable parse(SourceFile src, ReadLog log) {
     String file = src.display();
-    String text;
-    try {
-      text = StandardCharsets.UTF_8.newDecoder()
-          .onMalformedInput(CodingErrorAction.REPORT)
-          .decode(ByteBuffer.wrap(src.bytes())).toString();
-    } catch (CharacterCodingException e) {
-      throw new InputFileException(file, 0, "", "UTF-8 text", "bytes that are not UTF-8", e);
-    }
+    String text = decodeUtf8(src);
     if (text.startsWith("\uFEFF")) {
       text = text.substring(1);
     }
@@ -203,8 +200,12 @@ final class ModeTableCsv {
             "each station once per mode", "a second row for station \"" + station + "\"");
       }
       String path = prefix + "shapes." + station;
-      double disp = number(cell(cells, col, "displacement_m"), file, lineNo, path + ".displacement_m");
-      double rot = number(cell(cells, col, "rotation_rad"), file, lineNo, path + ".rotation_rad");
+      double disp = log.check(PlausibleRange.MODE_SHAPE_DISPLACEMENT,
+          number(cell(cells, col, "displacement_m"), file, lineNo, path + ".displacement_m"),
+          cell(cells, col, "displacement_m") + " m", file, lineNo, path + ".displacement_m");
+      double rot = log.check(PlausibleRange.MODE_SHAPE_ROTATION,
+          number(cell(cells, col, "rotation_rad"), file, lineNo, path + ".rotation_rad"),
+          cell(cells, col, "rotation_rad") + " rad", file, lineNo, path + ".rotation_rad");
       try {
         d.shapes.put(station, new ShapeValue(disp, rot));
       } catch (InvalidInputException e) {
@@ -232,8 +233,12 @@ final class ModeTableCsv {
             "exactly one of damping_ratio or structural_damping_g on the mode's first row",
             hasZeta ? "both" : "neither");
       }
-      double f = number(d.modeValues.get("frequency_hz"), file, d.firstLine, p + "frequency_hz");
-      double m = number(d.modeValues.get("generalized_mass_kg"), file, d.firstLine, p + "generalized_mass_kg");
+      double f = log.check(PlausibleRange.MODE_FREQUENCY,
+          number(d.modeValues.get("frequency_hz"), file, d.firstLine, p + "frequency_hz"),
+          d.modeValues.get("frequency_hz") + " Hz", file, d.firstLine, p + "frequency_hz");
+      double m = log.check(PlausibleRange.MODE_GENERALIZED_MASS,
+          number(d.modeValues.get("generalized_mass_kg"), file, d.firstLine, p + "generalized_mass_kg"),
+          d.modeValues.get("generalized_mass_kg") + " kg", file, d.firstLine, p + "generalized_mass_kg");
       double zeta;
       if (hasZeta) {
         zeta = number(d.modeValues.get("damping_ratio"), file, d.firstLine, p + "damping_ratio");
@@ -244,6 +249,10 @@ final class ModeTableCsv {
               "a structural damping g in [0, 2) (g = 2 zeta)", String.valueOf(g));
         }
         zeta = g / 2;
+      }
+      if (zeta >= 0 && zeta < 1) {
+        log.check(PlausibleRange.MODE_DAMPING_RATIO, zeta, "a damping ratio of " + zeta, file, d.firstLine,
+            p + (hasZeta ? "damping_ratio" : "structural_damping_g"));
       }
       if (firstDraft != null) {
         String mismatch = CaseReader.stationMismatch(firstDraft.shapes.keySet(), d.shapes.keySet());
@@ -266,6 +275,33 @@ final class ModeTableCsv {
     } catch (InvalidInputException e) {
       throw located(e, file, headerLine, "");
     }
+  }
+
+  /** Decodes UTF-8, reporting the line and column of the first byte that is not UTF-8. */
+  private static String decodeUtf8(SourceFile src) {
+    byte[] bytes = src.bytes();
+    ByteBuffer in = ByteBuffer.wrap(bytes);
+    CharBuffer out = CharBuffer.allocate(bytes.length + 1);
+    CoderResult r = StandardCharsets.UTF_8.newDecoder()
+        .onMalformedInput(CodingErrorAction.REPORT)
+        .onUnmappableCharacter(CodingErrorAction.REPORT)
+        .decode(in, out, true);
+    if (r.isError()) {
+      int at = in.position();
+      int line = 1;
+      int lineStart = 0;
+      for (int k = 0; k < at; k++) {
+        if (bytes[k] == '\n') {
+          line++;
+          lineStart = k + 1;
+        }
+      }
+      throw new InputFileException(src.display(), line, "", "UTF-8 text",
+          String.format(Locale.ROOT, "the byte 0x%02X at column %d, which is not UTF-8 (save the file as UTF-8)",
+              bytes[at] & 0xff, at - lineStart + 1));
+    }
+    out.flip();
+    return out.toString();
   }
 
   private static InputFileException located(InvalidInputException e, String file, int line, String prefix) {

@@ -8,6 +8,7 @@ import java.util.Map;
 import org.flexmargin.model.ClearanceRequirements;
 import org.flexmargin.model.FrequencyBand;
 import org.flexmargin.model.MarginCell;
+import org.flexmargin.model.PlausibleRange;
 import org.flexmargin.model.RequirementPresets;
 import org.flexmargin.model.SpeedRegime;
 
@@ -51,7 +52,21 @@ public final class RequirementsReader {
    */
   public static ClearanceRequirements read(Path file) {
     SourceFile src = SourceFile.read(file, file.toString());
-    JsonField root = JsonInput.parse(src).root().object("a requirements file");
+    JsonInput doc = JsonInput.parse(src);
+    ClearanceRequirements r = readFile(doc.root());
+    Schemas.check(Schemas.Kind.REQUIREMENTS, doc);
+    return r;
+  }
+
+  /**
+   * Reads a parsed standalone requirements file (also the target of a case file's
+   * {@code "requirements": "file.json"} reference).
+   *
+   * @param root the file's top-level value
+   * @return the validated table
+   */
+  static ClearanceRequirements readFile(JsonField root) {
+    root.object("a requirements file");
     List<String> keys = new ArrayList<>(SECTION_KEYS);
     keys.add(0, "format");
     root.allowOnly(keys);
@@ -81,11 +96,7 @@ public final class RequirementsReader {
   private static ClearanceRequirements readBody(JsonField r) {
     JsonField presetField = r.required("preset",
         "\"" + PRESET_RECALLED + "\" or \"" + PRESET_NONE + "\"");
-    String preset = presetField.text();
-    if (!preset.equals(PRESET_RECALLED) && !preset.equals(PRESET_NONE)) {
-      throw presetField.fail("\"" + PRESET_RECALLED + "\" or \"" + PRESET_NONE + "\"",
-          presetField.describe());
-    }
+    String preset = presetField.choice(List.of(PRESET_RECALLED, PRESET_NONE));
     boolean recalled = preset.equals(PRESET_RECALLED);
     String description = r.has("description") ? r.optional("description").text() : "";
 
@@ -177,8 +188,10 @@ public final class RequirementsReader {
   }
 
   private static double speed(JsonField f) {
-    double v = f.positive();
-    return f.path().endsWith("_kt") ? v * CaseReader.METRES_PER_SECOND_PER_KNOT : v;
+    f.positive();
+    return f.path().endsWith("_kt")
+        ? f.quantity(PlausibleRange.AIRSPEED, CaseReader.METRES_PER_SECOND_PER_KNOT, "kt")
+        : f.quantity(PlausibleRange.AIRSPEED);
   }
 
   private static double scalar(JsonField r, String key, double dflt, List<String> overridden) {
@@ -209,22 +222,32 @@ public final class RequirementsReader {
   }
 
   private static FrequencyBand band(JsonField f) {
-    String t = f.text();
+    List<String> keys = new ArrayList<>();
+    for (FrequencyBand b : FrequencyBand.values()) {
+      keys.add(b.key());
+    }
+    String t = f.choice(keys);
     for (FrequencyBand b : FrequencyBand.values()) {
       if (b.key().equals(t)) {
         return b;
       }
     }
-    throw f.fail(bandWords(), f.describe());
+    throw new IllegalStateException(t);
   }
 
   private static SpeedRegime regime(JsonField f) {
-    String t = f.text();
+    List<String> keys = new ArrayList<>();
     for (SpeedRegime s : SpeedRegime.values()) {
-      if (s != SpeedRegime.BEYOND && s.key().equals(t)) {
+      if (s != SpeedRegime.BEYOND) {
+        keys.add(s.key());
+      }
+    }
+    String t = f.choice(keys);
+    for (SpeedRegime s : SpeedRegime.values()) {
+      if (s.key().equals(t)) {
         return s;
       }
     }
-    throw f.fail(regimeWords(), f.describe());
+    throw new IllegalStateException(t);
   }
 }

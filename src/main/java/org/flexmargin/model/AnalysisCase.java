@@ -18,6 +18,9 @@ import java.util.Set;
  *     configuration needs rigid-body data and every sensor station must exist in its mode table.
  * @param requirements clearance requirements table; {@code null} when none is given (results are
  *     then reported without pass/fail)
+ * @param warnings values read although unusual (outside their usual range, or beyond their
+ *     plausible range under a {@code plausibility_overrides} entry), in reading order; to be shown
+ *     with the results
  */
 public record AnalysisCase(
     int format,
@@ -28,7 +31,8 @@ public record AnalysisCase(
     AnalysisOptions options,
     List<InputFile> inputs,
     LoopSpec loop,
-    ClearanceRequirements requirements) {
+    ClearanceRequirements requirements,
+    List<InputWarning> warnings) {
   /** Validates and copies. */
   public AnalysisCase {
     Checks.atLeast("format", format, 1);
@@ -51,6 +55,7 @@ public record AnalysisCase(
       throw new InvalidInputException("options", "analysis options", "nothing");
     }
     inputs = inputs == null ? List.of() : List.copyOf(inputs);
+    warnings = warnings == null ? List.of() : List.copyOf(warnings);
     if (loop != null) {
       for (int i = 0; i < configurations.size(); i++) {
         Configuration c = configurations.get(i);
@@ -70,15 +75,22 @@ public record AnalysisCase(
     }
   }
 
+  /** Case without input warnings. */
+  public AnalysisCase(int format, String name, String description, List<Configuration> configurations,
+      SweepPlan sweep, AnalysisOptions options, List<InputFile> inputs, LoopSpec loop,
+      ClearanceRequirements requirements) {
+    this(format, name, description, configurations, sweep, options, inputs, loop, requirements, null);
+  }
+
   /** Open-loop case without a flight-control loop. */
   public AnalysisCase(int format, String name, String description, List<Configuration> configurations,
       SweepPlan sweep, AnalysisOptions options, List<InputFile> inputs) {
-    this(format, name, description, configurations, sweep, options, inputs, null, null);
+    this(format, name, description, configurations, sweep, options, inputs, null, null, null);
   }
 
   /** Case with a loop but no requirements table. */
   public AnalysisCase(int format, String name, String description, List<Configuration> configurations,
       SweepPlan sweep, AnalysisOptions options, List<InputFile> inputs, LoopSpec loop) {
-    this(format, name, description, configurations, sweep, options, inputs, loop, null);
+    this(format, name, description, configurations, sweep, options, inputs, loop, null, null);
   }
 }

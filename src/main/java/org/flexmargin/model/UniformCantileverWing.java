@@ -59,6 +59,18 @@ public record UniformCantileverWing(
     Checks.atLeast("torsion_modes", torsionModes, 1);
     Checks.atLeast("strips", strips, 1);
     Checks.inRange("damping_ratio", dampingRatio, 0.0, 0.999);
+    if (inertiaAxis == InertiaAxis.ELASTIC_AXIS) {
+      double d = (massAxisChordFraction - elasticAxisChordFraction) * chordM;
+      double parallelAxis = massPerLengthKgPerM * d * d;
+      if (!(pitchInertiaKgM > parallelAxis)) {
+        throw new InvalidInputException("pitch_inertia_kg_m",
+            "a pitch inertia about the elastic axis above m d^2 = " + parallelAxis + " kg m, with m = "
+                + "mass_per_length_kg_per_m and d = (mass_axis_chord_fraction - elastic_axis_chord_fraction) "
+                + "x chord_m (otherwise the section's inertia about its own centre of mass would be zero or "
+                + "negative and the mass matrix not positive definite)",
+            pitchInertiaKgM + " kg m");
+      }
+    }
   }
 
   /** @return pitch inertia per unit span about the elastic axis (kg m) */

@@ -152,10 +152,15 @@ class BundledCaseFilesTest {
     TypicalSection ts = (TypicalSection) lpw.configurations().get(0).structure();
     // mu = m / (pi rho b^2) = 100 at sea level (Lee, Price & Wong 1999, from memory), rho from
     // the standard atmosphere; 1e-6 relative (file rounds m to 6 decimals).
-    double rho = StandardAtmosphere.densityKgPerM3(0.0);
+    SpeedSweep s = (SpeedSweep) lpw.sweep();
+    // The file gives density_kg_per_m3 = 1.225 (the paper's sea-level density); the reader turns it
+    // into the standard-atmosphere altitude with that density: sea level, whose density is 1.225
+    // kg/m^3 to four figures (US Standard Atmosphere 1976, Table I). Bisection to 1e-9 m.
+    double rho = StandardAtmosphere.densityKgPerM3(s.altitudeM());
+    assertEquals(1.225, rho, 1e-9);
+    assertEquals(0.0, s.altitudeM(), 0.01);
     assertEquals(100.0, ts.massPerSpanKgPerM() / (Math.PI * rho * ts.semichordM() * ts.semichordM()), 1e-4);
     assertEquals(0.2, ts.heaveFrequencyHz() / ts.pitchFrequencyHz(), 1e-15);
-    SpeedSweep s = (SpeedSweep) lpw.sweep();
     double bw = ts.semichordM() * 2 * Math.PI * ts.pitchFrequencyHz();
     assertEquals(2.0, s.fromMps() / bw, 1e-6);
     assertEquals(8.0, s.toMps() / bw, 1e-6);

@@ -70,7 +70,9 @@ class CaseReaderTest {
   void malformedJsonGivesJacksonLineAndColumn() {
     InputFileException e = failsCase("bad-malformed.json");
     assertEquals(5, e.line()); // the trailing comma before } on line 5
-    assertHas(e.getMessage(), "bad-malformed.json:5: expected well-formed JSON", "column");
+    // the field path names where the parser stopped: after the value of mode_table
+    assertHas(e.getMessage(), "bad-malformed.json:5: configurations[0].mode_table: expected well-formed JSON",
+        "column");
   }
 
   @Test

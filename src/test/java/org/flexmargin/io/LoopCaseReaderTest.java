@@ -155,7 +155,7 @@ class LoopCaseReaderTest {
     assertEquals("loop.computation_delay_ms", e.fieldPath());
     assertEquals("one of the keys actuator, sensors, paths, computation_delay_s, sample_period_s, pade_order",
         e.expected());
-    assertEquals("unknown key \"computation_delay_ms\"", e.found());
+    assertEquals("unknown key \"computation_delay_ms\" (did you mean \"computation_delay_s\"?)", e.found());
   }
 
   @Test
