@@ -12,6 +12,11 @@ import org.flexmargin.io.RequirementsOverride;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.notch.ExistingNotches;
+import org.flexmargin.notch.NotchDesignResult;
+import org.flexmargin.notch.NotchDesignSpec;
+import org.flexmargin.notch.NotchDesigner;
+import org.flexmargin.report.ProposedNotches;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
 import org.flexmargin.report.ResultFiles;
@@ -50,6 +55,11 @@ final class SweepCommand implements Callable<Integer> {
           + "the case's own requirements section.")
   Path requirementsFile;
 
+  @Option(names = "--design-notches", description = "Also place structural notches as notch-design does (its "
+      + "defaults) and show them in the report: on the notch chart and as a \"with proposed notches\" curve on "
+      + "the Bode and Nichols charts. Adds the cost of a notch design.")
+  boolean designNotches;
+
   @Mixin CommonOptions common;
   @Mixin ReportStyleOptions style;
   @Mixin WorkOptions work;
@@ -63,7 +73,7 @@ final class SweepCommand implements Callable<Integer> {
     if (requirementsFile != null) {
       c = RequirementsOverride.apply(c, requirementsFile);
     }
-    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work);
+    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work, designNotches);
   }
 
   /** @return reports/&lt;case name&gt; */
@@ -77,9 +87,14 @@ final class SweepCommand implements Callable<Integer> {
    */
   static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
       ReportStyleOptions style, WorkOptions work) {
+    return run(spec, c, target, common, style, work, false);
+  }
+
+  /** As above; with {@code designNotches} a notch design is made and shown in the report. */
+  static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
+      ReportStyleOptions style, WorkOptions work, boolean designNotches) {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
-    ReportOptions reportOptions = style.reportOptions();
     ReportFolder.checkTarget(target);
     CostEstimate cost = CostEstimate.of(c);
     if (!common.quiet) {
@@ -91,6 +106,8 @@ final class SweepCommand implements Callable<Integer> {
           "at most " + CostEstimate.LIMIT_TEXT + " (give --force to run anyway)",
           "about " + CostEstimate.duration(cost.cpuSeconds()) + "; fewer sweep points or modes bring it down");
     }
+    ReportOptions reportOptions = designNotches && c.loop() != null
+        ? style.reportOptions().withProposedNotches(proposedNotches(c)) : style.reportOptions();
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, cost, terminal);
     SweepResult result = new CaseSweep(work.threads).run(c, bar);
@@ -132,6 +149,18 @@ final class SweepCommand implements Callable<Integer> {
     boolean failed = result.configurations().stream()
         .anyMatch(r -> r.clearance() != null && !r.clearance().passed());
     return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
+  }
+
+  /** A notch design with the defaults of {@code notch-design}, for the report. */
+  private static ProposedNotches proposedNotches(AnalysisCase c) {
+    NotchDesignSpec s = NotchDesignSpec.forRequirements(c.requirements()).withNotchPaths(List.of())
+        .withMaxNotches(3).withExistingNotches(ExistingNotches.REPLACE);
+    s = s.withPoints(1, s.maxSpeedEasMps());
+    NotchDesignResult r = new NotchDesigner().design(c, s);
+    return new ProposedNotches(r.designedLoop(), r.feasible(), String.format(Locale.ROOT,
+        "designed over every configuration%s, limit %.1f dB, frequency uncertainty +-%.0f %%",
+        Double.isFinite(s.maxSpeedEasMps()) ? String.format(Locale.ROOT, " up to %.1f m/s EAS", s.maxSpeedEasMps())
+            : "", s.peakLimitDb(), 100 * s.frequencyUncertainty()));
   }
 
   private static String lowestUnstable(ConfigurationResult r) {

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.flexmargin.model.ClearanceRequirements;
+import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -79,6 +80,18 @@ final class ChartSeries {
    */
   static void regimeLines(XYChart chart, Set<String> used, ClearanceRequirements req, SpeedAxisUnit unit,
       double[] xRange, double[] yRange, List<String> notes) {
+    regimeLines(chart, used, req, unit, xRange, yRange, notes, true);
+  }
+
+  /**
+   * As {@link #regimeLines(XYChart, Set, ClearanceRequirements, SpeedAxisUnit, double[], double[], List)};
+   * without legend entries the lines are named by a short label at their top instead (V0max, V_L,
+   * 1.15 V_L), which keeps the legend of busy charts short.
+   *
+   * @param inLegend whether the lines get legend entries
+   */
+  static void regimeLines(XYChart chart, Set<String> used, ClearanceRequirements req, SpeedAxisUnit unit,
+      double[] xRange, double[] yRange, List<String> notes, boolean inLegend) {
     double[] speeds = {req.maxOperatingSpeedEasMps(), req.limitSpeedEasMps(), req.extendedSpeedEasMps()};
     String[] names = regimeLineNames(req, unit);
     float[][] dash = {{2f, 3f}, {10f, 4f}, {10f, 3f, 2f, 3f}};
@@ -86,7 +99,12 @@ final class ChartSeries {
       double x = unit.fromMps(speeds[i]);
       if (x >= xRange[0] && x <= xRange[1]) {
         line(chart, used, names[i], new double[] {x, x}, new double[] {yRange[0], yRange[1]},
-            ReportStyle.REGIME_LINE, ReportStyle.referenceStroke(1.4f, dash[i]));
+            ReportStyle.REGIME_LINE, ReportStyle.referenceStroke(1.4f, dash[i])).setShowInLegend(inLegend);
+        if (!inLegend) {
+          String label = names[i].substring(0, names[i].indexOf(" = "));
+          chart.addAnnotation(new AnnotationText(label, x + 0.012 * (xRange[1] - xRange[0]) + 0.004 * label.length()
+              * (xRange[1] - xRange[0]), yRange[1] - 0.035 * (yRange[1] - yRange[0]), false));
+        }
       } else {
         notes.add(names[i] + " lies outside the plotted speed range.");
       }

@@ -47,7 +47,7 @@ public final class ClearanceSections {
   /**
    * @param result the sweep
    * @param loopCharts loop charts per configuration name
-   * @param unit speed unit of the charts (tables stay in m/s)
+   * @param unit speed unit of the charts and tables
    * @return the loop sections (configurations with a loop) and the requirements section (if any)
    */
   public static List<ReportSection> of(SweepResult result, Map<String, List<EmbeddedChart>> loopCharts,
@@ -57,11 +57,11 @@ public final class ClearanceSections {
       ConfigurationResult c = result.configurations().get(i);
       if (c.servo() != null || c.clearance() != null) {
         out.add(new LoopSection("loop-" + (i + 1), i, result, c, loopCharts.getOrDefault(c.configuration(),
-            List.of())));
+            List.of()), unit));
       }
     }
     if (result.analysisCase().requirements() != null) {
-      out.add(new RequirementsSection(result.analysisCase().requirements()));
+      out.add(new RequirementsSection(result.analysisCase().requirements(), unit));
     }
     return out;
   }
@@ -76,6 +76,18 @@ public final class ClearanceSections {
    * @param result the sweep
    */
   public static void writeVerdicts(XhtmlWriter w, SweepResult result) {
+    writeVerdicts(w, result, SpeedAxisUnit.METRES_PER_SECOND);
+  }
+
+  /**
+   * As {@link #writeVerdicts(XhtmlWriter, SweepResult)} with speeds in the given unit.
+   *
+   * @param w the page
+   * @param result the sweep
+   * @param unit speed unit of the text and tables
+   */
+  public static void writeVerdicts(XhtmlWriter w, SweepResult result, SpeedAxisUnit unit) {
+    String u = " " + unit.symbol() + " EAS";
     ClearanceRequirements req = result.analysisCase().requirements();
     if (req == null) {
       w.element("p", "No requirements table in the case: results are reported without pass or fail.");
@@ -83,9 +95,9 @@ public final class ClearanceSections {
     }
     w.element("h3", "Clearance against the requirements table");
     w.open("p");
-    w.text("Requirements: V0max " + fmt(req.maxOperatingSpeedEasMps(), 1) + " m/s EAS, V_L "
-        + fmt(req.limitSpeedEasMps(), 1) + " m/s EAS, flutter-free to " + fmt(req.flutterSpeedFactor(), 3)
-        + " x V_L = " + fmt(req.requiredFlutterSpeedEasMps(), 2) + " m/s EAS, damping g at least "
+    w.text("Requirements: V0max " + fmt(unit.fromMps(req.maxOperatingSpeedEasMps()), 1) + u + ", V_L "
+        + fmt(unit.fromMps(req.limitSpeedEasMps()), 1) + u + ", flutter-free to " + fmt(req.flutterSpeedFactor(), 3)
+        + " x V_L = " + fmt(unit.fromMps(req.requiredFlutterSpeedEasMps()), 2) + u + ", damping g at least "
         + fmt(req.minimumDampingG(), 3) + " up to V_L. ");
     if (req.recalledPreset()) {
       w.element("span", "The table starts from a preset recalled from memory and must be verified against the "
@@ -111,8 +123,8 @@ public final class ClearanceSections {
         w.text(gc.passed() ? " Closest to its limit, at "
             : String.format(Locale.ROOT, " Governing finding (severity %d of 5, %s), from ", rf.severity().rank(),
                 rf.severity().words()));
-        num(w, base + "/governing/speed_eas_mps", rf.speedEasMps(), 2);
-        w.text(" m/s EAS: " + gc.description() + "; ");
+        speedNum(w, base + "/governing/speed_eas_mps", rf.speedEasMps(), unit);
+        w.text(u + ": " + gc.description() + "; ");
         requiredAchieved(w, base + "/governing", gc);
         w.text(".");
       } else {
@@ -137,7 +149,7 @@ public final class ClearanceSections {
         w.close("li");
       }
       w.close("ul");
-      requirementTable(w, i, r);
+      requirementTable(w, i, r, unit);
       if (!r.marginOnsets().isEmpty()) {
         w.open("p");
         w.text("Margin onsets (speed at which a loop requirement is first violated, refined between grid points): ");
@@ -147,8 +159,8 @@ public final class ClearanceSections {
             w.text("; ");
           }
           w.text(requirementWords(m.key()) + " at ");
-          num(w, base + "/margin_onsets/" + k + "/speed_eas_mps", m.condition().speedEasMps(), 2);
-          w.text(" m/s EAS" + (m.refined() ? "" : " (not refined)"));
+          speedNum(w, base + "/margin_onsets/" + k + "/speed_eas_mps", m.condition().speedEasMps(), unit);
+          w.text(u + (m.refined() ? "" : " (not refined)"));
         }
         w.text(".");
         w.close("p");
@@ -160,7 +172,7 @@ public final class ClearanceSections {
   }
 
   /** One row per requirement (kind and subject): pass or fail over the sweep, worst point, first onset. */
-  private static void requirementTable(XhtmlWriter w, int config, ClearanceResult r) {
+  private static void requirementTable(XhtmlWriter w, int config, ClearanceResult r, SpeedAxisUnit unit) {
     if (r.points().isEmpty()) {
       return;
     }
@@ -189,8 +201,8 @@ public final class ClearanceSections {
     String base = "/configurations/" + config + "/clearance";
     w.open("table", "class", "requirements-met");
     w.open("thead").open("tr");
-    for (String h : List.of("loop requirement", "result over the sweep", "worst point EAS (m/s)", "required",
-        "achieved", "unit", "first violated at EAS (m/s)")) {
+    for (String h : List.of("loop requirement", "result over the sweep", "worst point EAS (" + unit.symbol() + ")",
+        "required", "achieved", "unit", "first violated at EAS (" + unit.symbol() + ")")) {
       w.element("th", h);
     }
     w.close("tr").close("thead").open("tbody");
@@ -207,7 +219,7 @@ public final class ClearanceSections {
         w.element("span", "fail at " + a[2] + " of " + a[3] + " points", "class", "warn");
       }
       w.close("td");
-      numCell(w, p + "/speed_eas_mps", r.points().get(a[0]).speedEasMps(), 2);
+      speedCell(w, p + "/speed_eas_mps", r.points().get(a[0]).speedEasMps(), unit);
       numCell(w, p + "/checks/" + a[1] + "/required", ck.requiredValue(), decimals(ck));
       numCell(w, p + "/checks/" + a[1] + "/achieved", ck.achievedValue(), decimals(ck));
       w.element("td", ck.unit().symbol());
@@ -219,8 +231,8 @@ public final class ClearanceSections {
         }
       }
       if (onset >= 0) {
-        numCell(w, base + "/margin_onsets/" + onset + "/speed_eas_mps",
-            r.marginOnsets().get(onset).condition().speedEasMps(), 2);
+        speedCell(w, base + "/margin_onsets/" + onset + "/speed_eas_mps",
+            r.marginOnsets().get(onset).condition().speedEasMps(), unit);
       } else if (a[2] == 0) {
         w.element("td", "never", "class", "num");
       } else {
@@ -231,8 +243,9 @@ public final class ClearanceSections {
           }
         }
         w.open("td", "class", "num");
-        w.element("span", fmt(r.points().get(first).speedEasMps(), 2), "data-json", base + "/points/" + first
-            + "/speed_eas_mps", "data-value", value(r.points().get(first).speedEasMps()));
+        w.element("span", fmt(unit.fromMps(r.points().get(first).speedEasMps()), 2), "data-json", base + "/points/"
+            + first + "/speed_eas_mps", "data-value", value(r.points().get(first).speedEasMps()), "data-unit",
+            unit.symbol());
         w.text(" (from its first grid point, no bracket)");
         w.close("td");
       }
@@ -257,7 +270,7 @@ public final class ClearanceSections {
 
   /** The loop and clearance of one configuration. */
   private record LoopSection(String id, int index, SweepResult result, ConfigurationResult c,
-      List<EmbeddedChart> charts) implements ReportSection {
+      List<EmbeddedChart> charts, SpeedAxisUnit unit) implements ReportSection {
     @Override
     public String heading() {
       return "Flight control loop and clearance: " + c.configuration();
@@ -286,7 +299,7 @@ public final class ClearanceSections {
       ClearanceResult cr = c.clearance();
       w.open("table", "class", "per-speed compact");
       w.open("thead").open("tr");
-      for (String h : List.of("EAS (m/s)", "regime", "GM+ (dB)", "GM- (dB)", "PM (deg)", "delay (s)",
+      for (String h : List.of("EAS (" + unit.symbol() + ")", "regime", "GM+ (dB)", "GM- (dB)", "PM (deg)", "delay (ms)",
           "disk GM (dB)", "disk PM (deg)", "peak |L| (dB)", "at mode", "max Re s (1/s)", "result",
           "governing check")) {
         w.element("th", h);
@@ -328,14 +341,13 @@ public final class ClearanceSections {
         }
         String rowClass = pa == null ? null : pa.passed() ? null : "fail";
         w.open("tr", "class", rowClass);
-        w.element("td", fmt(sp.condition().speedEasMps(), 2), "class", "num", "data-json",
-            "/configurations/" + index + "/loop/points/" + i + "/speed_eas_mps", "data-value",
-            value(sp.condition().speedEasMps()));
+        speedCell(w, "/configurations/" + index + "/loop/points/" + i + "/speed_eas_mps",
+            sp.condition().speedEasMps(), unit);
         w.element("td", pa == null ? OpenLoopSections.MISSING : regimeLetter(pa.regime()));
         w.element("td", fmt(gmUp, 1), "class", "num");
         w.element("td", fmt(gmDown, 1), "class", "num");
         w.element("td", fmt(pm, 1), "class", "num");
-        w.element("td", fmt(m.delayMarginS().orElse(Double.NaN), 4), "class", "num");
+        w.element("td", fmt(1000 * m.delayMarginS().orElse(Double.NaN), 1), "class", "num");
         w.element("td", fmt(m.diskMargin().gainUpperDb(), 1), "class", "num");
         w.element("td", fmt(m.diskMargin().phaseMarginDeg(), 1), "class", "num");
         w.element("td", fmt(peak, 1), "class", "num");
@@ -407,7 +419,7 @@ public final class ClearanceSections {
   }
 
   /** The requirements table used, with its source. */
-  private record RequirementsSection(ClearanceRequirements req) implements ReportSection {
+  private record RequirementsSection(ClearanceRequirements req, SpeedAxisUnit unit) implements ReportSection {
     @Override
     public String id() {
       return REQUIREMENTS_ID;
@@ -432,9 +444,11 @@ public final class ClearanceSections {
       w.open("table", "class", "margin-cells");
       w.open("thead").open("tr").element("th", "band");
       String[] regimeWords = {
-        "normal envelope (V <= V0max = " + fmt(req.maxOperatingSpeedEasMps(), 1) + " m/s)",
-        "up to V_L = " + fmt(req.limitSpeedEasMps(), 1) + " m/s",
-        "up to " + fmt(req.extendedSpeedFactor(), 3) + " V_L = " + fmt(req.extendedSpeedEasMps(), 1) + " m/s"
+        "normal envelope (V <= V0max = " + fmt(unit.fromMps(req.maxOperatingSpeedEasMps()), 1) + " " + unit.symbol()
+            + ")",
+        "up to V_L = " + fmt(unit.fromMps(req.limitSpeedEasMps()), 1) + " " + unit.symbol(),
+        "up to " + fmt(req.extendedSpeedFactor(), 3) + " V_L = " + fmt(unit.fromMps(req.extendedSpeedEasMps()), 1) + " "
+            + unit.symbol()
       };
       for (String r : regimeWords) {
         w.element("th", r);
@@ -466,7 +480,7 @@ public final class ClearanceSections {
       pair(w, "phase stabilisation margin", fmt(req.phaseStabilisationMarginDeg(), 0) + " deg from -180 deg");
       pair(w, "modal frequency uncertainty", "+-" + fmt(100 * req.frequencyUncertainty(), 1) + " %");
       pair(w, "flutter speed factor", fmt(req.flutterSpeedFactor(), 3) + " x V_L = "
-          + fmt(req.requiredFlutterSpeedEasMps(), 2) + " m/s EAS");
+          + fmt(unit.fromMps(req.requiredFlutterSpeedEasMps()), 2) + " " + unit.symbol() + " EAS");
       pair(w, "minimum damping up to V_L", "g >= " + fmt(req.minimumDampingG(), 3) + " (zeta >= "
           + fmt(req.minimumDampingG() / 2, 4) + ")");
       pair(w, "started from a recalled preset", req.recalledPreset() ? "yes (to be verified)" : "no");
@@ -495,8 +509,20 @@ public final class ClearanceSections {
     w.text(unit);
   }
 
+  /** A speed in the text: shown in the display unit, JSON pointer, SI value and display unit in the attributes. */
+  private static void speedNum(XhtmlWriter w, String pointer, double mps, SpeedAxisUnit unit) {
+    w.element("span", fmt(unit.fromMps(mps), 2), "class", "num", "data-json", pointer, "data-value", value(mps),
+        "data-unit", unit.symbol());
+  }
+
   private static void num(XhtmlWriter w, String pointer, double v, int decimals) {
     w.element("span", fmt(v, decimals), "class", "num", "data-json", pointer, "data-value", value(v));
+  }
+
+  /** A speed cell: text in the display unit, JSON pointer, SI value and display unit in the attributes. */
+  private static void speedCell(XhtmlWriter w, String pointer, double mps, SpeedAxisUnit unit) {
+    w.element("td", fmt(unit.fromMps(mps), 2), "class", "num", "data-json", pointer, "data-value", value(mps),
+        "data-unit", unit.symbol());
   }
 
   private static void numCell(XhtmlWriter w, String pointer, double v, int decimals) {

@@ -26,7 +26,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * s-plane coloured by airspeed, and closed-loop V-g and V-f diagrams (damping g and frequency of
  * the labelled closed-loop roots against EAS) to read beside the open-loop ones.
  *
- * <p>Root locus: Re s (1/s) against Im s (rad/s), upper half plane. The axes are zoomed on the
+ * <p>Root locus: Re s (1/s) against frequency Im s / 2 pi (Hz), upper half plane. The axes are zoomed on the
  * structural region: Im s up to 1.15 x the highest in-vacuo mode frequency, Re s from
  * {@link #LOCUS_MAX_DAMPING_RATIO} x that height on the left to just right of the rightmost root;
  * roots outside (fast actuator, filter and aerodynamic-lag roots) are counted in a note. Lines of
@@ -97,8 +97,10 @@ public final class ClosedLoopCharts {
     for (double f : c.modeFrequenciesHz()) {
       fTop = Math.max(fTop, f);
     }
-    double yMax = 1.15 * 2 * Math.PI * (fTop > 0 ? fTop : 10);
-    yMax = Math.ceil(yMax / FlutterCharts.niceStep(yMax / 10)) * FlutterCharts.niceStep(yMax / 10);
+    // y in Hz like every other chart; the window is set in rad/s (omega = 2 pi f) on the real axis
+    double yMaxHz = 1.15 * (fTop > 0 ? fTop : 10);
+    yMaxHz = Math.ceil(yMaxHz / FlutterCharts.niceStep(yMaxHz / 10)) * FlutterCharts.niceStep(yMaxHz / 10);
+    double yMax = 2 * Math.PI * yMaxHz;
     double maxRe = 0;
     for (ClosedLoopPoint p : cl.points()) {
       for (ClosedLoopRoot r : p.roots()) {
@@ -114,8 +116,8 @@ public final class ClosedLoopCharts {
     xHi = Math.ceil(xHi / step) * step;
 
     XYChart chart = ChartSeries.chart(c.configuration() + ": closed-loop root locus along the sweep",
-        "real part Re s (1/s)", "imaginary part Im s (rad/s)");
-    chart.getStyler().setXAxisMin(xLo).setXAxisMax(xHi).setYAxisMin(0.0).setYAxisMax(yMax);
+        "real part Re s (1/s)", "frequency Im s / 2 pi (Hz)");
+    chart.getStyler().setXAxisMin(xLo).setXAxisMax(xHi).setYAxisMin(0.0).setYAxisMax(yMaxHz);
     chart.getStyler().setMarkerSize(6);
     chart.getStyler().setXAxisDecimalPattern("0.#");
     chart.getStyler().setYAxisDecimalPattern("0");
@@ -141,10 +143,10 @@ public final class ClosedLoopCharts {
           total++;
           if (r.realPerS() < xLo) {
             left++;
-          } else if (r.imagRadPerS() > yMax) {
+          } else if (r.frequencyHz() > yMaxHz) {
             above++;
           } else {
-            pts.add(new double[] {r.realPerS(), r.imagRadPerS()});
+            pts.add(new double[] {r.realPerS(), r.frequencyHz()});
           }
         }
       }
@@ -161,13 +163,13 @@ public final class ClosedLoopCharts {
       ChartSeries.markers(chart, used, binSeries(unit.fromMps(lo), unit.fromMps(hi), unit), x, y,
           ReportStyle.speedRamp((b + 0.5) / SPEED_BINS), SeriesMarkers.CIRCLE);
     }
-    ChartSeries.line(chart, used, ZETA_ZERO_SERIES, new double[] {0, 0}, new double[] {0, yMax},
+    ChartSeries.line(chart, used, ZETA_ZERO_SERIES, new double[] {0, 0}, new double[] {0, yMaxHz},
         ReportStyle.ZERO_LINE, ReportStyle.referenceStroke(1.6f, null));
     if (limitG > 0) {
       double z = limitG / 2;
       double slope = z / Math.sqrt(1 - z * z);
       ChartSeries.line(chart, used, zetaLimitSeries(limitG), new double[] {0, -slope * yMax},
-          new double[] {0, yMax}, ReportStyle.LIMIT_LINE, ReportStyle.referenceStroke(1.6f, new float[] {8f, 5f}));
+          new double[] {0, yMaxHz}, ReportStyle.LIMIT_LINE, ReportStyle.referenceStroke(1.6f, new float[] {8f, 5f}));
     }
     Map<CrossingKind, List<FlutterCrossing>> byKind = byKind(cl.crossings());
     List<FlutterCrossing> onsets = byKind.getOrDefault(CrossingKind.FLUTTER_ONSET, List.of());
@@ -175,23 +177,23 @@ public final class ClosedLoopCharts {
       double[] x = new double[onsets.size()];
       double[] y = new double[onsets.size()];
       for (int i = 0; i < x.length; i++) {
-        y[i] = 2 * Math.PI * onsets.get(i).frequencyHz();
+        y[i] = onsets.get(i).frequencyHz();
         // a root crossing the axis twice at nearly the same frequency: stack its labels downwards
         int stacked = 0;
         for (int k = 0; k < i; k++) {
-          if (Math.abs(y[k] - y[i]) < 0.05 * yMax) {
+          if (Math.abs(y[k] - y[i]) < 0.05 * yMaxHz) {
             stacked++;
           }
         }
         chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f %s", unit.fromMps(
             onsets.get(i).condition().speedEasMps()), unit.symbol()), x[i] + 0.075 * (xHi - xLo),
-            y[i] - stacked * 0.045 * yMax, false));
+            y[i] - stacked * 0.045 * yMaxHz, false));
       }
       ChartSeries.markers(chart, used, markerSeries(CrossingKind.FLUTTER_ONSET), x, y, ReportStyle.ONSET,
           SeriesMarkers.DIAMOND);
       // the dots of the locus hide a marker of their own size: ring each onset with a larger outline
       double hx = 0.018 * (xHi - xLo);
-      double hy = 0.03 * yMax;
+      double hy = 0.03 * yMaxHz;
       double[] ox = new double[6 * x.length];
       double[] oy = new double[6 * x.length];
       for (int i = 0; i < x.length; i++) {
@@ -207,9 +209,9 @@ public final class ClosedLoopCharts {
     }
     List<String> notes = new ArrayList<>();
     notes.add(String.format(Locale.ROOT, "Zoomed on the structural region: Re s from %.3g to %.3g 1/s, Im s up to "
-        + "%.4g rad/s (1.15 x the highest in-vacuo mode frequency). %d of %d roots lie further left (well-damped "
+        + "%.4g Hz (1.15 x the highest in-vacuo mode frequency). %d of %d roots lie further left (well-damped "
         + "actuator, filter, delay and aerodynamic-lag roots) and %d above; they are not drawn.",
-        xLo, xHi, yMax, left, total, above));
+        xLo, xHi, yMaxHz, left, total, above));
     notes.add("Colours: airspeed bins on a ramp from pale gold (lowest speed) to deep violet (highest); one dot per "
         + "closed-loop root and grid point. Roots on the real axis are aperiodic.");
     if (!onsets.isEmpty()) {
@@ -221,43 +223,33 @@ public final class ClosedLoopCharts {
             + "lines of zero damping and of the damping limit.", chart, notes);
   }
 
-  /** Closed-loop V-g (damping) or V-f (frequency) by root label. */
+  /** Name of the legend entry of the grouped loop roots (rigid body with the loop, short period, others). */
+  public static final String LOOP_ROOTS_SERIES = "rigid-body and loop roots";
+
+  /**
+   * Closed-loop V-g (damping) or V-f (frequency): every root followed from speed to speed
+   * ({@link RootTracks}), one line per structural mode named after its open-loop parent, the
+   * other roots in one grey group with one legend entry.
+   */
   private static ReportChart vg(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit, boolean damping) {
     ClosedLoopResult cl = c.servo().closedLoop();
     double limitG = result.analysisCase().options().dampingLimitG();
     List<ClosedLoopPoint> pts = cl.points();
     int n = pts.size();
-    // labels in order: modes of the configuration, then others as met; k-th root of a label by frequency
-    Map<String, List<double[]>> series = new LinkedHashMap<>();
     int omittedControl = 0;
     double controlMaxRe = Double.NEGATIVE_INFINITY;
-    for (String m : c.modeNames()) {
-      series.put(m, new ArrayList<>());
-    }
-    for (int i = 0; i < n; i++) {
-      Map<String, List<ClosedLoopRoot>> at = new LinkedHashMap<>();
-      for (ClosedLoopRoot r : pts.get(i).roots()) {
+    int real = 0;
+    for (ClosedLoopPoint p : pts) {
+      for (ClosedLoopRoot r : p.roots()) {
         if (r.label().equals(CONTROL_LOOP_LABEL)) {
           omittedControl++;
           controlMaxRe = Math.max(controlMaxRe, r.realPerS());
-          continue;
-        }
-        at.computeIfAbsent(r.label(), k -> new ArrayList<>()).add(r);
-      }
-      for (Map.Entry<String, List<ClosedLoopRoot>> e : at.entrySet()) {
-        List<ClosedLoopRoot> rs = new ArrayList<>(e.getValue());
-        rs.sort((a, b) -> Double.compare(a.imagRadPerS(), b.imagRadPerS()));
-        for (int k = 0; k < rs.size(); k++) {
-          String name = k == 0 ? e.getKey() : e.getKey() + " #" + (k + 1);
-          List<double[]> a = series.computeIfAbsent(name, x -> new ArrayList<>());
-          while (a.size() < n) {
-            a.add(new double[] {Double.NaN, Double.NaN});
-          }
-          ClosedLoopRoot r = rs.get(k);
-          a.set(i, new double[] {r.dampingG(), r.frequencyHz()});
+        } else if (r.imagRadPerS() == 0) {
+          real++;
         }
       }
     }
+    List<RootTracks.Track> tracks = RootTracks.of(pts, c.modeNames(), c.modeFrequenciesHz());
     double[] easX = new double[n];
     for (int i = 0; i < n; i++) {
       easX[i] = pts.get(i).condition().speedEasMps();
@@ -265,36 +257,30 @@ public final class ClosedLoopCharts {
     double[] xr = FlutterCharts.easRange(result);
     double[] x = ChartSeries.speeds(easX, unit);
     List<double[]> ys = new ArrayList<>();
-    Map<String, double[]> curves = new LinkedHashMap<>();
-    int aperiodic = 0;
+    List<double[]> curves = new ArrayList<>();
+    List<RootTracks.Track> drawn = new ArrayList<>();
     int hidden = 0;
-    for (Map.Entry<String, List<double[]>> e : series.entrySet()) {
-      if (e.getValue().isEmpty()) {
-        continue;
-      }
-      double[] y = MarginCharts.nan(n);
-      for (int i = 0; i < e.getValue().size(); i++) {
-        double v = e.getValue().get(i)[damping ? 0 : 1];
-        if (damping && Double.isInfinite(v)) {
-          aperiodic++;
-        }
-        y[i] = Double.isFinite(v) ? v : Double.NaN;
-      }
+    for (RootTracks.Track t : tracks) {
+      double[] y = damping ? t.dampingG() : t.frequencyHz();
       int finite = 0;
       for (double v : y) {
         finite += Double.isFinite(v) ? 1 : 0;
       }
       if (finite < 2) {
-        hidden++; // a real (aperiodic) root nearly all along: no line to draw
+        hidden++; // present at one grid point only: no line to draw
         continue;
       }
-      curves.put(e.getKey(), y);
-      ys.add(y);
+      curves.add(y);
+      drawn.add(t);
+      if (t.structural() || damping) {
+        ys.add(y);
+      }
     }
     double[] yr;
     if (damping) {
       yr = FlutterCharts.dampingRange(ys, limitG);
     } else {
+      // the frequency axis follows the structural roots; loop roots above them run off the top
       yr = ChartSeries.range(ys, new double[] {0}, 0, Double.POSITIVE_INFINITY);
       yr[0] = 0;
     }
@@ -306,86 +292,82 @@ public final class ClosedLoopCharts {
     chart.getStyler().setXAxisDecimalPattern("0.#");
     chart.getStyler().setYAxisDecimalPattern(damping ? "0.0#" : "0.#");
     Set<String> used = new HashSet<>();
-    int m = 0;
     List<String> clipped = new ArrayList<>();
-    for (Map.Entry<String, double[]> e : curves.entrySet()) {
-      int modeIndex = c.modeNames().indexOf(e.getKey());
-      int ci = modeIndex >= 0 ? modeIndex : c.modeNames().size() + m++;
-      int[] out = ChartSeries.outside(e.getValue(), yr[0], yr[1]);
-      if (out[0] + out[1] > 0) {
-        clipped.add(e.getKey() + ": " + (out[0] + out[1]));
+    int loopClipped = 0;
+    boolean loopLegend = false;
+    // loop roots first, so that the structural lines are drawn over them
+    for (int pass = 0; pass < 2; pass++) {
+      for (int k = 0; k < drawn.size(); k++) {
+        RootTracks.Track t = drawn.get(k);
+        if (t.structural() != (pass == 1)) {
+          continue;
+        }
+        double[] y = curves.get(k);
+        int[] out = ChartSeries.outside(y, yr[0], yr[1]);
+        if (t.structural()) {
+          int ci = c.modeNames().indexOf(t.name());
+          if (out[0] + out[1] > 0) {
+            clipped.add(t.name() + ": " + (out[0] + out[1]));
+          }
+          ChartSeries.line(chart, used, t.name(), x, y, ReportStyle.seriesColor(ci), ReportStyle.seriesStroke(ci));
+        } else {
+          loopClipped += out[0] + out[1];
+          ChartSeries.line(chart, used, LOOP_ROOTS_SERIES, x, y, ReportStyle.LOOP_ROOT,
+              ReportStyle.referenceStroke(1.3f, null)).setShowInLegend(!loopLegend);
+          loopLegend = true;
+        }
       }
-      ChartSeries.line(chart, used, e.getKey(), x, e.getValue(), ReportStyle.seriesColor(ci),
-          ReportStyle.seriesStroke(ci));
     }
     double x0 = unit.fromMps(xr[0]);
     double x1 = unit.fromMps(xr[1]);
     List<String> notes = new ArrayList<>();
     if (damping) {
+      // named on the plot, not in the legend, to keep the legend to the roots and markers
       ChartSeries.line(chart, used, FlutterCharts.ZERO_LINE_SERIES, new double[] {x0, x1}, new double[] {0, 0},
-          ReportStyle.ZERO_LINE, ReportStyle.referenceStroke(1.6f, null));
+          ReportStyle.ZERO_LINE, ReportStyle.referenceStroke(1.6f, null)).setShowInLegend(false);
+      double dy = 0.025 * (yr[1] - yr[0]);
+      chart.addAnnotation(new AnnotationText("g = 0", x0 + 0.03 * (x1 - x0), dy, false));
       if (limitG > 0) {
         ChartSeries.line(chart, used, FlutterCharts.limitLineSeries(limitG), new double[] {x0, x1},
             new double[] {-limitG, -limitG}, ReportStyle.LIMIT_LINE,
-            ReportStyle.referenceStroke(1.6f, new float[] {8f, 5f}));
+            ReportStyle.referenceStroke(1.6f, new float[] {8f, 5f})).setShowInLegend(false);
+        chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "limit g = %.3f", -limitG),
+            x0 + 0.06 * (x1 - x0), -limitG - dy, false));
       }
     }
     if (c.clearance() != null) {
       ChartSeries.regimeLines(chart, used, result.analysisCase().requirements(), unit,
-          new double[] {x0, x1}, yr, notes);
+          new double[] {x0, x1}, yr, notes, false);
     }
-    for (Map.Entry<CrossingKind, List<FlutterCrossing>> e : byKind(cl.crossings()).entrySet()) {
-      List<FlutterCrossing> xs = e.getValue();
-      double[] mx = new double[xs.size()];
-      double[] my = new double[xs.size()];
-      for (int i = 0; i < xs.size(); i++) {
-        mx[i] = unit.fromMps(xs.get(i).condition().speedEasMps());
-        my[i] = damping ? xs.get(i).thresholdG() : xs.get(i).frequencyHz();
-      }
-      XYSeries s = ChartSeries.markers(chart, used, markerSeries(e.getKey()), mx, my,
-          FlutterCharts.markerColor(e.getKey()), FlutterCharts.marker(e.getKey()));
-      s.setMarker(FlutterCharts.marker(e.getKey()));
-      if (damping && e.getKey() == CrossingKind.FLUTTER_ONSET) {
-        double dx = 0.035 * (x1 - x0);
-        double dy = 0.06 * (yr[1] - yr[0]);
-        double[] sorted = mx.clone();
-        java.util.Arrays.sort(sorted);
-        for (int i = 0; i < mx.length; i++) {
-          // labels of onsets closer than 6 % of the axis stack upwards so that they do not overlap
-          int stack = 0;
-          for (int k = 1; k < sorted.length && sorted[k] <= mx[i]; k++) {
-            stack = sorted[k] - sorted[k - 1] < 0.06 * (x1 - x0) ? stack + 1 : 0;
-          }
-          chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f", mx[i]), mx[i] - dx,
-              my[i] + dy * (1 + stack), false));
-        }
-        chart.getStyler().setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.BOLD, 12));
-        chart.getStyler().setAnnotationTextFontColor(ReportStyle.ONSET);
-      }
-    }
-    notes.add("Roots are labelled by the open-loop root they are nearest to; a label held by several roots at one "
-        + "point gives lines #2, #3 (ordered by frequency).");
+    FlutterCharts.crossingMarkers(chart, used, cl.crossings(), unit, damping, new double[] {x0, x1}, yr,
+        ClosedLoopCharts::markerSeries);
+    long loopTracks = drawn.stream().filter(t -> !t.structural()).count();
+    notes.add("Each line is one closed-loop root followed from speed to speed (nearest root at the next grid point), "
+        + "named after the open-loop mode it starts from; " + loopTracks + " other roots (rigid body with the loop, "
+        + "short period, second roots near a mode) are drawn thin grey as \"" + LOOP_ROOTS_SERIES + "\".");
     if (omittedControl > 0) {
       notes.add(String.format(Locale.ROOT, "%d \"%s\" roots (actuator, sensors, filters, delay, aerodynamic lags) "
           + "are not drawn as lines; their largest real part is %.4g 1/s. Their crossings, if any, are still "
           + "marked.", omittedControl, CONTROL_LOOP_LABEL, controlMaxRe));
     }
-    if (damping && aperiodic > 0) {
-      notes.add(aperiodic + " points are real (aperiodic) roots with g infinite; they are left as gaps.");
+    if (real > 0) {
+      notes.add(real + " root-points are on the real axis (aperiodic, g infinite) and are not drawn; they are in the "
+          + "root locus and in results.json.");
     }
     if (hidden > 0) {
-      notes.add(hidden + " labelled roots are real (or present at fewer than two grid points) all along and have no "
-          + "line; they are in the root locus and in results.json.");
+      notes.add(hidden + " roots appear at a single grid point only and have no line.");
     }
-    if (!clipped.isEmpty()) {
-      notes.add("Points outside the plotted range (per line): " + String.join(", ", clipped) + ".");
+    if (!clipped.isEmpty() || loopClipped > 0) {
+      notes.add("Points outside the plotted range (per line): " + String.join(", ", clipped)
+          + (loopClipped > 0 ? (clipped.isEmpty() ? "" : ", ") + "loop roots: " + loopClipped : "") + ".");
     }
     String stem = (damping ? "cl-vg-" : "cl-vf-") + ResultFiles.fileSafe(c.configuration());
     String caption = damping
-        ? "Closed-loop damping g of the labelled roots against equivalent airspeed (with the flight control loop; "
-            + "compare with the open-loop V-g above). Markers at the refined closed-loop crossings."
-        : "Closed-loop frequency of the labelled roots against equivalent airspeed; markers at the refined "
-            + "closed-loop crossings.";
+        ? "Closed-loop damping g of every root against equivalent airspeed (with the flight control loop; "
+            + "compare with the open-loop V-g above). Markers at the refined closed-loop crossings, labelled with "
+            + "their speed."
+        : "Closed-loop frequency of every root against equivalent airspeed; markers at the refined closed-loop "
+            + "crossings.";
     return new ReportChart(stem, caption, chart, notes);
   }
 

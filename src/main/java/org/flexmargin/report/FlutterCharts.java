@@ -15,6 +15,7 @@ import org.flexmargin.flutter.CrossingKind;
 import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.model.ClearanceRequirements;
 import org.flexmargin.model.FlutterMethodKind;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Findings;
@@ -187,44 +188,16 @@ public final class FlutterCharts {
       notes.add("No static divergence found for this configuration.");
     }
 
-    Map<CrossingKind, List<FlutterCrossing>> byKind = new EnumMap<>(CrossingKind.class);
-    for (FlutterCrossing x : s.crossings()) {
-      byKind.computeIfAbsent(x.kind(), k -> new ArrayList<>()).add(x);
+    int outside = crossingMarkers(chart, used, s.crossings(), unit, damping, new double[] {xMin, xMax}, yRange,
+        FlutterCharts::markerSeries);
+    if (outside > 0) {
+      notes.add(outside + (outside == 1 ? " crossing lies" : " crossings lie")
+          + " outside the plotted speed range and cannot be marked; see the findings table.");
     }
-    for (Map.Entry<CrossingKind, List<FlutterCrossing>> e : byKind.entrySet()) {
-      List<FlutterCrossing> xs = e.getValue();
-      double[] mx = new double[xs.size()];
-      double[] my = new double[xs.size()];
-      int outside = 0;
-      for (int i = 0; i < xs.size(); i++) {
-        double eas = xs.get(i).condition().speedEasMps();
-        mx[i] = unit.fromMps(eas);
-        my[i] = damping ? xs.get(i).thresholdG() : xs.get(i).frequencyHz();
-        if (eas < easRangeMps[0] || eas > easRangeMps[1]) {
-          outside++;
-        }
-      }
-      if (outside > 0) {
-        notes.add(outside + " " + markerSeries(e.getKey()) + (outside == 1 ? " lies" : " crossings lie")
-            + " outside the plotted speed range and cannot be marked; see the findings table.");
-      }
-      XYSeries series = chart.addSeries(unique(markerSeries(e.getKey()), used), mx, my);
-      series.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-      series.setMarker(marker(e.getKey()));
-      series.setMarkerColor(markerColor(e.getKey()));
-      if (damping && e.getKey() == CrossingKind.FLUTTER_ONSET) {
-        // speed label up and to the left of the marker: an onset root rises to the right, so that
-        // corner is clear of its own curve
-        double dx = 0.035 * (xMax - xMin);
-        double dy = 0.06 * (yRange[1] - yRange[0]);
-        for (int i = 0; i < xs.size(); i++) {
-          chart.addAnnotation(
-              new AnnotationText(String.format(Locale.ROOT, "%.1f", mx[i]), mx[i] - dx, my[i] + dy, false));
-        }
-      }
+    ClearanceRequirements req = result.analysisCase().requirements();
+    if (req != null) {
+      ChartSeries.regimeLines(chart, used, req, unit, new double[] {xMin, xMax}, yRange, notes, false);
     }
-    chart.getStyler().setAnnotationTextFont(new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.BOLD, 12));
-    chart.getStyler().setAnnotationTextFontColor(ReportStyle.ONSET);
 
     if (damping) {
       describe(notes, below, "lie below g = " + fmt(yRange[0]) + " (strongly damped) and run off the bottom of the plot");
@@ -245,6 +218,69 @@ public final class FlutterCharts {
             + "); markers at the refined damping crossings, at the frequency of the root there.";
     String stem = (damping ? "vg-" : "vf-") + ResultFiles.fileSafe(c.configuration());
     return new ReportChart(stem, caption, chart, notes);
+  }
+
+  /**
+   * Marks refined crossings, one marker series per kind, and labels every flutter onset with its
+   * speed and unit just above and to the right of its marker (labels of onsets close together
+   * stack upwards).
+   *
+   * @param chart chart
+   * @param used series names taken
+   * @param crossings the crossings
+   * @param unit speed unit
+   * @param damping V-g (y = threshold g) or V-f (y = frequency, Hz)
+   * @param xRange plotted speed range, display unit
+   * @param yRange plotted y range
+   * @param name series name of a kind
+   * @return number of crossings outside the plotted speed range
+   */
+  static int crossingMarkers(XYChart chart, Set<String> used, List<FlutterCrossing> crossings, SpeedAxisUnit unit,
+      boolean damping, double[] xRange, double[] yRange, java.util.function.Function<CrossingKind, String> name) {
+    Map<CrossingKind, List<FlutterCrossing>> byKind = new EnumMap<>(CrossingKind.class);
+    for (FlutterCrossing x : crossings) {
+      byKind.computeIfAbsent(x.kind(), k -> new ArrayList<>()).add(x);
+    }
+    int outside = 0;
+    double spanX = xRange[1] - xRange[0];
+    double spanY = yRange[1] - yRange[0];
+    for (Map.Entry<CrossingKind, List<FlutterCrossing>> e : byKind.entrySet()) {
+      List<FlutterCrossing> xs = e.getValue();
+      double[] mx = new double[xs.size()];
+      double[] my = new double[xs.size()];
+      for (int i = 0; i < xs.size(); i++) {
+        mx[i] = unit.fromMps(xs.get(i).condition().speedEasMps());
+        my[i] = damping ? xs.get(i).thresholdG() : xs.get(i).frequencyHz();
+        if (mx[i] < xRange[0] || mx[i] > xRange[1]) {
+          outside++;
+        }
+      }
+      XYSeries series = chart.addSeries(unique(name.apply(e.getKey()), used), mx, my);
+      series.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+      series.setMarker(marker(e.getKey()));
+      series.setMarkerColor(markerColor(e.getKey()));
+      if (e.getKey() != CrossingKind.FLUTTER_ONSET) {
+        continue;
+      }
+      List<double[]> placed = new ArrayList<>();
+      for (int i = 0; i < mx.length; i++) {
+        String text = String.format(Locale.ROOT, "%.1f %s", mx[i], unit.symbol());
+        // the text is centred on its anchor: half its width (about 0.55 em per character at 12 px on a
+        // plot about 900 px wide) to the right of a small gap puts its left edge beside the marker
+        double lx = mx[i] + spanX * (0.008 + 0.5 * text.length() * 7.0 / 900);
+        double ly = my[i] + 0.045 * spanY;
+        for (double[] p : placed) {
+          if (Math.abs(p[0] - lx) < 0.08 * spanX && Math.abs(p[1] - ly) < 0.045 * spanY) {
+            ly = p[1] + 0.05 * spanY;
+          }
+        }
+        placed.add(new double[] {lx, ly});
+        chart.addAnnotation(new AnnotationText(text, lx, Math.min(ly, yRange[1] - 0.03 * spanY), false));
+      }
+    }
+    chart.getStyler().setAnnotationTextFont(new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.BOLD, 12));
+    chart.getStyler().setAnnotationTextFontColor(ReportStyle.ZERO_LINE);
+    return outside;
   }
 
   /** @return [min, max] EAS over the grid points of the sweep path (m/s) */

@@ -9,9 +9,11 @@ import java.util.Set;
  * other outside resources (images are embedded as data URIs by the sections), so the single file
  * can be archived, mailed and opened offline. The markup is well-formed XML as well as HTML.
  *
- * <p>Order: title block with a short pointer to the cautions, table of contents, the given
- * sections in order, then the cautions ({@link Cautions#TEXT}) in a prominent box, always last and
- * never optional.
+ * <p>Order: a short title block; the first screen (the verdict strip and margin panel, when given);
+ * a short pointer to the cautions; the case description; the table of contents; the given sections
+ * in order; then the cautions ({@link Cautions#TEXT}) in a prominent box, always last and never
+ * optional. A print style sheet lays the page out as a document: no coloured bands, charts and
+ * tables kept whole on a page, every section heading with its content, the link targets hidden.
  */
 public final class HtmlReport {
   private HtmlReport() {}
@@ -64,7 +66,40 @@ public final class HtmlReport {
       "table.compact td,table.compact th{padding:2px 6px;white-space:nowrap}",
       "table.compact td:last-child{white-space:normal}",
       "tr.fail td{background:#fdf1f0}",
-      "footer{color:var(--muted);font-size:12px;margin-top:24px}");
+      "footer{color:var(--muted);font-size:12px;margin-top:24px}",
+      "section.first-screen{margin:12px 0 4px}",
+      "table.verdict-strip{width:100%;margin:0 0 6px;font-size:13px}",
+      "table.verdict-strip th,table.verdict-strip td{padding:5px 7px}",
+      "table.verdict-strip tbody th{font-size:14px;white-space:nowrap}",
+      "table.verdict-strip td.num{white-space:normal;text-align:left}",
+      "td.fail-cell{background:#fdf1f0}",
+      ".muted,.badge.muted{color:var(--muted)}",
+      ".badge.muted{background:var(--soft);border:1px solid var(--rule)}",
+      "p.strip-note{margin:2px 0 6px;color:var(--muted);font-size:12px}",
+      "figure.panel{margin:4px 0 10px}",
+      "div.panel-row{display:flex;flex-wrap:wrap;gap:6px}",
+      "div.panel-row img{border:1px solid var(--rule);max-width:32.5%;height:auto}",
+      "div.case{margin:8px 0;padding:6px 12px;background:var(--soft);border:1px solid var(--rule);font-size:13px}",
+      "div.case p{margin:3px 0}",
+      "@page{size:A4;margin:14mm 12mm}",
+      "@media print{",
+      "body{font-size:10pt;line-height:1.35}",
+      "header.top{background:none;color:var(--ink);padding:0 0 4pt;border-bottom:2pt solid var(--ink)}",
+      "header.top p{color:var(--ink)}",
+      "main{max-width:none;padding:0}",
+      "nav.toc{display:none}",
+      "h2{break-after:avoid;page-break-after:avoid}",
+      "h3{break-after:avoid;page-break-after:avoid}",
+      "section{break-before:auto}",
+      "figure,table.verdict-strip,div.verdict,tr,.headline{break-inside:avoid;page-break-inside:avoid}",
+      "thead{display:table-header-group}",
+      "figure img{max-width:100%;border:none}",
+      "div.panel-row img{max-width:32.5%}",
+      ".badge,.verdict.fail,tr.fail td,tr.flutter td,tr.limit td,td.fail-cell{-webkit-print-color-adjust:exact;"
+          + "print-color-adjust:exact}",
+      "section.cautions{break-inside:avoid;page-break-inside:avoid}",
+      "footer{display:none}",
+      "}");
 
   /**
    * @param title page title (plain text)
@@ -74,6 +109,20 @@ public final class HtmlReport {
    * @return the complete page
    */
   public static String render(String title, List<String> subtitleLines, List<ReportSection> sections) {
+    return render(title, subtitleLines, w -> { }, List.of(), sections);
+  }
+
+  /**
+   * @param title page title (plain text)
+   * @param subtitleLines short lines under the title (plain text)
+   * @param firstScreen writes what comes first under the title (the verdict strip)
+   * @param caseLines the case description, after the first screen (plain text, one paragraph each)
+   * @param sections body sections, in order; ids must be unique and differ from
+   *     {@link #CAUTIONS_ID}
+   * @return the complete page
+   */
+  public static String render(String title, List<String> subtitleLines,
+      java.util.function.Consumer<XhtmlWriter> firstScreen, List<String> caseLines, List<ReportSection> sections) {
     Set<String> ids = new HashSet<>();
     ids.add(CAUTIONS_ID);
     for (ReportSection s : sections) {
@@ -98,8 +147,16 @@ public final class HtmlReport {
     }
     w.close("header");
     w.open("main");
+    firstScreen.accept(w);
     w.element("p", "Analysis only: these results support, and never replace, ground and flight testing and the "
         + "airworthiness approval. Read the cautions at the end of this report.", "class", "pointer");
+    if (!caseLines.isEmpty()) {
+      w.open("div", "class", "case");
+      for (String line : caseLines) {
+        w.element("p", line);
+      }
+      w.close("div");
+    }
     w.open("nav", "class", "toc");
     w.element("strong", "Contents");
     w.open("ol");

@@ -46,8 +46,9 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * point where the clearance's worst loop check is worst (smallest normalised excess); without a
  * table three speeds at 1/6, 1/2 and 5/6 of the swept range. The Nichols chart shows the
  * exclusion region around the critical point (-180 deg, 0 dB): a diamond with corners at +-GM and
- * +-PM, the rigid-body normal-envelope margins of the table, or 6 dB and 45 deg (common practice)
- * without one. Phases are drawn wrapped into (-360, 0] deg with a gap at each wrap.
+ * +-PM, one for each frequency band (rigid-body and aeroelastic normal-envelope margins of the
+ * table, or 6 dB and 45 deg, common practice, without one), repeated at every -180 + k 360 deg in
+ * range. Phases are drawn continuous (unwrapped along frequency), never wrapped.
  */
 public final class LoopResponseCharts {
   private LoopResponseCharts() {}
@@ -84,8 +85,8 @@ public final class LoopResponseCharts {
    * @param notches whether the case's notch filters are in the loop
    * @param frequencyHz ascending frequencies, Hz
    * @param gainDb 20 log10 |L|, dB
-   * @param phaseDeg arg L unwrapped along the grid (continuous), starting from the principal value
-   *     at the lowest frequency, deg
+   * @param phaseDeg arg L unwrapped along the grid (continuous), shifted by whole turns so that it
+   *     starts in (-360, 0] deg at the lowest frequency, deg
    */
   public record Response(ChosenSpeed speed, boolean notches, double[] frequencyHz, double[] gainDb,
       double[] phaseDeg) {}
@@ -108,6 +109,32 @@ public final class LoopResponseCharts {
    */
   public static String exclusionSeries(double gainDb, double phaseDeg) {
     return String.format(Locale.ROOT, "%s (+-%.3g dB, +-%.3g deg)", EXCLUSION_SERIES_PREFIX, gainDb, phaseDeg);
+  }
+
+  /**
+   * @param n notch
+   * @param path path index
+   * @param sensor sensor name of the path
+   * @return name of a notch attenuation series
+   */
+  /**
+   * @param n a proposed notch
+   * @return name of its attenuation series
+   */
+  public static String proposedNotchSeries(NotchFilterSpec n) {
+    return String.format(Locale.ROOT, "proposed notch %.4g Hz, depth %.3g dB", n.centreHz(), n.depthDb());
+  }
+
+  /** @return 20 log10 |N(j 2 pi f)| of a notch at every frequency, dB (floored at -120 dB) */
+  private static double[] notchDb(NotchFilterSpec n, double[] f) {
+    NotchFilter nf = new NotchFilter(n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio());
+    double[] v = new double[2];
+    double[] db = new double[f.length];
+    for (int i = 0; i < f.length; i++) {
+      nf.response(2 * Math.PI * f[i], v);
+      db[i] = 20 * Math.log10(Math.max(Math.hypot(v[0], v[1]), 1e-6));
+    }
+    return db;
   }
 
   /**
@@ -287,6 +314,11 @@ public final class LoopResponseCharts {
       ph[i] = p;
       prev = p;
     }
+    // the whole curve shifted by whole turns so that it starts in (-360, 0] deg, as loop phases are read
+    double shift = n == 0 ? 0 : -360 * Math.ceil(ph[0] / 360);
+    for (int i = 0; i < n; i++) {
+      ph[i] += shift;
+    }
     return new Response(speed, notches, frequencyHz.clone(), g, ph);
   }
 
@@ -323,18 +355,78 @@ public final class LoopResponseCharts {
    * @return Bode gain, Bode phase, Nichols, notch attenuation (the last only if the loop has notches)
    */
   public static List<ReportChart> of(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit) {
+    return of(result, c, unit, null);
+  }
+
+  /**
+   * @param result the sweep
+   * @param c one configuration with loop results
+   * @param unit speed unit of the legends
+   * @param proposed a notch design to draw beside the case's loop, or null
+   * @return Bode gain, Bode phase, Nichols (each with a "with proposed notches" curve per speed when
+   *     a design is given), notch attenuation (when the loop or the design has notches; the
+   *     proposed notches dashed)
+   */
+  public static List<ReportChart> of(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit,
+      ProposedNotches proposed) {
     if (c.servo() == null || result.analysisCase().loop() == null) {
       return List.of();
     }
     List<Response> rs = responses(result, c);
+    List<Response> prop = proposed == null ? List.of() : proposedResponses(result, c, proposed, rs);
     List<ReportChart> out = new ArrayList<>();
-    out.add(bodeGain(result, c, rs, unit));
-    out.add(bodePhase(result, c, rs, unit));
-    out.add(nichols(result, c, rs, unit));
-    if (hasNotches(result.analysisCase().loop())) {
-      out.add(notchChart(result, c));
+    out.add(withProposed(bodeGain(result, c, rs, unit), prop, unit, 0));
+    out.add(withProposed(bodePhase(result, c, rs, unit), prop, unit, 1));
+    out.add(withProposed(nichols(result, c, rs, unit), prop, unit, 2));
+    if (hasNotches(result.analysisCase().loop()) || proposed != null) {
+      out.add(notchChart(result, c, proposed));
     }
     return out;
+  }
+
+  /**
+   * @param speed chosen speed
+   * @param unit speed unit
+   * @return the legend name of the response with the proposed notches
+   */
+  public static String proposedSeries(ChosenSpeed speed, SpeedAxisUnit unit) {
+    return String.format(Locale.ROOT, "%s %.1f %s, with proposed notches", speed.label(),
+        unit.fromMps(speed.speedEasMps()), unit.symbol());
+  }
+
+  /** The loop with the proposed notches at the same speeds and frequencies as the case's responses. */
+  private static List<Response> proposedResponses(SweepResult result, ConfigurationResult c, ProposedNotches p,
+      List<Response> rs) {
+    Configuration conf = result.analysisCase().configurations().stream()
+        .filter(x -> x.name().equals(c.configuration())).findFirst().orElseThrow();
+    ConfigurationModel model = ConfigurationModel.of(conf);
+    List<Response> out = new ArrayList<>();
+    for (Response r : rs) {
+      if (r.notches()) {
+        FlightCondition fc = conditionAt(result, r.speed().speedEasMps());
+        out.add(sample(r.speed(), true, ServoMargins.loopAt(model, conf, p.loop(), fc).brokenLoop(), r.frequencyHz()));
+      }
+    }
+    return out;
+  }
+
+  /** Adds the proposed-notch curves (thick dotted, the speed's colour) to a Bode (0, 1) or Nichols (2) chart. */
+  private static ReportChart withProposed(ReportChart rc, List<Response> prop, SpeedAxisUnit unit, int kind) {
+    if (prop.isEmpty()) {
+      return rc;
+    }
+    Set<String> used = new HashSet<>(rc.chart().getSeriesMap().keySet());
+    for (int i = 0; i < prop.size(); i++) {
+      Response r = prop.get(i);
+      double[] g = finite(r.gainDb());
+      double[] x = kind == 2 ? r.phaseDeg() : r.frequencyHz();
+      double[] y = kind == 1 ? r.phaseDeg() : g;
+      ChartSeries.line(rc.chart(), used, proposedSeries(r.speed(), unit), x, y, speedColor(i),
+          ReportStyle.referenceStroke(2.8f, new float[] {1.5f, 3.5f}));
+    }
+    List<String> notes = new ArrayList<>(rc.notes());
+    notes.add("Dotted: the same loop with the proposed notch design in place of the case's notches.");
+    return new ReportChart(rc.fileStem(), rc.caption() + " Dotted: with the proposed notches.", rc.chart(), notes);
   }
 
   private static String speedWords(List<Response> rs, SpeedAxisUnit unit) {
@@ -393,18 +485,24 @@ public final class LoopResponseCharts {
   private static ReportChart bodePhase(SweepResult result, ConfigurationResult c, List<Response> rs,
       SpeedAxisUnit unit) {
     XYChart chart = ChartSeries.chart(c.configuration() + ": broken-loop phase (Bode)",
-        "frequency (Hz, logarithmic)", "phase arg L (deg, wrapped into -360 to 0)");
+        "frequency (Hz, logarithmic)", "phase arg L (deg, continuous)");
     chart.getStyler().setXAxisLogarithmic(true);
     Set<String> used = new HashSet<>();
     double[] f = rs.get(0).frequencyHz();
+    double[] pr = phaseRange(rs);
     chart.getStyler().setXAxisMin(f[0]).setXAxisMax(f[f.length - 1]);
-    chart.getStyler().setYAxisMin(-360.0).setYAxisMax(0.0);
+    chart.getStyler().setYAxisMin(pr[0]).setYAxisMax(pr[1]);
     chart.getStyler().setYAxisDecimalPattern("0");
     addResponses(chart, used, rs, unit, true);
-    ChartSeries.line(chart, used, "-180 deg", new double[] {f[0], f[f.length - 1]}, new double[] {-180, -180},
-        ReportStyle.ZERO_LINE, ReportStyle.referenceStroke(1.4f, null));
+    boolean first = true;
+    for (double p : criticalPhases(pr)) {
+      ChartSeries.line(chart, used, CRITICAL_PHASE_SERIES, new double[] {f[0], f[f.length - 1]}, new double[] {p, p},
+          ReportStyle.ZERO_LINE, ReportStyle.referenceStroke(1.4f, null)).setShowInLegend(first);
+      first = false;
+    }
     List<String> notes = new ArrayList<>(commonNotes(rs));
-    notes.add("Phase wrapped into (-360, 0] deg; the lines break where they wrap.");
+    notes.add("Phase unwrapped continuously along frequency from its principal value at the lowest frequency; the "
+        + "lines at -180 deg + k 360 deg are the phase-crossover levels.");
     return new ReportChart("bode-phase-" + ResultFiles.fileSafe(c.configuration()),
         "Phase of the broken loop L(j w) at " + speedWords(rs, unit) + "; solid with notches, dashed without.",
         chart, notes);
@@ -419,8 +517,7 @@ public final class LoopResponseCharts {
         si++;
         last = r.speed();
       }
-      double[][] xy = phase ? wrapped(r.frequencyHz(), r.phaseDeg(), r.phaseDeg())
-          : new double[][] {r.frequencyHz(), finite(r.gainDb())};
+      double[][] xy = {r.frequencyHz(), phase ? r.phaseDeg() : finite(r.gainDb())};
       ChartSeries.line(chart, used, responseSeries(r.speed(), r.notches(), unit), xy[0], xy[1],
           speedColor(si), responseStroke(r.notches()));
     }
@@ -429,49 +526,133 @@ public final class LoopResponseCharts {
   private static ReportChart nichols(SweepResult result, ConfigurationResult c, List<Response> rs,
       SpeedAxisUnit unit) {
     XYChart chart = ChartSeries.chart(c.configuration() + ": Nichols chart of the broken loop",
-        "phase arg L (deg, wrapped into -360 to 0)", "gain 20 log10 |L| (dB)");
+        "phase arg L (deg, continuous)", "gain 20 log10 |L| (dB)");
     Set<String> used = new HashSet<>();
     List<double[]> ys = new ArrayList<>();
     for (Response r : rs) {
       ys.add(r.gainDb());
     }
-    double[] exclusion = exclusionHalfSizes(result);
-    double gm = exclusion[0];
-    double pm = exclusion[1];
-    double[] yr = ChartSeries.range(ys, new double[] {gm + 3, -gm - 3}, GAIN_AXIS_FLOOR_DB, GAIN_AXIS_CEILING_DB);
-    chart.getStyler().setXAxisMin(-360.0).setXAxisMax(0.0);
+    double[][] cells = exclusionCells(result);
+    double gmMax = Math.max(cells[0][0], cells[1][0]);
+    double[] yr = ChartSeries.range(ys, new double[] {gmMax + 3, -gmMax - 3}, GAIN_AXIS_FLOOR_DB, GAIN_AXIS_CEILING_DB);
+    double[] xr = phaseRange(rs);
+    chart.getStyler().setXAxisMin(xr[0]).setXAxisMax(xr[1]);
     chart.getStyler().setYAxisMin(yr[0]).setYAxisMax(yr[1]);
     chart.getStyler().setXAxisDecimalPattern("0");
     chart.getStyler().setYAxisDecimalPattern("0");
     int si = -1;
     ChosenSpeed last = null;
+    List<double[]> edges = new ArrayList<>();
     for (Response r : rs) {
       if (r.speed() != last) {
         si++;
         last = r.speed();
       }
-      double[][] xy = wrapped(r.frequencyHz(), r.phaseDeg(), finite(r.gainDb()));
-      ChartSeries.line(chart, used, responseSeries(r.speed(), r.notches(), unit), xy[1], xy[2], speedColor(si),
-          responseStroke(r.notches()));
+      ChartSeries.line(chart, used, responseSeries(r.speed(), r.notches(), unit), r.phaseDeg(), finite(r.gainDb()),
+          speedColor(si), responseStroke(r.notches()));
+      if (r.notches()) {
+        double fe = firstAeroelasticHzNear(c, r.speed().speedEasMps());
+        int k = java.util.Arrays.binarySearch(r.frequencyHz(), fe);
+        k = Math.min(Math.max(k < 0 ? -k - 1 : k, 0), r.frequencyHz().length - 1);
+        edges.add(new double[] {r.phaseDeg()[k], r.gainDb()[k]});
+      }
     }
-    double[][] d = exclusionRegion(gm, pm);
-    ChartSeries.line(chart, used, exclusionSeries(gm, pm), d[0], d[1], ReportStyle.REQUIREMENT,
-        ReportStyle.referenceStroke(2.6f, null));
-    ChartSeries.markers(chart, used, CRITICAL_POINT_SERIES, new double[] {-180}, new double[] {0},
-        ReportStyle.ZERO_LINE, SeriesMarkers.CROSS);
+    String[] bandNames = {"rigid-body band", "aeroelastic band"};
+    float[][] dash = {null, {7f, 4f}};
+    for (int b = 0; b < 2; b++) {
+      boolean first = true;
+      for (double p : criticalPhases(xr)) {
+        double[][] d = exclusionRegion(cells[b][0], cells[b][1], p);
+        ChartSeries.line(chart, used, exclusionSeries(cells[b][0], cells[b][1]) + ", " + bandNames[b], d[0], d[1],
+            ReportStyle.REQUIREMENT, ReportStyle.referenceStroke(b == 0 ? 2.6f : 1.8f, dash[b])).setShowInLegend(first);
+        first = false;
+      }
+    }
+    double[] cp = criticalPhases(xr);
+    ChartSeries.markers(chart, used, CRITICAL_POINT_SERIES, cp, new double[cp.length], ReportStyle.ZERO_LINE,
+        SeriesMarkers.CROSS);
+    if (!edges.isEmpty()) {
+      double[] ex = new double[edges.size()];
+      double[] ey = new double[edges.size()];
+      for (int i = 0; i < ex.length; i++) {
+        ex[i] = edges.get(i)[0];
+        ey[i] = edges.get(i)[1];
+      }
+      ChartSeries.markers(chart, used, BAND_EDGE_SERIES, ex, ey, ReportStyle.ZERO_LINE, SeriesMarkers.CIRCLE);
+    }
     List<String> notes = new ArrayList<>(commonNotes(rs));
-    notes.add(result.analysisCase().requirements() != null
-        ? String.format(Locale.ROOT, "Exclusion region: diamond with corners at -180 +- %.3g deg, 0 dB and -180 deg, "
-            + "+-%.3g dB, the required rigid-body margins of the normal envelope (common practice for reading a "
-            + "Nichols chart); a curve that avoids it has at least these margins at its crossings.", pm, gm)
-        : String.format(Locale.ROOT, "No requirements table: exclusion region drawn for +-%.3g dB and +-%.3g deg "
-            + "(common practice).", gm, pm));
-    notes.add("Phase wrapped into (-360, 0] deg; the lines break where they wrap.");
+    notes.add(String.format(Locale.ROOT, "Exclusion regions around every critical point (-180 deg + k 360 deg, 0 dB), "
+        + "one per frequency band as the clearance judges it: solid, the rigid-body band (+-%.3g dB, +-%.3g deg); "
+        + "dashed, the aeroelastic band (+-%.3g dB, +-%.3g deg)%s. The part of a curve below its dot (the first "
+        + "elastic mode frequency at that speed) is judged against the solid region, the part above it against the "
+        + "dashed one.", cells[0][0], cells[0][1], cells[1][0], cells[1][1],
+        result.analysisCase().requirements() != null ? ", the normal-envelope cells of the requirements table"
+            : " (common practice; no requirements table)"));
+    notes.add("Phase unwrapped continuously along frequency.");
     clipNote(notes, rs, yr, true);
     return new ReportChart("nichols-" + ResultFiles.fileSafe(c.configuration()),
         "Nichols chart (gain against phase) of L(j w) at " + speedWords(rs, unit)
-            + "; solid with notches, dashed without; red diamond: the margin exclusion region around the "
-            + "critical point.", chart, notes);
+            + "; solid with notches, dashed without; red diamonds: the margin exclusion regions of the two "
+            + "frequency bands around the critical points.", chart, notes);
+  }
+
+  /** Name of the -180 deg (mod 360) lines of the Bode phase chart. */
+  public static final String CRITICAL_PHASE_SERIES = "-180 deg + k 360 deg";
+  /** Name of the band-edge dots of the Nichols chart. */
+  public static final String BAND_EDGE_SERIES = "first elastic mode (band edge)";
+
+  /** @return phase axis limits: the data, widened to multiples of 90 deg, including -180 */
+  static double[] phaseRange(List<Response> rs) {
+    double lo = -180;
+    double hi = -180;
+    for (Response r : rs) {
+      for (double p : r.phaseDeg()) {
+        if (Double.isFinite(p)) {
+          lo = Math.min(lo, p);
+          hi = Math.max(hi, p);
+        }
+      }
+    }
+    return new double[] {Math.floor(lo / 90 - 1e-9) * 90, Math.ceil(hi / 90 + 1e-9) * 90};
+  }
+
+  /** @return the phases -180 + k 360 deg inside the range */
+  static double[] criticalPhases(double[] range) {
+    List<Double> out = new ArrayList<>();
+    for (double p = -180 + 360 * Math.ceil((range[0] + 180) / 360); p <= range[1]; p += 360) {
+      out.add(p);
+    }
+    return out.stream().mapToDouble(Double::doubleValue).toArray();
+  }
+
+  /** @return the first elastic mode frequency at the grid point nearest a speed, Hz */
+  private static double firstAeroelasticHzNear(ConfigurationResult c, double speedEasMps) {
+    int best = 0;
+    List<org.flexmargin.sweep.ServoPoint> pts = c.servo().points();
+    for (int i = 1; i < pts.size(); i++) {
+      if (Math.abs(pts.get(i).condition().speedEasMps() - speedEasMps)
+          < Math.abs(pts.get(best).condition().speedEasMps() - speedEasMps)) {
+        best = i;
+      }
+    }
+    return MarginCharts.firstAeroelasticHz(c, best);
+  }
+
+  /**
+   * @param result the sweep
+   * @return {{gain dB, phase deg} of the rigid-body band, {gain dB, phase deg} of the aeroelastic
+   *     band}: the normal-envelope cells of the table, or 6 dB and 45 deg (common practice) for both
+   *     without one
+   */
+  public static double[][] exclusionCells(SweepResult result) {
+    ClearanceRequirements req = result.analysisCase().requirements();
+    if (req == null) {
+      double[] d = {DEFAULT_EXCLUSION_GAIN_DB, DEFAULT_EXCLUSION_PHASE_DEG};
+      return new double[][] {d, d.clone()};
+    }
+    MarginCell rigid = req.cell(FrequencyBand.RIGID_BODY, SpeedRegime.NORMAL_ENVELOPE);
+    MarginCell aero = req.cell(FrequencyBand.AEROELASTIC, SpeedRegime.NORMAL_ENVELOPE);
+    return new double[][] {{rigid.gainMarginDb(), rigid.phaseMarginDeg()}, {aero.gainMarginDb(), aero.phaseMarginDeg()}};
   }
 
   /**
@@ -494,41 +675,20 @@ public final class LoopResponseCharts {
    * @return the closed diamond {phase deg, gain dB}: left, top, right, bottom, left corner
    */
   static double[][] exclusionRegion(double gainDb, double phaseDeg) {
-    return new double[][] {
-      {-180 - phaseDeg, -180, -180 + phaseDeg, -180, -180 - phaseDeg},
-      {0, gainDb, 0, -gainDb, 0}
-    };
+    return exclusionRegion(gainDb, phaseDeg, -180);
   }
 
   /**
-   * Wraps phases into (-360, 0] and inserts a gap (NaN in every row) where the wrapped phase jumps.
-   *
-   * @return {x, wrapped phase, y} with gaps
+   * @param gainDb half-height, dB
+   * @param phaseDeg half-width, deg
+   * @param centreDeg phase of the critical point, deg
+   * @return the closed diamond {phase deg, gain dB} around (centreDeg, 0 dB)
    */
-  static double[][] wrapped(double[] x, double[] phaseDeg, double[] y) {
-    List<double[]> out = new ArrayList<>();
-    double prev = Double.NaN;
-    for (int i = 0; i < x.length; i++) {
-      double w = phaseDeg[i] % 360;
-      if (w > 0) {
-        w -= 360;
-      }
-      if (w <= -360) {
-        w += 360;
-      }
-      if (!Double.isNaN(prev) && Math.abs(w - prev) > 180) {
-        out.add(new double[] {Double.NaN, Double.NaN, Double.NaN});
-      }
-      out.add(new double[] {x[i], w, y[i]});
-      prev = w;
-    }
-    double[][] r = new double[3][out.size()];
-    for (int i = 0; i < out.size(); i++) {
-      r[0][i] = out.get(i)[0];
-      r[1][i] = out.get(i)[1];
-      r[2][i] = out.get(i)[2];
-    }
-    return r;
+  static double[][] exclusionRegion(double gainDb, double phaseDeg, double centreDeg) {
+    return new double[][] {
+      {centreDeg - phaseDeg, centreDeg, centreDeg + phaseDeg, centreDeg, centreDeg - phaseDeg},
+      {0, gainDb, 0, -gainDb, 0}
+    };
   }
 
   private static double[] finite(double[] a) {
@@ -576,6 +736,19 @@ public final class LoopResponseCharts {
    * @return the chart
    */
   public static ReportChart notchChart(SweepResult result, ConfigurationResult c) {
+    return notchChart(result, c, null);
+  }
+
+  /**
+   * The attenuation of each notch of the loop, and of each proposed notch (dashed), against the
+   * modal frequency bands.
+   *
+   * @param result the sweep
+   * @param c one configuration
+   * @param proposed a notch design, or null
+   * @return the chart
+   */
+  public static ReportChart notchChart(SweepResult result, ConfigurationResult c, ProposedNotches proposed) {
     LoopSpec loop = result.analysisCase().loop();
     ClearanceRequirements req = result.analysisCase().requirements();
     double u = req != null ? req.frequencyUncertainty() : ClearanceRequirements.DEFAULT_FREQUENCY_UNCERTAINTY;
@@ -596,21 +769,28 @@ public final class LoopResponseCharts {
     double minDb = 0;
     List<double[]> curves = new ArrayList<>();
     List<String> names = new ArrayList<>();
-    double[] v = new double[2];
     for (int p = 0; p < loop.paths().size(); p++) {
       FeedbackPath path = loop.paths().get(p);
       for (FilterSpec s : path.filters()) {
         if (s instanceof NotchFilterSpec n) {
-          NotchFilter nf = new NotchFilter(n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio());
-          double[] db = new double[f.length];
-          for (int i = 0; i < f.length; i++) {
-            nf.response(2 * Math.PI * f[i], v);
-            db[i] = 20 * Math.log10(Math.max(Math.hypot(v[0], v[1]), 1e-6));
-            minDb = Math.min(minDb, db[i]);
+          double[] db = notchDb(n, f);
+          for (double x : db) {
+            minDb = Math.min(minDb, x);
           }
           curves.add(db);
           names.add(notchSeries(n, p, path.sensor()));
         }
+      }
+    }
+    int caseNotches = curves.size();
+    if (proposed != null) {
+      for (NotchFilterSpec n : proposed.notches()) {
+        double[] db = notchDb(n, f);
+        for (double x : db) {
+          minDb = Math.min(minDb, x);
+        }
+        curves.add(db);
+        names.add(proposedNotchSeries(n));
       }
     }
     double yLo = Math.max(-60, Math.floor((minDb - 3) / 5) * 5);
@@ -640,10 +820,16 @@ public final class LoopResponseCharts {
       below.setShowInLegend(false);
     }
     for (int i = 0; i < curves.size(); i++) {
-      ChartSeries.line(chart, used, names.get(i), f, curves.get(i), ReportStyle.ZERO_LINE,
-          new BasicStroke(2.4f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+      ChartSeries.line(chart, used, names.get(i), f, curves.get(i), i < caseNotches ? ReportStyle.ZERO_LINE
+          : ReportStyle.REQUIREMENT, i < caseNotches ? new BasicStroke(2.4f, BasicStroke.CAP_ROUND,
+          BasicStroke.JOIN_ROUND) : ReportStyle.referenceStroke(2.4f, new float[] {8f, 4f}));
     }
     List<String> notes = new ArrayList<>();
+    if (proposed != null) {
+      notes.add("Red: the proposed notch design (" + proposed.summary() + (proposed.feasible() ? ""
+          : "; not feasible: best set found") + ")" + (proposed.source().isEmpty() ? "" : ", " + proposed.source())
+          + "; solid black: the case's own notches.");
+    }
     notes.add(String.format(Locale.ROOT, "Shaded: in-vacuo frequency of each mode +- %.3g %% (%s), in the colour of "
         + "the mode's line in the other charts. Coupled frequencies move with airspeed (see the V-f diagrams).",
         100 * u, req != null ? "the requirement's frequency uncertainty" : "common practice, no requirements table"));

@@ -30,6 +30,7 @@ import org.flexmargin.sweep.ServoPoint;
 import org.flexmargin.sweep.SweepResult;
 import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
@@ -115,7 +116,7 @@ public final class MarginCharts {
   }
 
   /** Governing margins per grid point, per band. */
-  private static final class Data {
+  static final class Data {
     final SweepResult result;
     final ConfigurationResult c;
     final ClearanceRequirements req;
@@ -168,6 +169,31 @@ public final class MarginCharts {
           }
         }
         out[i] = best;
+      }
+      return out;
+    }
+
+    /**
+     * Requirements of these kinds that fail somewhere along the sweep without a refined onset
+     * (failing from the first assessed point, or a check that exists only where it fails).
+     *
+     * @return {words, speed EAS m/s of the first failing grid point} per requirement
+     */
+    List<Object[]> failingWithoutOnset(Set<CheckKind> kinds) {
+      List<Object[]> out = new ArrayList<>();
+      if (c.clearance() == null) {
+        return out;
+      }
+      Set<org.flexmargin.clearance.CheckKey> seen = new java.util.HashSet<>();
+      for (MarginOnset m : c.clearance().marginOnsets()) {
+        seen.add(m.key());
+      }
+      for (PointAssessment p : c.clearance().points()) {
+        for (org.flexmargin.clearance.ClearanceCheck k : p.checks()) {
+          if (kinds.contains(k.kind()) && !k.passed() && seen.add(k.key())) {
+            out.add(new Object[] {ClearanceSections.requirementWords(k.key()), p.speedEasMps()});
+          }
+        }
       }
       return out;
     }
@@ -255,7 +281,8 @@ public final class MarginCharts {
     return finish(d, unit, chart, xr, yr, curves, colors, strokes, reqLines, notes,
         d.onsets(EnumSet.of(CheckKind.GAIN_INCREASE_MARGIN, CheckKind.GAIN_REDUCTION_MARGIN)), null,
         "margins-gain-", "Governing gain margins of the broken loop at every grid point, by frequency band "
-            + "(solid: gain increase, dashed: gain reduction)" + reqWords(d) + ".", "0.#");
+            + "(solid: gain increase, dashed: gain reduction)" + reqWords(d) + ".", "0.#",
+        EnumSet.of(CheckKind.GAIN_INCREASE_MARGIN, CheckKind.GAIN_REDUCTION_MARGIN));
   }
 
   private static ReportChart phaseChart(Data d, SpeedAxisUnit unit) {
@@ -293,7 +320,7 @@ public final class MarginCharts {
     return finish(d, unit, chart, xr, yr, curves, colors, strokes, reqLines, notes,
         d.onsets(EnumSet.of(CheckKind.PHASE_MARGIN)), null, "margins-phase-",
         "Smallest phase margin (either direction) of the broken loop at every grid point, by frequency band"
-            + reqWords(d) + ".", "0");
+            + reqWords(d) + ".", "0", EnumSet.of(CheckKind.PHASE_MARGIN));
   }
 
   private static ReportChart delayChart(Data d, SpeedAxisUnit unit) {
@@ -306,9 +333,8 @@ public final class MarginCharts {
     for (FrequencyBand band : FrequencyBand.values()) {
       double[] dm = d.overCrossovers(band, GainCrossover::delayMarginS);
       for (int i = 0; i < dm.length; i++) {
-        if (!(dm[i] > 0)) {
-          dm[i] = Double.NaN; // a logarithmic axis cannot show 0
-        }
+        // milliseconds, the unit delays are specified in; a logarithmic axis cannot show 0
+        dm[i] = dm[i] > 0 ? 1000 * dm[i] : Double.NaN;
       }
       if (!hasData(dm) && band != FrequencyBand.RIGID_BODY) {
         continue;
@@ -328,20 +354,21 @@ public final class MarginCharts {
       }
     }
     if (!(hi > 0)) {
-      lo = 1e-3;
-      hi = 1;
+      lo = 1;
+      hi = 1000;
     }
     double[] yr = {Math.pow(10, Math.floor(Math.log10(lo))), Math.pow(10, Math.ceil(Math.log10(hi)))};
     if (yr[1] <= yr[0]) {
       yr[1] = 10 * yr[0];
     }
     notes.add("The requirements table sets no delay margin; the chart shows the achieved values only. "
-        + "Delay margin = phase margin (rad, taken in [0, 2 pi)) / crossover frequency (rad/s).");
+        + "Delay margin = phase margin (rad, taken in [0, 2 pi)) / crossover frequency (rad/s), shown in ms.");
     XYChart chart = ChartSeries.chart(d.c.configuration() + ": delay margin against airspeed", unit.axisTitle(),
-        "delay margin (s, logarithmic)");
+        "delay margin (ms, logarithmic)");
     chart.getStyler().setYAxisLogarithmic(true);
     return finish(d, unit, chart, xr, yr, curves, colors, strokes, Map.of(), notes, List.of(), null,
-        "margins-delay-", "Smallest delay margin of the broken loop at every grid point, by frequency band.", null);
+        "margins-delay-", "Smallest delay margin of the broken loop at every grid point, by frequency band.", null,
+        EnumSet.noneOf(CheckKind.class));
   }
 
   private static ReportChart peakChart(Data d, SpeedAxisUnit unit) {
@@ -413,16 +440,76 @@ public final class MarginCharts {
       onsetY[i] = a == null ? d.req.structuralPeakLimitDb()
           : interpolate(d.eas, a, onsets.get(i).condition().speedEasMps());
     }
-    return finish(d, unit, chart, xr, yr, curves, colors, strokes, reqLines, notes, onsets, onsetY,
+    ReportChart out = finish(d, unit, chart, xr, yr, curves, colors, strokes, reqLines, notes, onsets, onsetY,
         "margins-structural-", "Peak broken-loop gain near every structural mode at every grid point"
-            + reqWords(d) + "; onset markers sit on the failing mode's curve.", "0");
+            + reqWords(d) + "; onset markers sit on the failing mode's curve.", "0",
+        EnumSet.of(CheckKind.STRUCTURAL_MODE));
+    stabilisationOverlays(d, out.chart(), unit, colors);
+    return out;
+  }
+
+  /** Name of the overlay marking phase-stabilised stretches of the structural peak curves. */
+  public static final String PHASE_STABILISED_SERIES = "phase-stabilised (wide pale band)";
+  /** Name of the markers of mode-points that fail the structural rule. */
+  public static final String STRUCTURAL_FAILED_SERIES = "fails gain and phase stabilisation";
+
+  /**
+   * Over the structural peak curves: a wide pale band of the mode's colour where the mode passes by
+   * phase stabilisation only (its peak may be above the limit there), and a cross at every point
+   * where it fails both, so that a reader never takes a phase-stabilised stretch for a failure or
+   * the other way round. One legend entry each.
+   */
+  private static void stabilisationOverlays(Data d, XYChart chart, SpeedAxisUnit unit, Map<String, Color> colors) {
+    if (d.c.clearance() == null || d.c.clearance().points().isEmpty()) {
+      return;
+    }
+    List<PointAssessment> pts = d.c.clearance().points();
+    double[] x = ChartSeries.speeds(d.eas, unit);
+    Map<String, double[]> phase = new LinkedHashMap<>();
+    List<double[]> failed = new ArrayList<>();
+    for (int i = 0; i < Math.min(pts.size(), x.length); i++) {
+      for (StructuralModeAssessment s : pts.get(i).structuralModes()) {
+        if (s.status() == org.flexmargin.clearance.StructuralStabilisation.PHASE_STABILISED) {
+          phase.computeIfAbsent(s.modeName(), k -> nan(x.length))[i] = s.peakDb();
+        } else if (s.status() == org.flexmargin.clearance.StructuralStabilisation.FAILED) {
+          failed.add(new double[] {x[i], s.peakDb()});
+        }
+      }
+    }
+    Set<String> used = new HashSet<>(chart.getSeriesMap().keySet());
+    boolean first = true;
+    for (Map.Entry<String, double[]> e : phase.entrySet()) {
+      Color base = colors.getOrDefault(e.getKey(), ReportStyle.REGIME_LINE);
+      double[] y = e.getValue();
+      Color pale = new Color(base.getRed(), base.getGreen(), base.getBlue(), 70);
+      // a wide pale line over the stretch; the round marker shows a stretch of a single grid point too
+      XYSeries band = ChartSeries.line(chart, used, PHASE_STABILISED_SERIES + " " + e.getKey(), x, e.getValue(), pale,
+          new BasicStroke(11f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+      band.setShowInLegend(false);
+      band.setMarker(SeriesMarkers.CIRCLE);
+      band.setMarkerColor(pale);
+      if (first) {
+        ChartSeries.line(chart, used, PHASE_STABILISED_SERIES, new double[] {Double.NaN}, new double[] {Double.NaN},
+            new Color(0x80, 0x80, 0x80, 90), new BasicStroke(11f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+        first = false;
+      }
+    }
+    if (!failed.isEmpty()) {
+      double[] fx = new double[failed.size()];
+      double[] fy = new double[failed.size()];
+      for (int i = 0; i < fx.length; i++) {
+        fx[i] = failed.get(i)[0];
+        fy[i] = failed.get(i)[1];
+      }
+      ChartSeries.markers(chart, used, STRUCTURAL_FAILED_SERIES, fx, fy, ReportStyle.REQUIREMENT, SeriesMarkers.CROSS);
+    }
   }
 
   /** Adds curves, requirement lines, regime lines, onset markers and the notes, and wraps up. */
   private static ReportChart finish(Data d, SpeedAxisUnit unit, XYChart chart, double[] xr, double[] yr,
       Map<String, double[]> curves, Map<String, Color> colors, Map<String, BasicStroke> strokes,
       Map<String, double[][]> reqLines, List<String> notes, List<MarginOnset> onsets, double[] onsetY,
-      String stemPrefix, String caption, String yPattern) {
+      String stemPrefix, String caption, String yPattern, Set<CheckKind> kinds) {
     chart.getStyler().setXAxisMin(xr[0]).setXAxisMax(xr[1]);
     chart.getStyler().setYAxisMin(yr[0]).setYAxisMax(yr[1]);
     chart.getStyler().setXAxisDecimalPattern("0.#");
@@ -455,7 +542,8 @@ public final class MarginCharts {
           yr[0], yr[1], String.join(", ", clipped)));
     }
     if (d.req != null) {
-      ChartSeries.regimeLines(chart, used, d.req, unit, xr, yr, notes);
+      // named at their tops rather than in the legend, which keeps to the curves and requirements
+      ChartSeries.regimeLines(chart, used, d.req, unit, xr, yr, notes, false);
     } else {
       notes.add("No requirements table in the case: no requirement lines, regime speeds or onsets.");
     }
@@ -470,12 +558,12 @@ public final class MarginCharts {
       double dy = 0.05 * (yr[1] - yr[0]);
       for (int i = 0; i < ox.length; i++) {
         if (Double.isFinite(oy[i])) {
-          chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f", ox[i]), ox[i],
+          chart.addAnnotation(new AnnotationText(String.format(Locale.ROOT, "%.1f %s", ox[i], unit.symbol()), ox[i],
               Math.min(oy[i] + dy, yr[1] - dy), false));
         }
       }
       chart.getStyler().setAnnotationTextFont(new Font(Font.SANS_SERIF, Font.BOLD, 12));
-      chart.getStyler().setAnnotationTextFontColor(ReportStyle.MARGIN_ONSET);
+      chart.getStyler().setAnnotationTextFontColor(ReportStyle.ZERO_LINE);
       List<String> words = new ArrayList<>();
       for (MarginOnset m : onsets) {
         words.add(String.format(Locale.ROOT, "%s (%s) %.2f %s EAS%s", m.key().kind().key().replace('_', ' '),
@@ -483,8 +571,19 @@ public final class MarginCharts {
             m.refined() ? "" : ", not refined"));
       }
       notes.add("Margin onsets: " + String.join("; ", words) + ".");
-    } else if (d.req != null && !stemPrefix.equals("margins-delay-")) {
-      notes.add("No margin onset of these requirements in the swept range.");
+    }
+    List<Object[]> failing = d.failingWithoutOnset(kinds);
+    if (!failing.isEmpty()) {
+      List<String> words = new ArrayList<>();
+      for (Object[] f : failing) {
+        words.add(String.format(Locale.ROOT, "%s from %.1f %s EAS", f[0], unit.fromMps((Double) f[1]),
+            unit.symbol()));
+      }
+      notes.add("Failing without a refined onset (already failing at its first assessed grid point, or the check "
+          + "exists only where it fails): " + String.join("; ", words) + ".");
+    }
+    if (onsets.isEmpty() && failing.isEmpty() && d.req != null && !kinds.isEmpty()) {
+      notes.add("These requirements are met at every assessed grid point.");
     }
     return new ReportChart(stemPrefix + ResultFiles.fileSafe(d.c.configuration()), caption, chart, notes);
   }

@@ -39,16 +39,30 @@ public final class OpenLoopSections {
    * @param charts charts per configuration name (may lack a configuration)
    * @param toolVersion version string
    * @param generated time the report was generated
-   * @return the sections, in reading order
+   * @return the sections, in reading order, speeds in m/s
    */
   public static List<ReportSection> of(SweepResult result, List<Finding> findings,
       Map<String, List<EmbeddedChart>> charts, String toolVersion, Instant generated) {
+    return of(result, findings, charts, toolVersion, generated, SpeedAxisUnit.METRES_PER_SECOND);
+  }
+
+  /**
+   * @param result the sweep
+   * @param findings its findings table, as written to results.json
+   * @param charts charts per configuration name (may lack a configuration)
+   * @param toolVersion version string
+   * @param generated time the report was generated
+   * @param unit speed unit of the tables (the {@code data-value} attributes stay SI, as in results.json)
+   * @return the sections, in reading order
+   */
+  public static List<ReportSection> of(SweepResult result, List<Finding> findings,
+      Map<String, List<EmbeddedChart>> charts, String toolVersion, Instant generated, SpeedAxisUnit unit) {
     List<ReportSection> out = new ArrayList<>();
-    out.add(new Summary(result, List.copyOf(findings)));
+    out.add(new Summary(result, List.copyOf(findings), unit));
     for (int i = 0; i < result.configurations().size(); i++) {
       ConfigurationResult c = result.configurations().get(i);
       out.add(new ConfigurationSection("configuration-" + (i + 1), result, c,
-          charts.getOrDefault(c.configuration(), List.of())));
+          charts.getOrDefault(c.configuration(), List.of()), unit));
     }
     out.add(new Diagnostics(result));
     out.add(new Provenance(result, toolVersion, generated));
@@ -56,7 +70,7 @@ public final class OpenLoopSections {
   }
 
   /** Findings summary: headline per configuration, then the full findings table. */
-  private record Summary(SweepResult result, List<Finding> findings) implements ReportSection {
+  private record Summary(SweepResult result, List<Finding> findings, SpeedAxisUnit unit) implements ReportSection {
     @Override
     public String id() {
       return "summary";
@@ -77,12 +91,14 @@ public final class OpenLoopSections {
       }
       if (result.analysisCase().requirements() != null || result.configurations().stream()
           .anyMatch(c -> c.servo() != null)) {
-        ClearanceSections.writeVerdicts(w, result);
+        ClearanceSections.writeVerdicts(w, result, unit);
         w.element("h3", "All findings");
       }
       w.open("table", "id", "findings");
       w.open("thead").open("tr");
-      for (String h : List.of("configuration", "finding", "mode", "EAS (m/s)", "EAS (kt)", "TAS (m/s)", "Mach",
+      SpeedAxisUnit other = unit == SpeedAxisUnit.KNOTS ? SpeedAxisUnit.METRES_PER_SECOND : SpeedAxisUnit.KNOTS;
+      for (String h : List.of("configuration", "finding", "mode", "EAS (" + unit.symbol() + ")",
+          "EAS (" + other.symbol() + ")", "TAS (" + unit.symbol() + ")", "Mach",
           "altitude (m)", "frequency (Hz)", "remark")) {
         w.element("th", h);
       }
@@ -94,9 +110,9 @@ public final class OpenLoopSections {
         w.element("td", f.configuration());
         w.element("td", f.what());
         w.element("td", f.mode());
-        num(w, "speed_eas_mps", f.speedEasMps(), 2);
-        num(w, "speed_eas_kt", f.speedEasKnots(), 1);
-        num(w, "speed_tas_mps", f.speedTasMps(), 2);
+        speedCell(w, "speed_eas_mps", f.speedEasMps(), unit);
+        speedCell(w, "speed_eas_mps", f.speedEasMps(), other);
+        speedCell(w, "speed_tas_mps", f.speedTasMps(), unit);
         num(w, "mach", f.mach(), 3);
         num(w, "altitude_m", f.altitudeM(), 0);
         if (f.what().equals("divergence") && f.frequencyHz() == 0.0) {
@@ -175,8 +191,8 @@ public final class OpenLoopSections {
   }
 
   /** Charts and modes table of one configuration. */
-  private record ConfigurationSection(String id, SweepResult result, ConfigurationResult c, List<EmbeddedChart> charts)
-      implements ReportSection {
+  private record ConfigurationSection(String id, SweepResult result, ConfigurationResult c, List<EmbeddedChart> charts,
+      SpeedAxisUnit unit) implements ReportSection {
     @Override
     public String heading() {
       return "Configuration " + c.configuration();
@@ -194,7 +210,7 @@ public final class OpenLoopSections {
       w.open("table", "class", "modes");
       w.open("thead").open("tr");
       for (String h : List.of("mode", "in-vacuo frequency (Hz)", "frequency over sweep (Hz)", "highest g in sweep",
-          "at EAS (m/s)", "status", "crossings (EAS m/s)")) {
+          "at EAS (" + unit.symbol() + ")", "status", "crossings (EAS " + unit.symbol() + ")")) {
         w.element("th", h);
       }
       w.close("tr").close("thead");
@@ -234,7 +250,7 @@ public final class OpenLoopSections {
         w.element("td", m < fv.length ? fmt(fv[m], 3) : MISSING, "class", "num");
         w.element("td", Double.isNaN(fLo) ? MISSING : fmt(fLo, 2) + " to " + fmt(fHi, 2), "class", "num");
         w.element("td", fmt(gMax, 4), "class", "num");
-        w.element("td", fmt(gAt, 1), "class", "num");
+        w.element("td", fmt(unit.fromMps(gAt), 1), "class", "num");
         String status;
         String cls;
         if (Double.isNaN(gMax)) {
@@ -258,7 +274,7 @@ public final class OpenLoopSections {
         List<String> xs = new ArrayList<>();
         for (FlutterCrossing x : c.flutter().crossings()) {
           if (x.branch() == m) {
-            xs.add(Findings.label(x.kind()) + " " + fmt(x.condition().speedEasMps(), 2));
+            xs.add(Findings.label(x.kind()) + " " + fmt(unit.fromMps(x.condition().speedEasMps()), 2));
           }
         }
         w.element("td", xs.isEmpty() ? MISSING : String.join("; ", xs));
@@ -404,6 +420,15 @@ public final class OpenLoopSections {
       return "static";
     }
     return null;
+  }
+
+  /**
+   * A speed cell: the text in the display unit (1 decimal in knots, 2 in m/s), the JSON key, the
+   * unrounded SI value of results.json and the display unit ({@code data-unit}) in the attributes.
+   */
+  private static void speedCell(XhtmlWriter w, String key, double mps, SpeedAxisUnit unit) {
+    w.element("td", fmt(unit.fromMps(mps), unit == SpeedAxisUnit.KNOTS ? 1 : 2), "class", "num", "data-key", key,
+        "data-value", value(mps), "data-unit", unit.symbol());
   }
 
   private static void num(XhtmlWriter w, String key, double v, int decimals) {

@@ -3,10 +3,12 @@ package org.flexmargin.report;
 /**
  * How the human-readable report is drawn.
  *
- * @param chartSpeedUnit unit of the airspeed axis of the charts (data stay in m/s)
+ * @param chartSpeedUnit unit of the airspeed in the charts and tables of the page (data files
+ *     stay in m/s)
  * @param vectorCharts whether to write an SVG copy of every chart beside the PNG
+ * @param proposedNotches a notch design to show beside the case's own filters, or null
  */
-public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts) {
+public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, ProposedNotches proposedNotches) {
   /** Validates. */
   public ReportOptions {
     if (chartSpeedUnit == null) {
@@ -14,7 +16,25 @@ public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts) 
     }
   }
 
-  /** @return EAS axis in m/s, SVG copies written */
+  /**
+   * Options without a notch design.
+   *
+   * @param chartSpeedUnit unit of the airspeed in charts and tables
+   * @param vectorCharts whether to write SVG copies
+   */
+  public ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts) {
+    this(chartSpeedUnit, vectorCharts, null);
+  }
+
+  /**
+   * @param notches the design to show
+   * @return these options with the design
+   */
+  public ReportOptions withProposedNotches(ProposedNotches notches) {
+    return new ReportOptions(chartSpeedUnit, vectorCharts, notches);
+  }
+
+  /** @return EAS in m/s, SVG copies written */
   public static ReportOptions defaults() {
     return new ReportOptions(SpeedAxisUnit.METRES_PER_SECOND, true);
   }

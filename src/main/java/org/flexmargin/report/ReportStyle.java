@@ -49,6 +49,8 @@ public final class ReportStyle {
 
   /** Speed-regime lines (V0max, V_L, factor x V_L). */
   public static final Color REGIME_LINE = new Color(0x4A5A6A);
+  /** Closed-loop roots other than the structural modes' (thin, grey, drawn under the mode lines). */
+  public static final Color LOOP_ROOT = new Color(0xA3A9B0);
   /** Requirement lines (required margins, structural peak limit). */
   public static final Color REQUIREMENT = new Color(0xB0121B);
   /** Margin-onset markers (a requirement first violated). */

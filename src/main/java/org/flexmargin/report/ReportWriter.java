@@ -74,13 +74,13 @@ public final class ReportWriter {
         open.add(closed.get(2));
         loop.addAll(MarginCharts.of(result, c, unit));
         loop.add(closed.get(0));
-        loop.addAll(LoopResponseCharts.of(result, c, unit));
+        loop.addAll(LoopResponseCharts.of(result, c, unit, options.proposedNotches()));
       }
       charts.put(c.configuration(), embed(open, chartDir, options));
       loopCharts.put(c.configuration(), embed(loop, chartDir, options));
     }
     Instant now = Instant.now();
-    List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(result, findings, charts, toolVersion, now));
+    List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(result, findings, charts, toolVersion, now, unit));
     if (anyLoop || result.analysisCase().requirements() != null) {
       // loop and clearance sections go after the configurations, before diagnostics and provenance
       int at = sections.size() - 2;
@@ -88,9 +88,10 @@ public final class ReportWriter {
     }
     String title = (anyLoop ? "Aeroservoelastic clearance report: " : "Flutter and divergence report: ")
         + result.analysisCase().name();
-    String page = HtmlReport.render(title,
-        java.util.stream.Stream.of(result.analysisCase().description(), result.pathDescription())
-            .filter(s -> !s.isBlank()).toList(),
+    List<EmbeddedChart> panel = embed(MarginPanel.of(result, unit), chartDir, options);
+    String page = HtmlReport.render(title, List.of(result.pathDescription()),
+        w -> VerdictStrip.write(w, result, unit, panel, options.proposedNotches()),
+        java.util.stream.Stream.of(result.analysisCase().description()).filter(s -> !s.isBlank()).toList(),
         sections);
     Path html = folder.resolve(REPORT_FILE);
     Files.writeString(html, page, StandardCharsets.UTF_8);

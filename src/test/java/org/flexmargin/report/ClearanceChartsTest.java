@@ -198,7 +198,8 @@ class ClearanceChartsTest {
       assertEquals(onsets.size(), onsetsOnLocus.getXData().length);
       for (int i = 0; i < onsets.size(); i++) {
         assertEquals(0.0, onsetsOnLocus.getXData()[i], 0.0, "an onset root lies on the imaginary axis");
-        assertEquals(2 * Math.PI * onsets.get(i).frequencyHz(), onsetsOnLocus.getYData()[i], 1e-12);
+        // the locus is drawn in Hz like every other chart
+        assertEquals(onsets.get(i).frequencyHz(), onsetsOnLocus.getYData()[i], 1e-12);
       }
     }
   }
@@ -298,15 +299,24 @@ class ClearanceChartsTest {
 
   @Test
   void nicholsExclusionRegionCornersAreTheRequiredMargins() {
-    MarginCell cell = req.cell(FrequencyBand.RIGID_BODY, SpeedRegime.NORMAL_ENVELOPE);
+    // one region per frequency band, each with the corners of its own band's cell (the band of the
+    // part of the curve it judges), centred on a critical point -180 + k 360 deg
+    String[] words = {"rigid-body band", "aeroelastic band"};
+    FrequencyBand[] bands = {FrequencyBand.RIGID_BODY, FrequencyBand.AEROELASTIC};
     for (ConfigurationResult c : demo.configurations()) {
       Map<String, XYSeries> m = series(RESPONSE.get(c.configuration()), "nichols-", c);
-      XYSeries d = m.get(LoopResponseCharts.exclusionSeries(cell.gainMarginDb(), cell.phaseMarginDeg()));
-      assertNotNull(d, "exclusion region series");
-      // corners: (-180 - PM, 0), (-180, +GM), (-180 + PM, 0), (-180, -GM), closed back to the first
-      assertArrayEquals(new double[] {-180 - cell.phaseMarginDeg(), -180, -180 + cell.phaseMarginDeg(), -180,
-          -180 - cell.phaseMarginDeg()}, d.getXData(), 0.0);
-      assertArrayEquals(new double[] {0, cell.gainMarginDb(), 0, -cell.gainMarginDb(), 0}, d.getYData(), 0.0);
+      for (int b = 0; b < 2; b++) {
+        MarginCell cell = req.cell(bands[b], SpeedRegime.NORMAL_ENVELOPE);
+        XYSeries d = m.get(LoopResponseCharts.exclusionSeries(cell.gainMarginDb(), cell.phaseMarginDeg()) + ", "
+            + words[b]);
+        assertNotNull(d, "exclusion region series of the " + words[b]);
+        double centre = d.getXData()[1];
+        assertEquals(0.0, Math.IEEEremainder(centre + 180, 360), 1e-9, "centred on a critical point");
+        // corners: (c - PM, 0), (c, +GM), (c + PM, 0), (c, -GM), closed back to the first
+        assertArrayEquals(new double[] {centre - cell.phaseMarginDeg(), centre, centre + cell.phaseMarginDeg(), centre,
+            centre - cell.phaseMarginDeg()}, d.getXData(), 0.0);
+        assertArrayEquals(new double[] {0, cell.gainMarginDb(), 0, -cell.gainMarginDb(), 0}, d.getYData(), 0.0);
+      }
       assertNotNull(m.get(LoopResponseCharts.CRITICAL_POINT_SERIES));
     }
     // without a table the common-practice 6 dB and 45 deg
@@ -364,17 +374,43 @@ class ClearanceChartsTest {
   }
 
   @Test
-  void wrappedPhasesStayInTheWindowAndBreakAtWraps() {
-    double[] x = {1, 2, 3, 4, 5};
-    double[] ph = {-170, -350, -370, -530, -725};
-    double[][] w = LoopResponseCharts.wrapped(x, ph, x);
-    for (double v : w[1]) {
-      assertTrue(Double.isNaN(v) || v > -360 && v <= 0, "in (-360, 0]: " + v);
+  void bodeAndNicholsPhaseIsContinuous() {
+    // a pure delay e^{-s tau} turns the phase by -360 f tau deg (closed form): sampled so that each
+    // step turns it by less than 180 deg, the unwrapped phase must follow the straight line exactly,
+    // with no 360 deg jump anywhere, where a wrapped phase would jump at every -180 deg
+    double tau = 0.05;
+    double[] f = new double[400];
+    for (int i = 0; i < f.length; i++) {
+      f[i] = 0.1 + 0.1 * i;
     }
-    // -370 wraps to -10, 340 deg from -350: a gap there; -530 wraps to -170 and -725 to -5, steps of
-    // 160 and 165 deg that stay on the line (a gap only where the wrapped phase jumps by over 180 deg)
-    assertArrayEquals(new double[] {-170, -350, Double.NaN, -10, -170, -5}, w[1], 1e-12);
-    assertArrayEquals(new double[] {1, 2, Double.NaN, 3, 4, 5}, w[0], 0.0);
+    LoopResponseCharts.Response r = LoopResponseCharts.sample(new LoopResponseCharts.ChosenSpeed("test", 50), true,
+        (w, out) -> {
+          out[0] = Math.cos(-w * tau);
+          out[1] = Math.sin(-w * tau);
+        }, f);
+    for (int i = 0; i < f.length; i++) {
+      assertEquals(-360 * f[i] * tau, r.phaseDeg()[i], 1e-9, "continuous phase at " + f[i] + " Hz");
+    }
+    // the charts draw that phase as it is: the demo's Bode phase and Nichols series have no jump
+    // larger than a step of the frequency grid can turn (here: no gap and no 360 deg jump)
+    ConfigurationResult c = demo.configurations().get(0);
+    for (ReportChart rc : LoopResponseCharts.of(demo, c, SpeedAxisUnit.METRES_PER_SECOND)) {
+      boolean bode = rc.fileStem().startsWith("bode-phase-");
+      boolean nichols = rc.fileStem().startsWith("nichols-");
+      if (!bode && !nichols) {
+        continue;
+      }
+      for (XYSeries s : rc.chart().getSeriesMap().values()) {
+        if (!s.getName().contains("notches")) {
+          continue;
+        }
+        double[] p = bode ? s.getYData() : s.getXData();
+        for (int i = 1; i < p.length; i++) {
+          assertFalse(Double.isNaN(p[i]), "no gap in " + s.getName());
+          assertTrue(Math.abs(p[i] - p[i - 1]) < 180, s.getName() + " jumps by " + (p[i] - p[i - 1]));
+        }
+      }
+    }
   }
 
   @Test

@@ -91,7 +91,10 @@ class FlutterChartsTest {
           }
           long divergence = series.keySet().stream().filter(s -> s.startsWith(FlutterCharts.DIVERGENCE_SERIES_PREFIX))
               .count();
-          assertEquals(c.flutter().branches().size() + markerSeries + references + divergence, series.size(),
+          // with a requirements table: the V0max, V_L and extended-speed lines
+          long regime = series.keySet().stream().filter(s -> s.startsWith(ChartSeries.V0MAX_PREFIX)
+              || s.contains(ChartSeries.VL_PREFIX + " =")).count();
+          assertEquals(c.flutter().branches().size() + markerSeries + references + divergence + regime, series.size(),
               "modes, markers and reference lines, nothing else");
         }
       }

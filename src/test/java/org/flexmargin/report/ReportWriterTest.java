@@ -101,7 +101,9 @@ class ReportWriterTest {
       // open loop: V-g and V-f per configuration; with a loop also closed-loop V-g and V-f, four margin
       // charts, the root locus, Bode gain and phase, Nichols and (the demo has a notch) the notch chart
       int perConfiguration = r.result().analysisCase().loop() == null ? 2 : 2 + 2 + 4 + 1 + 3 + 1;
-      assertEquals(perConfiguration * r.result().configurations().size(), images, "charts per configuration");
+      // plus the three charts of the first screen's margin panel when there is a loop
+      int panel = r.result().analysisCase().loop() == null ? 0 : 3;
+      assertEquals(perConfiguration * r.result().configurations().size() + panel, images, "charts per configuration");
       Matcher href = Pattern.compile("href=\"([^\"]*)\"").matcher(h);
       while (href.find()) {
         assertTrue(href.group(1).startsWith("#"), "only links inside the page: " + href.group(1));
@@ -118,7 +120,7 @@ class ReportWriterTest {
     for (int i = 0; i < sections.getLength(); i++) {
       ids.add(((Element) sections.item(i)).getAttribute("id"));
     }
-    assertEquals(List.of("summary", "configuration-1", "configuration-2", "loop-1", "loop-2", "requirements",
+    assertEquals(List.of(VerdictStrip.ID, "summary", "configuration-1", "configuration-2", "loop-1", "loop-2", "requirements",
         "diagnostics", "provenance", "cautions"), ids);
     Element cautions = (Element) sections.item(sections.getLength() - 1);
     NodeList items = cautions.getElementsByTagName("li");
@@ -129,6 +131,123 @@ class ReportWriterTest {
     for (InputFile f : demo.result().analysisCase().inputs()) {
       assertTrue(demo.html().contains(f.sha256()), "provenance lists " + f.path());
     }
+  }
+
+  @Test
+  void firstScreenIsTheVerdictStripThenTheMarginPanelThenTheCase() throws Exception {
+    Document doc = parse(demo.html());
+    Element main = (Element) doc.getElementsByTagName("main").item(0);
+    List<String> order = new ArrayList<>();
+    for (org.w3c.dom.Node n = main.getFirstChild(); n != null; n = n.getNextSibling()) {
+      if (n instanceof Element e) {
+        order.add(e.getTagName() + (e.hasAttribute("id") ? "#" + e.getAttribute("id") : "")
+            + (e.hasAttribute("class") ? "." + e.getAttribute("class") : ""));
+      }
+    }
+    // the verdict strip (with the panel inside it) comes before the caution pointer, the case
+    // description and the table of contents
+    assertEquals(List.of("section#verdict.first-screen", "p.pointer", "div.case", "nav.toc"), order.subList(0, 4));
+    Element strip = byId(doc, "section", VerdictStrip.ID);
+    Element table = (Element) strip.getElementsByTagName("table").item(0);
+    NodeList heads = table.getElementsByTagName("thead").item(0).getChildNodes().item(0).getChildNodes();
+    List<String> columns = new ArrayList<>();
+    for (int i = 0; i < heads.getLength(); i++) {
+      columns.add(heads.item(i).getTextContent());
+    }
+    assertEquals(VerdictStrip.COLUMNS, columns);
+    NodeList rows = ((Element) table.getElementsByTagName("tbody").item(0)).getElementsByTagName("tr");
+    JsonNode confs = demo.json().get("configurations");
+    assertEquals(confs.size(), rows.getLength(), "one row per configuration");
+    for (int i = 0; i < rows.getLength(); i++) {
+      Element row = (Element) rows.item(i);
+      JsonNode c = confs.get(i);
+      assertEquals(c.get("name").asText(), row.getAttribute("data-configuration"));
+      String text = row.getTextContent();
+      assertTrue(text.contains(c.get("clearance").get("passed").asBoolean() ? "PASS" : "FAIL"), text);
+      // divergence and the lowest open- and closed-loop onsets are the values of results.json
+      assertEquals(c.get("divergence").get("speed_eas_mps").asDouble(), cellValue(row, "divergence"), 0.0);
+      assertEquals(lowestOnset(c.get("flutter").get("crossings")), cellValue(row, "open-loop"), 0.0);
+      assertEquals(lowestOnset(c.get("loop").get("closed_loop_crossings")), cellValue(row, "closed-loop"), 0.0);
+    }
+    Element panel = (Element) strip.getElementsByTagName("figure").item(0);
+    assertEquals("panel", panel.getAttribute("class"));
+    assertEquals(3, panel.getElementsByTagName("img").getLength(), "gain, phase and structural panels");
+    for (String stem : List.of("panel-gain", "panel-phase", "panel-structural")) {
+      assertTrue(Files.exists(demo.folder().resolve("charts").resolve(stem + ".png")), stem);
+    }
+    // open loop only, no requirements: the strip says so and has no panel
+    Element lpwStrip = byId(parse(lpw.html()), "section", VerdictStrip.ID);
+    assertTrue(lpwStrip.getTextContent().contains("NOT ASSESSED"));
+    assertEquals(0, lpwStrip.getElementsByTagName("figure").getLength());
+  }
+
+  @Test
+  void speedUnitAppliesToTheTables() throws Exception {
+    // the same sections in knots (charts left out: tables only); 1 kt = 1852/3600 m/s exactly
+    SweepResult r = demo.result();
+    List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(r, demo.findings(), java.util.Map.of(), "test",
+        java.time.Instant.EPOCH, SpeedAxisUnit.KNOTS));
+    sections.addAll(1, ClearanceSections.of(r, java.util.Map.of(), SpeedAxisUnit.KNOTS));
+    Document doc = parse(HtmlReport.render("knots", List.of(), sections));
+    Element findingsTable = byId(doc, "table", "findings");
+    NodeList heads = findingsTable.getElementsByTagName("th");
+    assertEquals("EAS (kt)", heads.item(3).getTextContent());
+    assertEquals("EAS (m/s)", heads.item(4).getTextContent());
+    assertEquals("TAS (kt)", heads.item(5).getTextContent());
+    Element firstRow = (Element) ((Element) findingsTable.getElementsByTagName("tbody").item(0))
+        .getElementsByTagName("tr").item(0);
+    double eas = demo.findings().get(0).speedEasMps();
+    assertEquals(String.format(java.util.Locale.ROOT, "%.1f", eas * 3600.0 / 1852.0),
+        firstRow.getElementsByTagName("td").item(3).getTextContent());
+    // the per-speed margin table of the loop section starts with EAS in knots
+    Element loop = byId(doc, "section", "loop-1");
+    Element perSpeed = (Element) loop.getElementsByTagName("table").item(0);
+    assertEquals("EAS (kt)", perSpeed.getElementsByTagName("th").item(0).getTextContent());
+    double v0 = r.configurations().get(0).servo().points().get(0).condition().speedEasMps();
+    Element cell = (Element) perSpeed.getElementsByTagName("td").item(0);
+    assertEquals(String.format(java.util.Locale.ROOT, "%.2f", v0 * 3600.0 / 1852.0), cell.getTextContent());
+    assertEquals("kt", cell.getAttribute("data-unit"));
+  }
+
+  @Test
+  void pageHasAPrintStyleSheet() {
+    String css = demo.html().substring(demo.html().indexOf("<style>"), demo.html().indexOf("</style>"));
+    String print = css.substring(css.indexOf("@media print{"));
+    for (String rule : List.of("nav.toc{display:none}", "break-inside:avoid", "thead{display:table-header-group}",
+        "print-color-adjust:exact")) {
+      assertTrue(print.contains(rule), rule);
+    }
+    assertTrue(css.contains("@page{"), "page size and margins");
+  }
+
+  /** @return the lowest speed of a flutter onset in a crossings array of results.json */
+  private static double lowestOnset(JsonNode crossings) {
+    double v = Double.POSITIVE_INFINITY;
+    for (JsonNode x : crossings) {
+      if (x.get("kind").asText().equals("flutter_onset")) {
+        v = Math.min(v, x.get("speed_eas_mps").asDouble());
+      }
+    }
+    return v;
+  }
+
+  /** @return the data-value of the first element with one inside the strip cell of that key */
+  private static double cellValue(Element row, String key) {
+    NodeList cells = row.getElementsByTagName("td");
+    for (int i = 0; i < cells.getLength(); i++) {
+      Element td = (Element) cells.item(i);
+      if (key.equals(td.getAttribute("data-key"))) {
+        NodeList inner = td.getElementsByTagName("*");
+        for (int k = 0; k < inner.getLength(); k++) {
+          String v = ((Element) inner.item(k)).getAttribute("data-value");
+          if (!v.isEmpty()) {
+            return Double.parseDouble(v);
+          }
+        }
+        return Double.NaN;
+      }
+    }
+    throw new AssertionError("no cell " + key);
   }
 
   @Test
@@ -229,6 +348,9 @@ class ReportWriterTest {
     }
     double value = Double.parseDouble(cell.getAttribute("data-value"));
     assertEquals(expected.asDouble(), value, 0.0, what);
+    if ("kt".equals(cell.getAttribute("data-unit"))) {
+      value *= 3600.0 / 1852.0; // shown in knots (1 kt = 1852/3600 m/s exactly)
+    }
     Matcher m = Pattern.compile("^-?[0-9]+(\\.[0-9]+)?").matcher(text);
     assertTrue(m.find(), what + ": number shown, got " + text);
     String shownText = m.group();
@@ -257,6 +379,10 @@ class ReportWriterTest {
     }
     double value = Double.parseDouble(cell.getAttribute("data-value"));
     assertEquals(expected.asDouble(), value, 0.0, key);
+    if ("kt".equals(cell.getAttribute("data-unit"))) {
+      // a speed shown in knots: the text is the SI value converted (1 kt = 1852/3600 m/s exactly)
+      value *= 3600.0 / 1852.0;
+    }
     if (text.equals("static")) {
       assertEquals("divergence", finding.get("finding").asText());
       assertEquals(0.0, value, 0.0);
