@@ -18,4 +18,13 @@ class GreedyAssignmentTest {
     double[][] cost = {{1.0, 2.0}, {0.5, 3.0}};
     assertArrayEquals(new int[] {1, 0}, GreedyAssignment.minimumCost(cost));
   }
+
+  @Test
+  void greedyAssignmentNeverReusesARowAndBreaksTiesInReadingOrder() {
+    // Row 0 owns the two cheapest entries; once it is assigned, its second entry must not be
+    // taken again: the answer is the identity, not row 0 twice.
+    assertArrayEquals(new int[] {0, 1}, GreedyAssignment.minimumCost(new double[][] {{0.1, 0.2}, {5, 6}}));
+    // Ties: the first cheapest pair in reading order wins (reproducible tracking).
+    assertArrayEquals(new int[] {0, 1}, GreedyAssignment.minimumCost(new double[][] {{1, 1}, {1, 9}}));
+  }
 }

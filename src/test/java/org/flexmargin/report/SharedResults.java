@@ -13,28 +13,29 @@ import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.SweepResult;
 
 /**
- * Sweeps of the bundled cases computed once per test run and shared by the report tests (the demo
- * sweep with its loop and clearance takes several seconds). Results are immutable records.
+ * Sweeps of the bundled cases computed once per test run (one test JVM) and shared by the report
+ * tests and the demo's end-to-end notch test (the demo sweep with its loop and clearance is the
+ * most expensive computation of the suite). Results are immutable records.
  */
-final class SharedResults {
+public final class SharedResults {
   private SharedResults() {}
 
   /** A solved case and its findings table. */
-  record Solved(SweepResult result, List<Finding> findings) {}
+  public record Solved(SweepResult result, List<Finding> findings) {}
 
   private static final Map<String, Solved> CACHE = new HashMap<>();
 
   /** @return the invented demo drone (two configurations, loop, requirements table) */
-  static Solved demo() {
+  public static Solved demo() {
     return solve("mode-tables/demo/demo-case.json");
   }
 
   /** @return the Lee, Price &amp; Wong typical section (open loop, no requirements) */
-  static Solved lpw() {
+  public static Solved lpw() {
     return solve("mode-tables/validation/typical-section-lpw.json");
   }
 
-  static synchronized Solved solve(String file) {
+  public static synchronized Solved solve(String file) {
     return CACHE.computeIfAbsent(file, f -> {
       AnalysisCase c = CaseReader.read(Path.of(f));
       SweepResult r = new CaseSweep(1).run(c, n -> { });
