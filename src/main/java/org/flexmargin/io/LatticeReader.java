@@ -80,7 +80,7 @@ final class LatticeReader {
     if (v.length != 3) {
       throw p.fail("three coordinates [x, y, z] (m)", v.length + " numbers");
     }
-    return new SurfacePoint(v[0], v[1], v[2]);
+    return p.build(() -> new SurfacePoint(v[0], v[1], v[2]));
   }
 
   private static SplineGroup spline(JsonField g, Set<String> stations, String tableName) {

@@ -23,15 +23,27 @@ public record LatticeSpec(
     List<LiftingSurface> surfaces,
     List<SplineGroup> splines,
     double[] reducedFrequencies) implements AeroSpec {
+  /** Largest number of boxes over all surfaces: 6,000 boxes need about 1.2 GB for the complex
+   * influence matrix and its LU factors. */
+  public static final int MAX_BOXES = 6000;
+
   /** Validates and copies. */
   public LatticeSpec {
     Checks.positive("reference_semichord_m", referenceSemichordM);
+    // wings and tails of aircraft have semichords below about ten metres (see the semichord range)
+    Checks.inRange("reference_semichord_m", referenceSemichordM, 0, PlausibleRange.SEMICHORD.plausibleMax());
     Checks.inRange("mach", mach, 0, 0.95);
     if (symmetry == null) {
       throw new InvalidInputException("symmetry", "none, symmetric or antisymmetric", "none");
     }
     surfaces = Checks.nonEmpty("surfaces", surfaces);
     splines = Checks.nonEmpty("splines", splines);
+    int boxes = surfaces.stream().mapToInt(s -> s.chordwiseBoxes() * s.spanwiseBoxes()).sum();
+    if (boxes > MAX_BOXES) {
+      throw new InvalidInputException("surfaces",
+          "at most " + MAX_BOXES + " boxes in all (the influence matrix and its factorisation need "
+              + "about 32 bytes per box squared)", boxes + " boxes");
+    }
     if (reducedFrequencies == null || reducedFrequencies.length < 2) {
       throw new InvalidInputException("reduced_frequencies", "at least two reduced frequencies",
           reducedFrequencies == null ? "none" : reducedFrequencies.length + "");

@@ -25,6 +25,9 @@ public record LiftingSurface(
     double tipChordM,
     int chordwiseBoxes,
     int spanwiseBoxes) {
+  /** Largest plausible chord (m). */
+  public static final double MAX_CHORD_M = 100;
+
   /** Validates. */
   public LiftingSurface {
     Checks.name("name", name);
@@ -36,6 +39,9 @@ public record LiftingSurface(
     }
     Checks.positive("root_chord_m", rootChordM);
     Checks.positive("tip_chord_m", tipChordM);
+    // no aircraft surface has a chord above 100 m; beyond it a value is a slipped unit or exponent
+    Checks.inRange("root_chord_m", rootChordM, 0, MAX_CHORD_M);
+    Checks.inRange("tip_chord_m", tipChordM, 0, MAX_CHORD_M);
     Checks.inRange("chordwise_boxes", chordwiseBoxes, 1, 200);
     Checks.inRange("spanwise_boxes", spanwiseBoxes, 1, 500);
     double dy = tipLeadingEdge.yM() - rootLeadingEdge.yM();

@@ -9,10 +9,13 @@ package org.flexmargin.model;
  * @param zM z coordinate (m), positive up
  */
 public record SurfacePoint(double xM, double yM, double zM) {
-  /** Validates that all coordinates are finite. */
+  /** Largest plausible coordinate magnitude (m): no aircraft is 10 km long or wide. */
+  public static final double MAX_COORDINATE_M = 1e4;
+
+  /** Validates that all coordinates are finite and within +-{@value #MAX_COORDINATE_M} m. */
   public SurfacePoint {
-    Checks.finite("x_m", xM);
-    Checks.finite("y_m", yM);
-    Checks.finite("z_m", zM);
+    Checks.inRange("x_m", xM, -MAX_COORDINATE_M, MAX_COORDINATE_M);
+    Checks.inRange("y_m", yM, -MAX_COORDINATE_M, MAX_COORDINATE_M);
+    Checks.inRange("z_m", zM, -MAX_COORDINATE_M, MAX_COORDINATE_M);
   }
 }

@@ -5,12 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.FlowSymmetry;
 import org.flexmargin.model.LatticeSpec;
 import org.flexmargin.model.SplineKind;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /** The lifting_surfaces section of a case file: a good case and one test per kind of error. */
 class LatticeReaderTest {
@@ -45,5 +48,25 @@ class LatticeReaderTest {
     assertHas(fails("bad-symmetry.json"), "flow_symmetry", "none, symmetric or antisymmetric", "\"mirror\"");
     assertHas(fails("bad-boxes.json"), "surfaces[0].chordwise_boxes");
     assertHas(fails("bad-key.json"), "spline_list", "unknown key");
+  }
+
+  private static String failsWith(Path dir, String caseText) throws IOException {
+    Path file = dir.resolve("case.json");
+    Files.writeString(file, caseText);
+    return assertThrows(InputFileException.class, () -> CaseReader.read(file)).getMessage();
+  }
+
+  /** Finite but absurd geometry is refused at read time with the key, not later in the solver. */
+  @Test
+  void refusesAbsurdGeometryAtReadTime(@TempDir Path tmp) throws IOException {
+    Files.copy(DIR.resolve("wing-modes.json"), tmp.resolve("wing-modes.json"));
+    String base = Files.readString(DIR.resolve("lattice-case.json"));
+    assertHas(failsWith(tmp, base.replace("\"root_chord_m\": 1.0", "\"root_chord_m\": 1e308")),
+        "case.json", "surfaces[0]", "root_chord_m");
+    assertHas(failsWith(tmp, base.replace("[0.8, 3.0, 0.1]", "[0.8, 1e9, 0.1]")), "case.json", "y_m");
+    assertHas(failsWith(tmp, base.replace("\"reference_semichord_m\": 0.4", "\"reference_semichord_m\": 1e308")),
+        "case.json", "reference_semichord_m");
+    assertHas(failsWith(tmp, base.replace("\"chordwise_boxes\": 4, \"spanwise_boxes\": 8",
+        "\"chordwise_boxes\": 200, \"spanwise_boxes\": 500")), "case.json", "surfaces", "100000 boxes");
   }
 }
