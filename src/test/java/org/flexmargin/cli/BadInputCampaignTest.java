@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -24,14 +22,6 @@ import org.junit.jupiter.api.io.TempDir;
 class BadInputCampaignTest {
   private static final Path IO = Path.of("src/test/resources/io");
 
-  private record Run(int code, String out, String err) {}
-
-  private static Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = FlexMargin.execute(args, new PrintWriter(out), new PrintWriter(err));
-    return new Run(code, out.toString(), err.toString());
-  }
 
   /** Copies the small test inputs into {@code dir}; returns the copy of {@code caseName}. */
   private static Path copyInputs(Path dir, String caseName) throws IOException {
@@ -66,7 +56,7 @@ class BadInputCampaignTest {
       String path, @TempDir Path dir) throws IOException {
     Path c = copyInputs(dir, caseName);
     int line = mutate(dir.resolve(target), from, to);
-    Run r = run("check", c.toString());
+    CliRun r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code(), r.out() + r.err());
     assertTrue(r.err().contains(target + ":" + line + ": " + path + ": expected a value in the plausible range"),
         r.err());
@@ -78,7 +68,7 @@ class BadInputCampaignTest {
     Path c = dir.resolve("goland.json");
     Files.copy(Path.of("mode-tables/validation/goland-wing.json"), c);
     int line = mutate(c, "9770000.0", "1e308");
-    Run r = run("check", c.toString());
+    CliRun r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code(), r.err());
     assertTrue(r.err().contains("goland.json:" + line
         + ": configurations[0].uniform_wing.bending_stiffness_n_m2: expected a value in the plausible range"), r.err());
@@ -91,7 +81,7 @@ class BadInputCampaignTest {
     Path c = dir.resolve("goland.json");
     Files.copy(Path.of("mode-tables/validation/goland-wing.json"), c);
     int line = mutate(c, "\"pitch_inertia_kg_m\": 8.64", "\"pitch_inertia_kg_m\": 1.0");
-    Run r = run("check", c.toString());
+    CliRun r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code(), r.err());
     assertTrue(r.err().contains("goland.json:" + line + ": configurations[0].uniform_wing.pitch_inertia_kg_m"), r.err());
     for (String key : List.of("mass_per_length_kg_per_m", "mass_axis_chord_fraction", "elastic_axis_chord_fraction",
@@ -105,7 +95,7 @@ class BadInputCampaignTest {
   void anUnusualValueIsReadWithAWarningNamingItsRange(@TempDir Path dir) throws IOException {
     Path c = copyInputs(dir, "good-case.json");
     int line = mutate(c, "\"width_m\": 1.0,", "\"width_m\": 25.0,");
-    Run r = run("check", c.toString());
+    CliRun r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_OK, r.code(), r.err());
     assertTrue(r.err().contains("warning: " + c + ":" + line
         + ": configurations[0].aero.strip_theory.strips[0].width_m: 25.0 m is outside the usual range [0.001, 20] m"),
@@ -117,7 +107,7 @@ class BadInputCampaignTest {
     Path c = copyInputs(dir, "good-case.json");
     mutate(c, "\"width_m\": 1.0,", "\"width_m\": 800.0,");
     mutate(c, "\"configurations\":", "\"plausibility_overrides\": [\"strip.width_m\"],\n  \"configurations\":");
-    Run r = run("check", c.toString());
+    CliRun r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_OK, r.code(), r.err());
     assertTrue(r.err().contains("800.0 m is outside the plausible range [0, 500] m of strip.width_m; accepted"),
         r.err());
@@ -127,12 +117,12 @@ class BadInputCampaignTest {
   void overridesAreCheckedThemselves(@TempDir Path dir) throws IOException {
     Path c = copyInputs(dir, "good-case.json");
     int line = mutate(c, "\"configurations\":", "\"plausibility_overrides\": [\"strip.widht_m\"],\n  \"configurations\":");
-    Run r = run("check", c.toString());
+    CliRun r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code());
     assertTrue(r.err().contains(":" + line + ": plausibility_overrides[0]"), r.err());
     assertTrue(r.err().contains("(did you mean \"strip.width_m\"?)"), r.err());
     mutate(c, "strip.widht_m", "mode.damping_ratio");
-    r = run("check", c.toString());
+    r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code());
     assertTrue(r.err().contains("a physical limit, which no override lifts"), r.err());
   }

@@ -10,9 +10,9 @@ import java.io.StringWriter;
  * @param out standard output
  * @param err standard error
  */
-record CliRun(int code, String out, String err) {
+public record CliRun(int code, String out, String err) {
   /** @return the outcome of {@code flexmargin ARGS} */
-  static CliRun of(String... args) {
+  public static CliRun of(String... args) {
     StringWriter out = new StringWriter();
     StringWriter err = new StringWriter();
     int code = FlexMargin.execute(args, new PrintWriter(out), new PrintWriter(err));

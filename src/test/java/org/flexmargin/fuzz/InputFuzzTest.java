@@ -11,8 +11,6 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.node.TextNode;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -38,6 +36,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import net.jqwik.api.lifecycle.AfterContainer;
+import org.flexmargin.cli.CliRun;
 import org.flexmargin.cli.FlexMargin;
 
 /**
@@ -138,12 +137,12 @@ class InputFuzzTest {
       Path out = dir.resolve("out");
       int n = CASES.incrementAndGet();
       String[] check = {"check", dir.resolve(caseFile).toString()};
-      Run r = assertTimeoutPreemptively(BOUND, () -> run(check), () -> "check ran longer than " + BOUND + ": " + m);
+      CliRun r = assertTimeoutPreemptively(BOUND, () -> CliRun.of(check), () -> "check ran longer than " + BOUND + ": " + m);
       judge(r, m, "check");
       if (r.code() != 2 && n % SWEEP_EVERY == 0 && small(m)) {
         String[] sweep = {"sweep", dir.resolve(caseFile).toString(), "--out", out.toString(), "--quiet",
             "--no-svg", "--threads", "1"};
-        Run s = assertTimeoutPreemptively(BOUND, () -> run(sweep), () -> "sweep ran longer than " + BOUND + ": " + m);
+        CliRun s = assertTimeoutPreemptively(BOUND, () -> CliRun.of(sweep), () -> "sweep ran longer than " + BOUND + ": " + m);
         judge(s, m, "sweep");
       }
       Set<String> after = listing(dir);
@@ -156,7 +155,7 @@ class InputFuzzTest {
   }
 
   /** Exit code, message form and file named; counts the outcome class. */
-  private static void judge(Run r, Mutation m, String command) {
+  private static void judge(CliRun r, Mutation m, String command) {
     assertTrue(Set.of(0, 2, 3).contains(r.code()), command + " exit " + r.code() + " for " + m + ": " + r.err());
     assertFalse(r.err().contains("\tat "), "stack trace for " + m + ": " + r.err());
     String outcome = command + " exit " + r.code();
@@ -195,14 +194,6 @@ class InputFuzzTest {
 
   // ----------------------------------------------------------------------------------------------
 
-  private record Run(int code, String out, String err) {}
-
-  private static Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = FlexMargin.execute(args, new PrintWriter(out), new PrintWriter(err));
-    return new Run(code, out.toString(), err.toString());
-  }
 
   /** The valid input set: the test cases with small sweeps, a CSV table and a requirements file. */
   private static void writeInputs(Path dir) throws IOException {
