@@ -1,12 +1,17 @@
 package org.flexmargin.io;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.networknt.schema.JsonNodePath;
 import com.networknt.schema.JsonSchema;
 import com.networknt.schema.JsonSchemaFactory;
 import com.networknt.schema.SchemaLocation;
 import com.networknt.schema.SpecVersion;
 import com.networknt.schema.ValidationMessage;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.EnumMap;
@@ -23,7 +28,9 @@ import java.util.Set;
  * input error, with file, line, field path, expected and found.
  *
  * <p>Range keywords ({@code minimum}, {@code maximum}) are left to the reader, which applies them
- * with the case's {@code plausibility_overrides} and warns outside the usual range. Thread-safe:
+ * with the case's {@code plausibility_overrides} and warns outside the usual range: the schemas are
+ * compiled with those keywords removed, so that a value the case lifts on purpose cannot fail a
+ * {@code oneOf} branch of the schema. Thread-safe:
  * the compiled schemas are immutable and shared.
  */
 final class Schemas {
@@ -63,7 +70,8 @@ final class Schemas {
   private static final Map<Kind, JsonSchema> SCHEMAS = load();
 
   private static Map<Kind, JsonSchema> load() {
-    JsonSchemaFactory factory = JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V7);
+    JsonSchemaFactory factory = JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V7,
+        b -> b.schemaLoaders(l -> l.schemas(Schemas::withoutRangeKeywords)));
     Map<Kind, JsonSchema> m = new EnumMap<>(Kind.class);
     for (Kind k : Kind.values()) {
       JsonSchema s = factory.getSchema(SchemaLocation.of("classpath:schema/" + k.file()));
@@ -71,6 +79,40 @@ final class Schemas {
       m.put(k, s);
     }
     return m;
+  }
+
+  /**
+   * The text of one of our schema files with the range keywords removed at every level.
+   *
+   * @param iri the schema's location, {@code classpath:schema/NAME}
+   * @return the text, or null for any other location (left to the library's own loaders)
+   */
+  private static String withoutRangeKeywords(String iri) {
+    String prefix = "classpath:schema/";
+    if (!iri.startsWith(prefix)) {
+      return null;
+    }
+    String resource = "schema/" + iri.substring(prefix.length());
+    try (InputStream in = Schemas.class.getClassLoader().getResourceAsStream(resource)) {
+      if (in == null) {
+        return null;
+      }
+      ObjectMapper mapper = new ObjectMapper();
+      JsonNode tree = mapper.readTree(in);
+      strip(tree);
+      return mapper.writeValueAsString(tree);
+    } catch (IOException e) {
+      throw new UncheckedIOException("schema " + iri + " in the jar cannot be read", e);
+    }
+  }
+
+  private static void strip(JsonNode node) {
+    if (node instanceof ObjectNode o) {
+      o.remove(LEFT_TO_READER);
+    }
+    for (JsonNode child : node) {
+      strip(child);
+    }
   }
 
   /**
