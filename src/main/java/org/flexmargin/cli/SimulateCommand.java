@@ -28,6 +28,7 @@ import org.flexmargin.simulate.Turbulence;
 import org.flexmargin.simulate.TurbulenceSpectrum;
 import org.flexmargin.sweep.ConfigurationModel;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -117,11 +118,7 @@ final class SimulateCommand implements Callable<Integer> {
   @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: reports/<case name>/simulate).")
   Path out;
 
-  @Option(names = "--quiet", description = "No summary on the terminal; errors only.")
-  boolean quiet;
-
-  @Option(names = "--debug", description = "Print stack traces of errors.")
-  boolean debug;
+  @Mixin CommonOptions common;
 
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
@@ -159,7 +156,7 @@ final class SimulateCommand implements Callable<Integer> {
     Path target = out != null ? out : Path.of("reports", ResultFiles.fileSafe(c.name()), "simulate");
     String title = String.format(Locale.ROOT, "%s, %.0f m/s EAS", conf.name(), eas);
     Path written = ReportFolder.writeAtomically(target, folder -> SimulationFiles.write(folder, r, summary, title));
-    if (!quiet) {
+    if (!common.quiet) {
       summary.forEach(pw::println);
       pw.println();
       pw.println("written to " + written);

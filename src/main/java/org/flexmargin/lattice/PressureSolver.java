@@ -31,7 +31,8 @@ public final class PressureSolver {
   public boolean factorise(double omegaOverU, double mach) {
     InfluenceMatrix.build(lattice, omegaOverU, mach, influence);
     lu = LinearSolverFactory_ZDRM.lu(lattice.size());
-    return lu.setA(influence.copy());
+    // copy only where the factorisation would overwrite its input (EJML states it per solver)
+    return lu.setA(lu.modifiesA() ? influence.copy() : influence);
   }
 
   /**
@@ -43,11 +44,6 @@ public final class PressureSolver {
       throw new IllegalStateException("factorise first");
     }
     out.reshape(normalwash.numRows, normalwash.numCols);
-    lu.solve(normalwash.copy(), out);
-  }
-
-  /** @return the last influence matrix (read-only use) */
-  ZMatrixRMaj influence() {
-    return influence;
+    lu.solve(lu.modifiesB() ? normalwash.copy() : normalwash, out);
   }
 }
