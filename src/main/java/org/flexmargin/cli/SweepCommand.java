@@ -110,17 +110,18 @@ final class SweepCommand implements Callable<Integer> {
         ? style.reportOptions().withProposedNotches(proposedNotches(c)) : style.reportOptions();
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, cost, terminal);
-    SweepResult result = new CaseSweep(work.threads).run(c, bar);
+    CaseSweep sweep = new CaseSweep(work.threads);
+    SweepResult result = sweep.run(c, bar);
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
     if (terminal) {
       err.println("writing the report to " + target.toAbsolutePath().normalize() + " ...");
       err.flush();
     }
-    Path written = ReportFolder.writeAtomically(target, folder -> {
+    Path written = sweep.inPool(() -> ReportFolder.writeAtomically(target, folder -> {
       ResultFiles.write(folder, result, findings, Version.get());
       ReportWriter.write(folder, result, findings, Version.get(), reportOptions);
-    });
+    }));
     if (!common.quiet) {
       out.println("case " + c.name() + ": " + result.pathDescription());
       out.println();

@@ -1,6 +1,7 @@
 package org.flexmargin.report;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -59,26 +60,31 @@ public final class ReportWriter {
       System.setProperty("java.awt.headless", "true");
     }
     Path chartDir = Files.createDirectories(folder.resolve(CHARTS_FOLDER));
+    SpeedAxisUnit unit = options.chartSpeedUnit();
+    List<ConfigurationResult> configurations = result.configurations();
+    // chart data (some charts sample the loop) per configuration in parallel, then every chart
+    // drawn and written in parallel; order and content do not depend on the number of threads
+    List<List<List<ReportChart>>> planned = configurations.parallelStream()
+        .map(c -> chartsOf(result, c, unit, options)).toList();
+    List<ReportChart> panelCharts = MarginPanel.of(result, unit);
+    List<ReportChart> all = new ArrayList<>();
+    planned.forEach(p -> p.forEach(all::addAll));
+    all.addAll(panelCharts);
+    List<EmbeddedChart> drawn = embed(all, chartDir, options);
     Map<String, List<EmbeddedChart>> charts = new LinkedHashMap<>();
     Map<String, List<EmbeddedChart>> loopCharts = new LinkedHashMap<>();
-    SpeedAxisUnit unit = options.chartSpeedUnit();
     boolean anyLoop = false;
-    for (ConfigurationResult c : result.configurations()) {
-      List<ReportChart> open = new ArrayList<>(FlutterCharts.of(result, c, unit));
-      List<ReportChart> loop = new ArrayList<>();
-      if (c.servo() != null) {
-        anyLoop = true;
-        List<ReportChart> closed = ClosedLoopCharts.of(result, c, unit);
-        // the closed-loop V-g and V-f go beside the open-loop ones, the root locus with the loop charts
-        open.add(closed.get(1));
-        open.add(closed.get(2));
-        loop.addAll(MarginCharts.of(result, c, unit));
-        loop.add(closed.get(0));
-        loop.addAll(LoopResponseCharts.of(result, c, unit, options.proposedNotches()));
-      }
-      charts.put(c.configuration(), embed(open, chartDir, options));
-      loopCharts.put(c.configuration(), embed(loop, chartDir, options));
+    int next = 0;
+    for (int i = 0; i < configurations.size(); i++) {
+      ConfigurationResult c = configurations.get(i);
+      anyLoop |= c.servo() != null;
+      int open = planned.get(i).get(0).size();
+      int loop = planned.get(i).get(1).size();
+      charts.put(c.configuration(), drawn.subList(next, next + open));
+      loopCharts.put(c.configuration(), drawn.subList(next + open, next + open + loop));
+      next += open + loop;
     }
+    List<EmbeddedChart> panel = drawn.subList(next, drawn.size());
     Instant now = Instant.now();
     List<ReportSection> sections = new ArrayList<>(OpenLoopSections.of(result, findings, charts, toolVersion, now, unit));
     if (anyLoop || result.analysisCase().requirements() != null) {
@@ -88,7 +94,6 @@ public final class ReportWriter {
     }
     String title = (anyLoop ? "Aeroservoelastic clearance report: " : "Flutter and divergence report: ")
         + result.analysisCase().name();
-    List<EmbeddedChart> panel = embed(MarginPanel.of(result, unit), chartDir, options);
     String page = HtmlReport.render(title, List.of(result.pathDescription()),
         w -> VerdictStrip.write(w, result, unit, panel, options.proposedNotches()),
         java.util.stream.Stream.of(result.analysisCase().description()).filter(s -> !s.isBlank()).toList(),
@@ -98,17 +103,41 @@ public final class ReportWriter {
     return html;
   }
 
+  /** @return the open-loop group (with the closed-loop V-g and V-f) and the loop group of charts */
+  private static List<List<ReportChart>> chartsOf(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit,
+      ReportOptions options) {
+    List<ReportChart> open = new ArrayList<>(FlutterCharts.of(result, c, unit));
+    List<ReportChart> loop = new ArrayList<>();
+    if (c.servo() != null) {
+      List<ReportChart> closed = ClosedLoopCharts.of(result, c, unit);
+      // the closed-loop V-g and V-f go beside the open-loop ones, the root locus with the loop charts
+      open.add(closed.get(1));
+      open.add(closed.get(2));
+      loop.addAll(MarginCharts.of(result, c, unit));
+      loop.add(closed.get(0));
+      loop.addAll(LoopResponseCharts.of(result, c, unit, options.proposedNotches()));
+    }
+    return List.of(open, loop);
+  }
+
+  /** Draws and writes the charts in parallel (in the pool of the calling thread); results in order. */
   private static List<EmbeddedChart> embed(List<ReportChart> charts, Path chartDir, ReportOptions options)
       throws IOException {
-    List<EmbeddedChart> list = new ArrayList<>();
-    for (ReportChart chart : charts) {
-      byte[] png = chart.png();
-      List<String> names = new ArrayList<>();
-      for (Path p : chart.writeTo(chartDir, png, options.vectorCharts())) {
-        names.add(CHARTS_FOLDER + "/" + p.getFileName());
-      }
-      list.add(new EmbeddedChart(chart, png, names));
+    try {
+      return charts.parallelStream().map(chart -> {
+        try {
+          byte[] png = chart.png();
+          List<String> names = new ArrayList<>();
+          for (Path p : chart.writeTo(chartDir, png, options.vectorCharts())) {
+            names.add(CHARTS_FOLDER + "/" + p.getFileName());
+          }
+          return new EmbeddedChart(chart, png, names);
+        } catch (IOException e) {
+          throw new UncheckedIOException(e);
+        }
+      }).toList();
+    } catch (UncheckedIOException e) {
+      throw e.getCause();
     }
-    return list;
   }
 }

@@ -5,8 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
+import java.util.concurrent.ForkJoinPool;
 import java.util.concurrent.Future;
 import org.flexmargin.flutter.AeroelasticSystem;
 import org.flexmargin.flutter.DivergenceResult;
@@ -23,8 +22,11 @@ import org.flexmargin.model.ElasticMode;
 /**
  * Runs the analysis of every configuration of a case: divergence (direct and confirmed over the
  * sweep), the open-loop flutter sweep with refined crossings and, when the case has a loop, the
- * loop margins at every point and the closed-loop eigenvalues with their refined onsets. Configurations run in parallel on
- * the given number of threads; each analysis is sequential along its path (continuation).
+ * loop margins at every point and the closed-loop eigenvalues with their refined onsets. One
+ * work-stealing pool of the given number of threads runs the configurations and, inside each,
+ * the independent grid points of the loop stages and the onset brackets ({@link SweepParallel});
+ * the flutter continuation is sequential along its path. Results do not depend on the number of
+ * threads.
  */
 public final class CaseSweep {
   private final int threads;
@@ -59,7 +61,7 @@ public final class CaseSweep {
    */
   public SweepResult run(AnalysisCase analysisCase, SweepProgress progress) {
     PlannedPath path = new PlannedPath(analysisCase.sweep());
-    ExecutorService pool = Executors.newFixedThreadPool(Math.min(threads, analysisCase.configurations().size()));
+    ForkJoinPool pool = new ForkJoinPool(threads);
     try {
       List<Future<ConfigurationResult>> futures = new ArrayList<>();
       for (Configuration c : analysisCase.configurations()) {
@@ -83,6 +85,39 @@ public final class CaseSweep {
     } finally {
       pool.shutdownNow();
     }
+  }
+
+  /**
+   * Runs other work (such as drawing the report's charts) on a work-stealing pool of this
+   * sweep's number of threads, so that parallel streams inside it use that many threads.
+   *
+   * @param work the work; its unchecked exceptions and errors are rethrown unchanged
+   * @return its result
+   */
+  public <T> T inPool(java.util.function.Supplier<T> work) {
+    ForkJoinPool pool = new ForkJoinPool(threads);
+    Object[] value = new Object[1];
+    Throwable[] failure = new Throwable[1];
+    try {
+      pool.submit(() -> {
+        try {
+          value[0] = work.get();
+        } catch (RuntimeException | Error e) {
+          failure[0] = e;
+        }
+      }).join();
+    } finally {
+      pool.shutdown();
+    }
+    if (failure[0] instanceof RuntimeException re) {
+      throw re;
+    }
+    if (failure[0] instanceof Error e) {
+      throw e;
+    }
+    @SuppressWarnings("unchecked")
+    T result = (T) value[0];
+    return result;
   }
 
   /** Each re-solve splits every planned grid interval this many more times. */
@@ -132,8 +167,23 @@ public final class CaseSweep {
    */
   public static ConfigurationResult analyse(Configuration c, PlannedPath path, AnalysisCase analysisCase,
       SweepProgress progress) {
+    return analyse(ConfigurationModel.of(c), c, path, analysisCase, progress);
+  }
+
+  /**
+   * Analyses one configuration along a path with a given model (for instance with the loop on the
+   * exact aerodynamic source, {@link ConfigurationModel#withExactLoop()}).
+   *
+   * @param model the configuration's model
+   * @param c configuration
+   * @param path sweep path
+   * @param analysisCase the case (options, loop, requirements)
+   * @param progress told of each completed stage
+   * @return the configuration's results
+   */
+  public static ConfigurationResult analyse(ConfigurationModel model, Configuration c, PlannedPath path,
+      AnalysisCase analysisCase, SweepProgress progress) {
     long start = System.nanoTime();
-    ConfigurationModel model = ConfigurationModel.of(c);
     AeroelasticSystem system = model.system();
     DivergenceSolver div = new DivergenceSolver();
     DivergenceResult divergence = div.solve(system);

@@ -62,21 +62,19 @@ public final class ClearanceSweep {
     List<MarginOnset> onsets = new ArrayList<>();
     if (servo != null) {
       double maxHz = ServoMargins.bandTopHz(model);
-      for (int p = 0; p < servo.points().size(); p++) {
+      points.addAll(SweepParallel.map(servo.points().size(), p -> {
         ServoPoint sp = servo.points().get(p);
         ServoLoop sl = ServoMargins.loopAt(model, configuration, loop, sp.condition());
         ClosedLoopStability stability = servo.closedLoop().points().get(p).maxRealPart() < 0
             ? ClosedLoopStability.STABLE : ClosedLoopStability.UNSTABLE;
-        points.add(assessAt(requirements, sp.condition(), sp.margins(), stability, modesAt(flutter, p), sl));
-      }
-      for (MarginOnsets.Bracket b : MarginOnsets.brackets(points)) {
-        if (b.key().kind() == CheckKind.CLOSED_LOOP_STABILITY) {
-          onsets.add(stabilityOnset(b, servo, points, requirements));
-          continue;
-        }
-        onsets.add(refine(b, model, configuration, loop, path, flutter, points, requirements, maxHz,
-            speedToleranceMps));
-      }
+        return assessAt(requirements, sp.condition(), sp.margins(), stability, modesAt(flutter, p), sl);
+      }));
+      List<MarginOnsets.Bracket> brackets = MarginOnsets.brackets(points);
+      onsets.addAll(SweepParallel.map(brackets.size(), i -> {
+        MarginOnsets.Bracket b = brackets.get(i);
+        return b.key().kind() == CheckKind.CLOSED_LOOP_STABILITY ? stabilityOnset(b, servo, points, requirements)
+            : refine(b, model, configuration, loop, path, flutter, points, requirements, maxHz, speedToleranceMps);
+      }));
     }
     List<OnsetSearch> searches = new ArrayList<>();
     double top = path.at(path.gridPoints() - 1).speedEasMps();

@@ -84,14 +84,15 @@ public final class ClosedLoopSweep {
     double[][] re = new double[np][];
     double[][] im = new double[np][];
     double[][] shortPeriod = new double[np][];
-    int[] solves = {0};
-    for (int p = 0; p < np; p++) {
+    int[] solves = {np};
+    List<Eigenvalues> eigen = SweepParallel.map(np, p -> {
       ServoLoop servo = ServoMargins.loopAt(model, configuration, loop, path.at(p));
-      solves[0]++;
-      Eigenvalues e = servo.closedLoop(rational).eigenvalues();
-      re[p] = e.real();
-      im[p] = e.imag();
       shortPeriod[p] = servo.plant().shortPeriodRoots();
+      return servo.closedLoop(rational).eigenvalues();
+    });
+    for (int p = 0; p < np; p++) {
+      re[p] = eigen.get(p).real();
+      im[p] = eigen.get(p).imag();
     }
     int n = re[0].length;
     // order[p][j]: index at point p of branch j (nearest-neighbour continuation)

@@ -16,8 +16,22 @@ import org.flexmargin.structure.StructuralModel;
  *
  * @param modes the mode table (user's, or built from a validation structure)
  * @param system the aeroelastic equations in modal coordinates
+ * @param loopAero the forces of the frequency-domain loop (interpolated strip theory by default)
  */
-public record ConfigurationModel(ModeTable modes, AeroelasticSystem system) {
+public record ConfigurationModel(ModeTable modes, AeroelasticSystem system, LoopAerodynamics loopAero) {
+
+  /**
+   * @param modes the mode table
+   * @param system the aeroelastic equations
+   */
+  public ConfigurationModel(ModeTable modes, AeroelasticSystem system) {
+    this(modes, system, LoopAerodynamics.of(system.aero()));
+  }
+
+  /** @return the same model with the loop on the exact aerodynamic source */
+  public ConfigurationModel withExactLoop() {
+    return new ConfigurationModel(modes, system, LoopAerodynamics.exact(system.aero()));
+  }
 
   /** @return the model of a configuration */
   public static ConfigurationModel of(Configuration configuration) {

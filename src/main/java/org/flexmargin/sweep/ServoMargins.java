@@ -52,7 +52,7 @@ public final class ServoMargins {
    */
   public static ServoLoop loopAt(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       FlightCondition condition) {
-    AircraftPlant plant = new AircraftPlant(model.modes(), model.system().structure(), model.system().aero(),
+    AircraftPlant plant = new AircraftPlant(model.modes(), model.system().structure(), model.loopAero().source(),
         configuration.rigidBody(), loop.sensors(), condition);
     return new ServoLoop(plant, FlightControlLaw.of(loop, condition.dynamicPressurePa()));
   }
@@ -130,8 +130,7 @@ public final class ServoMargins {
   public List<ServoPoint> along(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       PlannedPath path, FlutterSolution openLoop, ClosedLoopResult closedLoop) {
     double maxHz = bandTopHz(model);
-    List<ServoPoint> points = new ArrayList<>();
-    for (int p = 0; p < path.gridPoints(); p++) {
+    return SweepParallel.map(path.gridPoints(), p -> {
       FlightCondition fc = path.at(p);
       ServoLoop servo = loopAt(model, configuration, loop, fc);
       Eigenvalues seeds = closedLoop == null ? seeds(openLoop, p)
@@ -141,9 +140,8 @@ public final class ServoMargins {
       for (int k = 0; k < loop.paths().size(); k++) {
         perPath.add(margins.analyse(servo.brokenAtPath(k), 2 * Math.PI * MIN_FREQUENCY_HZ, 2 * Math.PI * maxHz, seeds));
       }
-      points.add(new ServoPoint(p, fc, main, perPath, notchChecks(loop, openLoop, p, main)));
-    }
-    return points;
+      return new ServoPoint(p, fc, main, perPath, notchChecks(loop, openLoop, p, main));
+    });
   }
 
   /** Attenuation of each notch at the modes' current frequencies and its phase cost at crossover. */
