@@ -21,7 +21,16 @@ import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.LoopSpec;
 import org.flexmargin.model.SpeedSweep;
+import java.util.List;
+import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.report.ReportOptions;
+import org.flexmargin.report.ReportWriter;
+import org.flexmargin.report.ResultFiles;
+import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.ConfigurationModel;
+import org.flexmargin.sweep.Finding;
+import org.flexmargin.sweep.Findings;
+import org.flexmargin.sweep.SweepResult;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.ServoMargins;
 import picocli.CommandLine.Command;
@@ -35,18 +44,19 @@ import picocli.CommandLine.Spec;
  * response by three routes.
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-    description = {"Print timing figures: p-k sweep (10 and 30 modes, 200 speeds), closed-loop "
+    description = {"Print timing figures: the demo (sweep and report; CPU, wall and peak memory; "
+        + "threads 1, 2, 4; 55 and 550 sweep points), p-k sweep (8 to 64 modes, 200 speeds), closed-loop "
         + "eigenvalues (about 150 and 300 states, 200 speeds), broken-loop frequency response "
         + "(2000 frequencies x 200 speeds, 20 and 40 modes: direct, Hessenberg, dense)."},
     footer = {"", "Examples:", "  flexmargin bench", "  flexmargin bench pk --modes 10,30",
-        "  flexmargin bench closed-loop", "  flexmargin bench loop-response --speeds 50"})
+        "  flexmargin bench demo", "  flexmargin bench closed-loop", "  flexmargin bench loop-response --speeds 50"})
 final class BenchCommand implements Callable<Integer> {
   @Parameters(index = "0", arity = "0..1", defaultValue = "all",
-      description = "Which benchmark: pk, closed-loop, loop-response or all (default).")
+      description = "Which benchmark: demo, pk, closed-loop, loop-response or all (default).")
   String which = "all";
 
   @Option(names = "--modes", split = ",", description = "p-k mode counts. Default: ${DEFAULT-VALUE}.")
-  int[] modes = {10, 30};
+  int[] modes = {8, 16, 32, 64};
 
   @Option(names = "--speeds", description = "Speeds per sweep. Default: ${DEFAULT-VALUE}.")
   int speeds = 200;
@@ -64,6 +74,9 @@ final class BenchCommand implements Callable<Integer> {
     PrintWriter out = spec.commandLine().getOut();
     out.printf(Locale.ROOT, "flexmargin benchmarks (invented uniform-wing scenarios), Java %s, %d processors%n",
         System.getProperty("java.version"), Runtime.getRuntime().availableProcessors());
+    if (which.equals("all") || which.equals("demo")) {
+      demo(out);
+    }
     if (which.equals("all") || which.equals("pk")) {
       pk(out);
     }
@@ -77,6 +90,121 @@ final class BenchCommand implements Callable<Integer> {
     }
     out.flush();
     return FlexMargin.EXIT_OK;
+  }
+
+  /** Process CPU time (s), all threads. */
+  private static double cpuSeconds() {
+    return ((com.sun.management.OperatingSystemMXBean) ManagementFactory.getOperatingSystemMXBean())
+        .getProcessCpuTime() * 1e-9;
+  }
+
+  /** @return the peak resident set of this process (MB) where the system reports it, else NaN */
+  static double peakRssMb() {
+    try {
+      for (String line : java.nio.file.Files.readAllLines(java.nio.file.Path.of("/proc/self/status"))) {
+        if (line.startsWith("VmHWM:")) {
+          return Double.parseDouble(line.replaceAll("[^0-9]", "")) / 1024.0;
+        }
+      }
+    } catch (java.io.IOException | RuntimeException e) {
+      return Double.NaN;
+    }
+    return Double.NaN;
+  }
+
+  /** Wall and CPU seconds of one piece of work. */
+  private record Timed(double wallS, double cpuS) {
+    static Timed of(Runnable work) {
+      double c0 = cpuSeconds();
+      long t0 = System.nanoTime();
+      work.run();
+      return new Timed((System.nanoTime() - t0) * 1e-9, cpuSeconds() - c0);
+    }
+  }
+
+  /** The demo with the sweep plan's number of points changed (and only the first configuration if asked). */
+  private static AnalysisCase demoWith(AnalysisCase c, int points, boolean firstOnly) {
+    SpeedSweep s = (SpeedSweep) c.sweep();
+    return new AnalysisCase(c.format(), c.name(), c.description(),
+        firstOnly ? c.configurations().subList(0, 1) : c.configurations(),
+        new SpeedSweep(s.altitudeM(), s.kind(), s.fromMps(), s.toMps(), points), c.options(), c.inputs(), c.loop(),
+        c.requirements(), c.warnings());
+  }
+
+  private void demo(PrintWriter out) {
+    AnalysisCase demo = DemoCommand.bundledCase();
+    int processors = Runtime.getRuntime().availableProcessors();
+    Timed cold = Timed.of(() -> writeReport(demo, processors));
+    out.printf(Locale.ROOT, "demo (2 configurations, 55 points, loop, clearance, report with SVG): first run in this "
+        + "JVM (with compilation) %.2f s wall, %.2f s CPU%n", cold.wallS(), cold.cpuS());
+    for (int w = 0; w < 2; w++) {
+      writeReport(demo, processors);
+    }
+    Timed whole = Timed.of(() -> writeReport(demo, processors));
+    Timed report = Timed.of(() -> writeReport(null, processors));
+    out.printf(Locale.ROOT, "  after warm-up, %d threads: %.2f s wall, %.2f s CPU (of which report %.2f s wall, "
+        + "%.2f s CPU); peak resident memory of this process %.0f MB%n", processors, whole.wallS(), whole.cpuS(),
+        report.wallS(), report.cpuS(), peakRssMb());
+    double oneThread = 0;
+    for (int t : new int[] {1, 2, 4}) {
+      Timed s = Timed.of(() -> new CaseSweep(t).run(demo, n -> { }));
+      oneThread = t == 1 ? s.wallS() : oneThread;
+      out.printf(Locale.ROOT, "  sweep only, --threads %d: %.2f s wall, %.2f s CPU, speed-up %.2f%n", t, s.wallS(),
+          s.cpuS(), oneThread / s.wallS());
+    }
+    double[] perPoint = new double[2];
+    int[] counts = {55, 550};
+    for (int i = 0; i < 2; i++) {
+      AnalysisCase c = demoWith(demo, counts[i], true);
+      Timed s = Timed.of(() -> new CaseSweep(1).run(c, n -> { }));
+      perPoint[i] = s.cpuS() / counts[i];
+      out.printf(Locale.ROOT, "  sweep of one configuration, %d points, 1 thread: %.2f s CPU, %.1f ms per point%n",
+          counts[i], s.cpuS(), perPoint[i] * 1e3);
+    }
+    out.printf(Locale.ROOT, "  cost per point and configuration from the difference: %.1f ms (linear in points "
+        + "if it equals the figures above)%n", (perPoint[1] * counts[1] - perPoint[0] * counts[0])
+            / (counts[1] - counts[0]) * 1e3);
+  }
+
+  /** Sweeps the case (or reuses the last result when null) and writes results and report to a scratch folder. */
+  private SweepResult lastDemo;
+
+  private void writeReport(AnalysisCase c, int threads) {
+    CaseSweep sweep = new CaseSweep(threads);
+    if (c != null) {
+      lastDemo = sweep.run(c, n -> { });
+    }
+    SweepResult r = lastDemo;
+    java.nio.file.Path dir = null;
+    try {
+      dir = java.nio.file.Files.createTempDirectory("flexmargin-bench");
+      java.nio.file.Path folder = dir;
+      List<Finding> findings = Findings.of(r, new PlannedPath(r.analysisCase().sweep()).at(0));
+      sweep.inPool(() -> {
+        try {
+          ResultFiles.write(folder, r, findings, Version.get());
+          ReportWriter.write(folder, r, findings, Version.get(), ReportOptions.defaults());
+        } catch (java.io.IOException e) {
+          throw new java.io.UncheckedIOException(e);
+        }
+        return folder;
+      });
+    } catch (java.io.IOException e) {
+      throw new java.io.UncheckedIOException(e);
+    } finally {
+      deleteTree(dir);
+    }
+  }
+
+  private static void deleteTree(java.nio.file.Path dir) {
+    if (dir == null) {
+      return;
+    }
+    try (var files = java.nio.file.Files.walk(dir)) {
+      files.sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+    } catch (java.io.IOException e) {
+      // scratch folder under the system temporary folder: left for the system to clean
+    }
   }
 
   private PlannedPath path() {
