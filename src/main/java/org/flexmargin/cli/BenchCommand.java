@@ -47,12 +47,13 @@ import picocli.CommandLine.Spec;
     description = {"Print timing figures: the demo (sweep and report; CPU, wall and peak memory; "
         + "threads 1, 2, 4; 55 and 550 sweep points), p-k sweep (8 to 64 modes, 200 speeds), closed-loop "
         + "eigenvalues (about 150 and 300 states, 200 speeds), broken-loop frequency response "
-        + "(2000 frequencies x 200 speeds, 20 and 40 modes: direct, Hessenberg, dense)."},
+        + "(2000 frequencies x 200 speeds, 20 and 40 modes: direct, Hessenberg, dense), doublet-lattice "
+        + "influence matrix and LU (1,000 boxes)."},
     footer = {"", "Examples:", "  flexmargin bench", "  flexmargin bench pk --modes 10,30",
         "  flexmargin bench demo", "  flexmargin bench closed-loop", "  flexmargin bench loop-response --speeds 50"})
 final class BenchCommand implements Callable<Integer> {
   @Parameters(index = "0", arity = "0..1", defaultValue = "all",
-      description = "Which benchmark: demo, pk, closed-loop, loop-response or all (default).")
+      description = "Which benchmark: demo, pk, closed-loop, loop-response, lattice or all (default).")
   String which = "all";
 
   @Option(names = "--modes", split = ",", description = "p-k mode counts. Default: ${DEFAULT-VALUE}.")
@@ -87,6 +88,9 @@ final class BenchCommand implements Callable<Integer> {
     if (which.equals("all") || which.equals("loop-response")) {
       loopResponse(out, 20);
       loopResponse(out, 40);
+    }
+    if (which.equals("all") || which.equals("lattice")) {
+      LatticeBench.run(out, repeats);
     }
     out.flush();
     return FlexMargin.EXIT_OK;
