@@ -119,7 +119,7 @@ class CommandLineFlowTest {
   @Test
   void aRunAboveTheCostLimitIsRefusedUnlessForced(@TempDir Path tmp) throws IOException {
     Path big = tmp.resolve("big-case.json");
-    Files.writeString(big, Files.readString(Path.of(DEMO)).replace("\"points\": 55", "\"points\": 40000"));
+    Files.writeString(big, Files.readString(Path.of(DEMO)).replace("\"points\": 55", "\"points\": 100000"));
     for (Path table : List.of(Path.of("mode-tables/demo/ridgeline-mc7-full-payload.json"),
         Path.of("mode-tables/demo/ridgeline-mc7-empty.csv"))) {
       Files.copy(table, tmp.resolve(table.getFileName()));
@@ -129,7 +129,7 @@ class CommandLineFlowTest {
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code(), r.err());
     assertTrue(r.err().contains("estimated cost: expected at most " + CostEstimate.LIMIT_TEXT
         + " (give --force to run anyway)"), r.err());
-    assertTrue(r.out().contains("x 40000 grid points"), r.out());
+    assertTrue(r.out().contains("x 100000 grid points"), r.out());
     assertFalse(Files.exists(out));
     CliRun check = run("check", big.toString());
     assertTrue(check.out().contains("sweep refuses this case unless --force is given"), check.out());
