@@ -13,9 +13,9 @@ import org.flexmargin.sweep.PlannedPath;
  * of grid points N, elastic modes m and closed-loop states n. The per-point costs are fitted to
  * this project's measurements on one core (the {@code bench} figures in README.md and the demo's
  * stage times): p-k 4 ms + 1.8e-6 m^2 + 2.5e-9 m^4 s (root solves grow as m^3 per root); loop
- * margins 20 ms + 1.5e-6 (2 + m)^3 s (about 5 000 complex (2 + m) solves per point, the forces
- * interpolated in k; refitted when the interpolant cut the demo's sweep from about 12 s to 3.6 s
- * of computing); closed loop
+ * margins 12 ms + 6.5e-6 (2 + m)^3 s (about 5 000 complex (2 + m) solves per point; the constant,
+ * mostly force assembly, refitted when the forces were interpolated in k and the demo's sweep
+ * fell from about 12 s to 3.6 s of computing); closed loop
  * 5 ms + 7e-9 n^3 s with n = 6 m + 12 (four aerodynamic lags; two real eigen-decompositions per
  * point with the onset refinement); clearance 30 % of the loop margins (margin onsets re-solve the
  * loop). It is good to a factor of about 3, enough to tell seconds from hours.
@@ -98,7 +98,7 @@ record CostEstimate(List<Stages> configurations) {
     double clearance = 0;
     if (loop) {
       double k = 2 + dm;
-      margins = points * (0.02 + 1.5e-6 * k * k * k);
+      margins = points * (0.012 + 6.5e-6 * k * k * k);
       double n = (2 + LAGS) * dm + 12;
       closed = points * (5e-3 + 7e-9 * n * n * n);
       if (requirements) {

@@ -155,8 +155,9 @@ class CommandLineFlowTest {
     StringWriter sink = new StringWriter();
     ProgressBar bar = new ProgressBar(new PrintWriter(sink), new CostEstimate(List.of(s)), true);
     bar.stageDone("full_payload", "divergence and flutter");
-    // counting stages would say 25 %; the flutter stage is a small part of the demo's work
-    assertTrue(bar.fractionDone() < 0.1, "after flutter: " + bar.fractionDone());
+    // counting stages would say 25 %; the flutter stage is a small part of the demo's work (about
+    // 12 % since the loop's forces are interpolated)
+    assertTrue(bar.fractionDone() < 0.15, "after flutter: " + bar.fractionDone());
     bar.stageDone("full_payload", "loop margins");
     bar.stageDone("full_payload", "closed loop");
     assertTrue(bar.fractionDone() < 1, "not complete before the last stage");
