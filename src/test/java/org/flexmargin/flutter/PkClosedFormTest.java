@@ -31,13 +31,13 @@ import org.junit.jupiter.api.Test;
  */
 class PkClosedFormTest {
 
-  private static final double B = 0.5;
-  private static final double ZETA = 0.02;
-  private static final double[] F_HZ = {2.0, 5.0};
-  private static final double[] Q0 = {0.002, -0.005};
-  private static final double[] D = {0.02, 0.027};
-  private static final PlannedPath PATH = new PlannedPath(new SpeedSweep(0.0, AirspeedKind.TRUE, 20, 200, 19));
-  private static final double RHO = PATH.at(0).densityKgPerM3();
+  static final double B = 0.5;
+  static final double ZETA = 0.02;
+  static final double[] F_HZ = {2.0, 5.0};
+  static final double[] Q0 = {0.002, -0.005};
+  static final double[] D = {0.02, 0.027};
+  static final PlannedPath PATH = new PlannedPath(new SpeedSweep(0.0, AirspeedKind.TRUE, 20, 200, 19));
+  static final double RHO = PATH.at(0).densityKgPerM3();
 
   /** Diagonal Q(ik) = q0 + i k d; valid reduced frequencies [kMin, kMax]. */
   private record Diagonal(double[] q0, double[] d, double kMin, double kMax) implements AeroSource {
@@ -76,7 +76,7 @@ class PkClosedFormTest {
     }
   }
 
-  private static AeroelasticSystem system(double[] fHz, double[] q0, double[] d, double kMin, double kMax) {
+  static AeroelasticSystem system(double[] fHz, double[] q0, double[] d, double kMin, double kMax) {
     int n = fHz.length;
     double[][] m = new double[n][n];
     double[][] c = new double[n][n];
