@@ -520,7 +520,7 @@ public final class CaseReader {
     String kind = a.exactlyOne("the aerodynamic data", "strip_theory", "force_table", "lifting_surfaces");
     JsonField f = a.optional(kind);
     if (kind.equals("lifting_surfaces")) {
-      return LatticeReader.read(f, table);
+      return LatticeReader.read(f, table, ctx::resolve);
     }
     if (kind.equals("force_table")) {
       String rel = f.text();
