@@ -45,13 +45,20 @@ public final class AeroSourceFactory {
    */
   public static LatticeTable forces(LatticeSpec lattice, ModeTable modes) {
     if (lattice.precomputed() != null) {
-      return new LatticeTable(lattice.precomputed(), String.format(Locale.ROOT,
-          "doublet lattice, %d boxes, forces from the cache file", lattice.boxCount()));
+      // the spline check is cheap (no influence matrix): keep reporting it
+      BoxLattice boxes = new BoxLattice(lattice.surfaces(), lattice.symmetry());
+      ModalBoxes shapes = ModalBoxes.of(lattice, boxes, modes);
+      return new LatticeTable(lattice.precomputed(), origin(boxes.size(), shapes.rigidHeaveErrorM(),
+          shapes.rigidPitchErrorM()) + ", forces computed once for the run"
+          + (lattice.forceCacheFile() == null ? "" : " and kept in " + lattice.forceCacheFile().getFileName()));
     }
     LatticeForces.Result r = LatticeForces.compute(lattice, modes);
-    return new LatticeTable(r.forces(), String.format(Locale.ROOT,
-        "doublet lattice, %d boxes (spline rigid heave error %.1e m, pitch %.1e m/rad)",
-        r.boxes(), r.rigidHeaveErrorM(), r.rigidPitchErrorM()));
+    return new LatticeTable(r.forces(), origin(r.boxes(), r.rigidHeaveErrorM(), r.rigidPitchErrorM()));
+  }
+
+  private static String origin(int boxes, double heave, double pitch) {
+    return String.format(Locale.ROOT, "doublet lattice, %d boxes (spline rigid heave error %.1e m, pitch %.1e m/rad)",
+        boxes, heave, pitch);
   }
 
   /**
