@@ -92,6 +92,7 @@ public final class CaseReader {
 
   private static final List<String> CASE_KEYS =
       List.of("format", "name", "description", "plausibility_overrides", "configurations", "sweep", "options",
+          "envelope",
           "loop", "requirements");
   private static final List<String> CONFIG_KEYS =
       List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
