@@ -104,7 +104,8 @@ public final class CaseReader {
       "generalized_force_per_elevator_m2");
   private static final List<String> LOOP_KEYS = List.of("actuator", "sensors", "paths",
       "computation_delay_s", "sample_period_s", "pade_order");
-  private static final List<String> ACTUATOR_KEYS = List.of("order", "bandwidth_hz", "damping_ratio");
+  private static final List<String> ACTUATOR_KEYS = List.of("order", "bandwidth_hz", "damping_ratio",
+      "rate_limit_deg_s", "position_limit_deg");
   private static final List<String> SENSOR_KEYS =
       List.of("name", "kind", "station", "lever_arm_m", "bandwidth_hz");
   private static final List<String> PATH_KEYS = List.of("sensor", "proportional_gain",
@@ -447,7 +448,13 @@ public final class CaseReader {
       }
       zeta = 0.0;
     }
-    return a.build(() -> new ActuatorSpec(order, bandwidth, zeta));
+    double rate = a.has("rate_limit_deg_s")
+        ? Math.toRadians(a.optional("rate_limit_deg_s").quantity(PlausibleRange.ACTUATOR_RATE_LIMIT))
+        : Double.POSITIVE_INFINITY;
+    double position = a.has("position_limit_deg")
+        ? Math.toRadians(a.optional("position_limit_deg").quantity(PlausibleRange.ACTUATOR_POSITION_LIMIT))
+        : Double.POSITIVE_INFINITY;
+    return a.build(() -> new ActuatorSpec(order, bandwidth, zeta, rate, position));
   }
 
   private static SensorSpec readSensor(JsonField s) {

@@ -26,14 +26,20 @@ public final class AircraftSimulation {
    * @return the results
    */
   public static SimulationResult run(SimulationPoint point, SimulationScenario scenario) {
-    AircraftSimulationModel model = point.model(scenario.closure());
+    AircraftSimulationModel model = point.model(scenario.closure(), scenario.penetration());
     double maxRe = model.system().eigenvalues().maxRealPart();
     List<String> notes = new ArrayList<>(point.servo().plant().assumptions());
     notes.add("aerodynamics for the time domain: " + point.fitDescription());
     notes.addAll(point.fitWarnings());
     notes.add("hold and delay ahead of the actuator as Pade approximations, as in the closed-loop eigenvalues");
-    notes.add("gusts act on the whole aircraft at once (no penetration delay) as an angle of attack w/V with "
-        + "quasi-steady forces (no unsteady lift growth)");
+    if (scenario.penetration() == null || scenario.penetration().wingToTailM() == 0) {
+      notes.add("gusts act on the whole aircraft at once (no penetration delay) as an angle of attack w/V with "
+          + "quasi-steady forces (no unsteady lift growth)");
+    } else {
+      notes.add("gusts act as an angle of attack w/V with quasi-steady forces (no unsteady lift growth); "
+          + scenario.penetration().describe(point.condition().speedTasMps(),
+              AircraftSimulationModel.maxOmega(point.servo().plant().stateSpace(point.rational()))));
+    }
     if (maxRe > 0) {
       notes.add(String.format(Locale.ROOT, "the linear %s loop is UNSTABLE at this point (largest real part "
           + "%.3f 1/s): responses grow; no stationary turbulence response exists",
@@ -87,7 +93,8 @@ public final class AircraftSimulation {
     }
     List<RateLimitCycle.Prediction> cycles = new ArrayList<>();
     List<String> checks = new ArrayList<>();
-    if (Double.isFinite(scenario.limits().rateLimitRadPerS()) && scenario.closure() == LoopClosure.CLOSED) {
+    if (scenario.limitCycles() && Double.isFinite(scenario.limits().rateLimitRadPerS())
+        && scenario.closure() == LoopClosure.CLOSED) {
       SisoFrequencyFunction loop = point.servo().brokenLoop();
       cycles.addAll(RateLimitCycle.predict(loop, scenario.limits().rateLimitRadPerS(), 2 * Math.PI * CYCLE_MIN_HZ,
           2 * Math.PI * CYCLE_MAX_HZ, 600));

@@ -26,9 +26,11 @@ import org.flexmargin.model.SensorSpec;
  * delta'.
  *
  * <p>Inputs: {@code pilot_command_rad} (added to the law's output at the elevator command, before
- * the hold), {@code gust_velocity_mps} (vertical gust, positive up, seen by the whole aircraft at
- * once as an angle-of-attack change w_g / V: its forces are those of alpha in the quasi-steady
- * coupling coefficients, without unsteady gust lift growth).
+ * the hold), {@code gust_velocity_mps} (vertical gust at the wing, positive up, an angle-of-attack
+ * change w_g / V: its forces are those of alpha in the quasi-steady coupling coefficients, without
+ * unsteady gust lift growth). Without {@link GustPenetration} the whole aircraft meets the gust at
+ * once; with it, the tailplane's share of those forces sees the gust delayed by d / V (Padé states
+ * after the actuator's, output {@link #TAIL_GUST}).
  *
  * <p>Outputs: every sensor, alpha, rigid pitch rate, each modal coordinate, the elevator
  * position, rate and command (actuator input), the law's output, and both inputs. Immutable.
@@ -50,6 +52,8 @@ public final class AircraftSimulationModel {
   public static final String PITCH_RATE = "rigid_pitch_rate_rad_per_s";
   /** Output: angle of attack (rad). */
   public static final String ALPHA = "rigid_alpha_rad";
+  /** Output: gust velocity at the tailplane (m/s), with gust penetration only. */
+  public static final String TAIL_GUST = "tail_gust_velocity_mps";
 
   private final StateSpace system;
   private final int actuatorPosition;
@@ -181,6 +185,20 @@ public final class AircraftSimulationModel {
    *     second-order actuator
    */
   public static AircraftSimulationModel of(ServoLoop servo, RationalAerodynamics rational, LoopClosure closure) {
+    return of(servo, rational, closure, null);
+  }
+
+  /**
+   * Assembles the model with gust penetration.
+   *
+   * @param servo the loop at the flight condition (plant and law)
+   * @param rational the elastic aerodynamics in rational form
+   * @param closure whether the law's output drives the actuator
+   * @param penetration wing-to-tail delay of the gust, or null for none
+   * @return the model
+   */
+  public static AircraftSimulationModel of(ServoLoop servo, RationalAerodynamics rational, LoopClosure closure,
+      GustPenetration penetration) {
     AircraftPlant plant = servo.plant();
     StateSpace aircraft = plant.stateSpace(rational);
     if (!"alpha".equals(aircraft.stateNames().get(0))) {
@@ -216,7 +234,22 @@ public final class AircraftSimulationModel {
       paths.add(p.stateSpace());
     }
     int[] sensorOf = servo.law().pathSensorIndex();
-    return new Assembly(plant, aircraft, paths, sensorOf, pre, wAct, zAct, nq, closure).build();
+    StateSpace delay = null;
+    if (penetration != null && penetration.wingToTailM() > 0) {
+      delay = penetration.delay(plant.condition().speedTasMps(), maxOmega(aircraft));
+    }
+    double share = penetration == null ? 0 : penetration.tailShareOfElevator();
+    return new Assembly(plant, aircraft, paths, sensorOf, pre, wAct, zAct, nq, closure, delay, share).build();
+  }
+
+  /** @return 1.5 times the highest frequency among the aircraft's eigenvalues, at least 2 pi 10 rad/s */
+  static double maxOmega(StateSpace aircraft) {
+    double[] im = aircraft.eigenvalues().imag();
+    double max = 2 * Math.PI * 10 / 1.5;
+    for (double v : im) {
+      max = Math.max(max, Math.abs(v));
+    }
+    return 1.5 * max;
   }
 
   /** Builds the matrices: every signal as a row over [x; pilot; gust]. */
@@ -230,6 +263,9 @@ public final class AircraftSimulationModel {
     private final double zeta;
     private final int nq;
     private final LoopClosure closure;
+    private final StateSpace delay;
+    private final double tailShare;
+    private final int delayOffset;
     private final int na;
     private final int[] pathOffset;
     private final int preOffset;
@@ -238,7 +274,7 @@ public final class AircraftSimulationModel {
     private final DMatrixRMaj dyn;
 
     Assembly(AircraftPlant plant, StateSpace aircraft, List<StateSpace> paths, int[] sensorOf, StateSpace pre,
-        double w, double zeta, int nq, LoopClosure closure) {
+        double w, double zeta, int nq, LoopClosure closure, StateSpace delay, double tailShare) {
       this.plant = plant;
       this.aircraft = aircraft;
       this.paths = paths;
@@ -248,6 +284,8 @@ public final class AircraftSimulationModel {
       this.zeta = zeta;
       this.nq = nq;
       this.closure = closure;
+      this.delay = delay;
+      this.tailShare = delay == null ? 0 : tailShare;
       this.na = aircraft.stateCount();
       this.pathOffset = new int[paths.size()];
       int off = na;
@@ -257,7 +295,8 @@ public final class AircraftSimulationModel {
       }
       this.preOffset = off;
       this.actOffset = off + pre.stateCount();
-      this.n = actOffset + nq;
+      this.delayOffset = actOffset + nq;
+      this.n = delayOffset + (delay == null ? 0 : delay.stateCount());
       this.dyn = new DMatrixRMaj(n, n + 2);
     }
 
@@ -280,6 +319,18 @@ public final class AircraftSimulationModel {
       DMatrixRMaj dA = aircraft.d();
       DMatrixRMaj delta = row();
       delta.set(0, actOffset, 1);
+      // gust at the tailplane: the delay's output (zero row without penetration)
+      DMatrixRMaj tail = row();
+      if (delay != null) {
+        for (int i = 0; i < delay.stateCount(); i++) {
+          for (int j = 0; j < delay.stateCount(); j++) {
+            dyn.set(delayOffset + i, delayOffset + j, delay.a().get(i, j));
+          }
+          dyn.set(delayOffset + i, n + 1, delay.b().get(i, 0));
+          tail.set(0, delayOffset + i, delay.c().get(0, i));
+        }
+        tail.set(0, n + 1, delay.d().get(0, 0));
+      }
       // sensors: C x + D delta + (C[:, alpha] / V) w_g
       int ns = cA.numRows;
       DMatrixRMaj[] sensors = new DMatrixRMaj[ns];
@@ -289,7 +340,8 @@ public final class AircraftSimulationModel {
           sensors[s].set(0, j, cA.get(s, j));
         }
         addRow(sensors[s], 0, dA.get(s, 0), delta);
-        sensors[s].add(0, n + 1, cA.get(s, 0) / v);
+        sensors[s].add(0, n + 1, (cA.get(s, 0) - tailShare * dA.get(s, 0)) / v);
+        addRow(sensors[s], 0, tailShare * dA.get(s, 0) / v, tail);
       }
       // aircraft dynamics
       for (int i = 0; i < na; i++) {
@@ -297,7 +349,8 @@ public final class AircraftSimulationModel {
           dyn.set(i, j, aA.get(i, j));
         }
         addRow(dyn, i, bA.get(i, 0), delta);
-        dyn.set(i, n + 1, aA.get(i, 0) / v);
+        dyn.add(i, n + 1, (aA.get(i, 0) - tailShare * bA.get(i, 0)) / v);
+        addRow(dyn, i, tailShare * bA.get(i, 0) / v, tail);
       }
       // law paths
       DMatrixRMaj law = row();
@@ -375,6 +428,10 @@ public final class AircraftSimulationModel {
       names.add(PILOT_INPUT);
       rows.add(unit(n + 1));
       names.add(GUST_INPUT);
+      if (delay != null) {
+        rows.add(tail);
+        names.add(TAIL_GUST);
+      }
       DMatrixRMaj out = new DMatrixRMaj(rows.size(), n + 2);
       for (int r = 0; r < rows.size(); r++) {
         CommonOps_DDRM.insert(rows.get(r), out, r, 0);
@@ -391,6 +448,9 @@ public final class AircraftSimulationModel {
       states.add("actuator_position");
       if (nq == 2) {
         states.add("actuator_rate");
+      }
+      for (int i = 0; delay != null && i < delay.stateCount(); i++) {
+        states.add("gust_delay_x" + (i + 1));
       }
       StateSpace sys = new StateSpace(CommonOps_DDRM.extract(dyn, 0, n, 0, n), CommonOps_DDRM.extract(dyn, 0, n, n, n + 2),
           CommonOps_DDRM.extract(out, 0, out.numRows, 0, n), CommonOps_DDRM.extract(out, 0, out.numRows, n, n + 2),

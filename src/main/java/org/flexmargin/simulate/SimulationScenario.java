@@ -16,10 +16,14 @@ import org.flexmargin.model.InvalidInputException;
  * @param stepS output and exact-discretisation step (s), &gt; 0
  * @param turbulenceDurationS length of the turbulence record (s), &gt; 0
  * @param seed seed of the turbulence generator
+ * @param penetration wing-to-tail delay of gusts and turbulence, or null (the whole aircraft
+ *     meets the gust at once)
+ * @param limitCycles whether to predict (and check by simulation) rate-limit limit cycles when
+ *     the rate is limited and the loop closed
  */
 public record SimulationScenario(LoopClosure closure, InputSignal pilotInput, double gustPeakVelocityMps,
     List<Double> gradientLengthsM, Turbulence turbulence, ActuatorLimits limits, double durationS, double stepS,
-    double turbulenceDurationS, long seed) {
+    double turbulenceDurationS, long seed, GustPenetration penetration, boolean limitCycles) {
   /** Validates and copies. */
   public SimulationScenario {
     if (closure == null) {
