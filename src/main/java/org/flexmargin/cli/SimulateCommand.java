@@ -12,6 +12,8 @@ import org.flexmargin.model.ActuatorSpec;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.LoopSpec;
+import org.flexmargin.model.SensorSpec;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.report.ResultFiles;
@@ -25,6 +27,7 @@ import org.flexmargin.simulate.RandomResponse;
 import org.flexmargin.simulate.RateLimitCycle;
 import org.flexmargin.simulate.SimulationPoint;
 import org.flexmargin.simulate.SimulationResult;
+import org.flexmargin.simulate.SensorNoise;
 import org.flexmargin.simulate.SimulationScenario;
 import org.flexmargin.simulate.Turbulence;
 import org.flexmargin.simulate.TurbulenceSpectrum;
@@ -105,6 +108,15 @@ final class SimulateCommand implements Callable<Integer> {
   @Option(names = "--seed", paramLabel = "N", description = "Seed of the turbulence generator (default: ${DEFAULT-VALUE}).")
   long seed = 1;
 
+  @Option(names = "--sensor-noise", paramLabel = "SENSOR=RMS",
+      description = "Band-limited white noise on a sensor, RMS in its signal's unit (rad/s, g or rad); repeat for "
+          + "several sensors. Applies to the random-response run (with or without --turbulence).")
+  java.util.Map<String, Double> sensorNoise = new java.util.LinkedHashMap<>();
+
+  @Option(names = "--sensor-noise-hz", paramLabel = "F",
+      description = "Corner of the sensor noise's first-order band, Hz (default: ${DEFAULT-VALUE}).")
+  double sensorNoiseHz = 100;
+
   @Option(names = "--penetration-m", paramLabel = "D",
       description = "Gust penetration: the tailplane meets gusts and turbulence D m after the wing (delay D / V_TAS); "
           + "needs --downwash-gradient and --elevator-effectiveness (default: no penetration).")
@@ -167,7 +179,7 @@ final class SimulateCommand implements Callable<Integer> {
       throw new InvalidInputException("--speed-eas", "a speed > 0 m/s", String.valueOf(eas));
     }
     double alt = altitudeM != null ? altitudeM : (c.sweep() instanceof SpeedSweep s ? s.altitudeM() : 0.0);
-    SimulationScenario scenario = scenario(c.loop().actuator());
+    SimulationScenario scenario = scenario(c.loop());
     SimulationPoint point = SimulationPoint.of(ConfigurationModel.of(conf), conf, c.loop(),
         StandardAtmosphere.atEquivalentSpeed(alt, eas));
     SimulationResult r = AircraftSimulation.run(point, scenario);
@@ -184,7 +196,14 @@ final class SimulateCommand implements Callable<Integer> {
     return r.closedLoopMaxRealPartPerS() > 0 ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
   }
 
-  private SimulationScenario scenario(ActuatorSpec actuator) {
+  private SimulationScenario scenario(LoopSpec loop) {
+    ActuatorSpec actuator = loop.actuator();
+    List<String> sensorNames = loop.sensors().stream().map(SensorSpec::name).toList();
+    for (String name : sensorNoise.keySet()) {
+      if (!sensorNames.contains(name)) {
+        throw new InvalidInputException("--sensor-noise", "a sensor of the loop: one of " + sensorNames, name);
+      }
+    }
     double amp = Math.toRadians(amplitudeDeg);
     InputSignal pilot = switch (input.toLowerCase(Locale.ROOT)) {
       case "none" -> null;
@@ -214,8 +233,9 @@ final class SimulateCommand implements Callable<Integer> {
         positionLimitDeg != null ? Math.toRadians(positionLimitDeg)
             : noLimits ? Double.POSITIVE_INFINITY : actuator.positionLimitRad());
     List<Double> gradients = gradientM.isEmpty() ? AircraftSimulation.standardGradientLengthsM() : gradientM;
+    SensorNoise noise = sensorNoise.isEmpty() ? null : new SensorNoise(sensorNoise, sensorNoiseHz);
     return new SimulationScenario(openLoop ? LoopClosure.OPEN : LoopClosure.CLOSED, pilot, gustMps, gradients, t,
-        limits, durationS, stepS, turbulenceS, seed, penetration(), true);
+        noise, limits, durationS, stepS, turbulenceS, seed, penetration(), true);
   }
 
   private GustPenetration penetration() {
@@ -269,15 +289,18 @@ final class SimulateCommand implements Callable<Integer> {
       s.add(String.format(Locale.ROOT, "  worst gust: H = %.1f m (peak load %.4f g at %.3f s)",
           worst.gradientLengthM(), worst.peakLoadFactorG(), worst.timeOfPeakS()));
     }
-    if (r.scenario().turbulence() != null) {
+    if (r.scenario().hasRandomInputs()) {
       if (r.turbulence() == null) {
-        s.add("turbulence: no stationary response (the linear system is unstable)");
+        s.add("random response: no stationary response (the linear system is unstable)");
       } else {
         RandomResponse.Result t = r.turbulence();
         Turbulence tu = r.scenario().turbulence();
-        s.add(String.format(Locale.ROOT, "turbulence: %s, sigma %.2f m/s, L %.1f m, %.0f s record, seed %d",
+        s.add(tu == null ? String.format(Locale.ROOT, "sensor noise alone, %.0f s record, seed %d",
+            r.scenario().turbulenceDurationS(), r.scenario().seed())
+            : String.format(Locale.ROOT, "turbulence: %s, sigma %.2f m/s, L %.1f m, %.0f s record, seed %d%s",
             tu.spectrum().name().toLowerCase(Locale.ROOT), tu.sigmaMps(), tu.scaleLengthM(),
-            r.scenario().turbulenceDurationS(), r.scenario().seed()));
+            r.scenario().turbulenceDurationS(), r.scenario().seed(),
+            r.scenario().sensorNoise() == null ? "" : ", with sensor noise"));
         s.add(String.format(Locale.ROOT, "  %-40s %12s %12s %12s", "output", "exact RMS", "simulated", "95% +/-"));
         for (int o = 0; o < t.names().size(); o++) {
           String n = t.names().get(o);

@@ -26,7 +26,8 @@ final class RateSaturationTable {
         + "phase crossover closest to -1 (else the highest structural peak): the sinusoidal command amplitude "
         + "at the broken loop's input whose elevator rate |j w F(j w)| A reaches the limit (F: hold, delay and "
         + "actuator, exact), and the amplitude injected at the actuator command with the loop closed that does so "
-        + "(A |1 + L|, L = -|L| at the crossover; only where the closed loop is stable). Smaller values mean the structural loop saturates the actuator "
+        + "(A |1 + L|, L = -|L| at the crossover; only where the closed loop is stable). Smaller values mean the "
+        + "structural loop saturates the actuator "
         + "sooner; beyond them the linear margins no longer describe the loop (see the time-domain simulation).",
         Math.toDegrees(loop.actuator().rateLimitRadPerS())));
     w.open("table", "class", "per-speed compact");
@@ -46,13 +47,14 @@ final class RateSaturationTable {
         w.element("td", "no structural frequency known", "colspan", "6");
       } else {
         RateSaturation.Line l = line.get();
-        w.element("td", OpenLoopSections.fmt(l.frequencyHz(), 2), "class", "num", "data-json", base + "frequency_hz");
+        w.element("td", OpenLoopSections.fmt(l.frequencyHz(), 2), "class", "num", "data-json", base + "frequency_hz",
+            "data-value", Double.toString(l.frequencyHz()));
         w.element("td", OpenLoopSections.fmt(l.loopMagnitude(), 3), "class", "num");
         w.element("td", OpenLoopSections.fmt(20 * Math.log10(l.elevatorPerCommand()), 1), "class", "num");
-        w.element("td", OpenLoopSections.fmt(Math.toDegrees(l.commandAmplitudeRad()), 3), "class", "num",
-            "data-json", base + "command_amplitude_rad");
+        // shown in degrees; results.json has radians (command_amplitude_rad, closed_loop_injection_amplitude_rad)
+        w.element("td", OpenLoopSections.fmt(Math.toDegrees(l.commandAmplitudeRad()), 3), "class", "num");
         w.element("td", OpenLoopSections.fmt(Math.toDegrees(l.closedLoopInjectionAmplitudeRad()), 3), "class",
-            "num", "data-json", base + "closed_loop_injection_amplitude_rad");
+            "num");
         w.element("td", l.basis());
       }
       w.close("tr");

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
 import org.flexmargin.loop.SisoFrequencyFunction;
+import org.flexmargin.loop.StateSpace;
 
 /**
  * Runs a {@link SimulationScenario} at a {@link SimulationPoint}: the pilot input and each
@@ -83,12 +84,22 @@ public final class AircraftSimulation {
       }
     }
     RandomResponse.Result turbulence = null;
-    if (scenario.turbulence() != null && maxRe < 0) {
+    if (scenario.hasRandomInputs() && maxRe < 0) {
       int n = (int) Math.round(scenario.turbulenceDurationS() / scenario.stepS());
-      turbulence = RandomResponse.run(model.withTurbulence(scenario.turbulence()), 1, scenario.stepS(), n,
-          scenario.seed());
+      StateSpace random = model.withRandomInputs(scenario.turbulence(), scenario.sensorNoise());
+      int[] sources = new int[random.inputCount() - 1];
+      for (int i = 0; i < sources.length; i++) {
+        sources[i] = i + 1;
+      }
+      turbulence = RandomResponse.run(random, sources, scenario.stepS(), n, scenario.seed());
       if (limited) {
-        notes.add("turbulence RMS is that of the linear system (actuator limits not applied in turbulence)");
+        notes.add("random-response RMS is that of the linear system (actuator limits not applied there)");
+      }
+      if (scenario.sensorNoise() != null) {
+        SensorNoise sn = scenario.sensorNoise();
+        notes.add(String.format(Locale.ROOT, "sensor noise in the random-response run: %s, white to %.1f Hz "
+            + "(first order), independent; the sensor outputs are the measured signals", sn.rmsBySensor(),
+            sn.bandwidthHz()));
       }
     }
     List<RateLimitCycle.Prediction> cycles = new ArrayList<>();

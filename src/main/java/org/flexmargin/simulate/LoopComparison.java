@@ -68,7 +68,7 @@ public record LoopComparison(String configurationName, FlightCondition condition
     ActuatorLimits limits = new ActuatorLimits(c.loop().actuator().rateLimitRadPerS(),
         c.loop().actuator().positionLimitRad());
     SimulationScenario scenario = new SimulationScenario(LoopClosure.CLOSED,
-        new InputSignal.Doublet(DOUBLET_RAD, 0.1, PULSE_S), GUST_MPS, GRADIENTS_M, null, limits, DURATION_S, STEP_S,
+        new InputSignal.Doublet(DOUBLET_RAD, 0.1, PULSE_S), GUST_MPS, GRADIENTS_M, null, null, limits, DURATION_S, STEP_S,
         1.0, 1, null, false);
     List<Variant> variants = new ArrayList<>();
     variants.add(new Variant("case loop", AircraftSimulation.run(SimulationPoint.of(model, conf, c.loop(), fc),

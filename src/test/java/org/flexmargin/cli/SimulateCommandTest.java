@@ -59,4 +59,14 @@ class SimulateCommandTest {
     assertTrue(r[2].contains("--elevator-effectiveness"), r[2]);
     assertFalse(Files.exists(out));
   }
+
+  @Test
+  void noiseOnAnUnknownSensorGivesExitTwo(@TempDir Path tmp) {
+    Path out = tmp.resolve("sim");
+    String[] r = run("simulate", "mode-tables/demo/demo-case.json", "--sensor-noise", "gyro2=0.001", "--out",
+        out.toString());
+    assertEquals("2", r[0], r[1] + r[2]);
+    assertTrue(r[2].contains("--sensor-noise") && r[2].contains("gyro2") && r[2].contains("pitch_rate"), r[2]);
+    assertFalse(Files.exists(out));
+  }
 }
