@@ -124,10 +124,10 @@ public record FlightControlLaw(List<LinearBlock> paths, int[] pathSensorIndex, L
           new double[] {1 / (wd * wd), 2 * so.denominatorDampingRatio() / wd, 1});
     }
     if (f instanceof FilterSpec.TransferFunction tf) {
-      return new TransferFunctionBlock(tf.numerator(), tf.denominator());
+      return new TransferFunctionBlock(tf.coefficients().numerator(), tf.coefficients().denominator());
     }
     FilterSpec.Discrete d = (FilterSpec.Discrete) f;
-    return new DiscreteFilter(d.numerator(), d.denominator(), samplePeriodS);
+    return new DiscreteFilter(d.coefficients().numerator(), d.coefficients().denominator(), samplePeriodS);
   }
 
   private static LinearBlock actuator(LoopSpec loop) {

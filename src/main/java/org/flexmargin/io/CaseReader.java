@@ -20,6 +20,7 @@ import org.flexmargin.model.Altitudes;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.ClearanceRequirements;
+import org.flexmargin.model.Coefficients;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FeedbackPath;
@@ -529,8 +530,8 @@ public final class CaseReader {
         String order = kind.equals("discrete") ? "b0, b1, ... (powers of z^-1)" : "highest power of s first";
         double[] num = d.required("numerator", "coefficients, " + order).numbers("a list of numbers");
         double[] den = d.required("denominator", "coefficients, " + order).numbers("a list of numbers");
-        return d.build(() -> kind.equals("discrete") ? new FilterSpec.Discrete(num, den)
-            : new FilterSpec.TransferFunction(num, den));
+        return d.build(() -> kind.equals("discrete") ? new FilterSpec.Discrete(new Coefficients(num, den))
+            : new FilterSpec.TransferFunction(new Coefficients(num, den)));
       }
     }
   }

@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Pattern;
 import org.flexmargin.model.ClearanceRequirements;
+import org.flexmargin.model.Coefficients;
 import org.flexmargin.model.InputFile;
 import org.flexmargin.model.LoopFile;
 import org.flexmargin.model.MeasuredTable;
@@ -141,7 +142,7 @@ public final class LoopFileReader {
     d.allowOnly(List.of("numerator", "denominator"));
     double[] num = d.required("numerator", "coefficients, highest power of s first").numbers("a list of numbers");
     double[] den = d.required("denominator", "coefficients, highest power of s first").numbers("a list of numbers");
-    return d.build(() -> new OpenLoopData.TransferFunction(num, den));
+    return d.build(() -> new OpenLoopData.TransferFunction(new Coefficients(num, den)));
   }
 
   private static OpenLoopData zerosPolesGain(JsonField d) {

@@ -1,6 +1,7 @@
 package org.flexmargin.loop;
 
 import java.util.Arrays;
+import org.flexmargin.model.MeasuredTable;
 
 /**
  * A measured open-loop frequency response (for example from a structural-coupling ground test):
@@ -17,55 +18,37 @@ import java.util.Arrays;
  * points is taken as a wrap of 360 deg (a table must therefore be dense enough that the true
  * phase moves by less than 180 deg between points); the first value is kept as given.
  *
- * @param frequencyHz strictly ascending frequencies, Hz (&gt; 0, at least 2)
- * @param gainDb 20 log10 |L|, dB (finite)
- * @param phaseDeg arg L, deg (finite; unwrapped on construction)
+ * <p>Immutable; validation of the table is {@link MeasuredTable}'s.
  */
-public record MeasuredResponse(double[] frequencyHz, double[] gainDb, double[] phaseDeg)
-    implements SisoFrequencyFunction {
+public final class MeasuredResponse implements SisoFrequencyFunction {
+  private final double[] frequencyHz;
+  private final double[] gainDb;
+  private final double[] phaseDeg;
 
-  /** Validates, copies and unwraps the phase. */
-  public MeasuredResponse {
-    StateSpace.require(frequencyHz != null && gainDb != null && phaseDeg != null
-        && frequencyHz.length == gainDb.length && frequencyHz.length == phaseDeg.length,
-        "measured_response", "frequency, gain and phase columns of equal length",
-        frequencyHz == null || gainDb == null || phaseDeg == null ? "a missing column"
-            : frequencyHz.length + ", " + gainDb.length + " and " + phaseDeg.length + " values");
-    StateSpace.require(frequencyHz.length >= 2, "measured_response.frequency_hz",
-        "at least two frequencies", frequencyHz.length + "");
-    for (int i = 0; i < frequencyHz.length; i++) {
-      StateSpace.require(Double.isFinite(frequencyHz[i]) && frequencyHz[i] > 0,
-          "measured_response.frequency_hz[" + i + "]", "a finite frequency > 0", String.valueOf(frequencyHz[i]));
-      StateSpace.require(i == 0 || frequencyHz[i] > frequencyHz[i - 1],
-          "measured_response.frequency_hz[" + i + "]", "frequencies in strictly ascending order",
-          frequencyHz[i] + " after " + (i == 0 ? "" : frequencyHz[i - 1]));
-      StateSpace.require(Double.isFinite(gainDb[i]), "measured_response.gain_db[" + i + "]",
-          "a finite gain in dB", String.valueOf(gainDb[i]));
-      StateSpace.require(Double.isFinite(phaseDeg[i]), "measured_response.phase_deg[" + i + "]",
-          "a finite phase in deg", String.valueOf(phaseDeg[i]));
+  /** @param table the measured table (phase unwrapped here) */
+  public MeasuredResponse(MeasuredTable table) {
+    StateSpace.require(table != null, "measured_response", "a measured table", "nothing");
+    frequencyHz = table.frequencyHz();
+    gainDb = table.gainDb();
+    double[] given = table.phaseDeg();
+    phaseDeg = given.clone();
+    for (int i = 1; i < phaseDeg.length; i++) {
+      double step = given[i] - given[i - 1];
+      phaseDeg[i] = phaseDeg[i - 1] + step - 360 * Math.rint(step / 360);
     }
-    frequencyHz = frequencyHz.clone();
-    gainDb = gainDb.clone();
-    double[] unwrapped = phaseDeg.clone();
-    for (int i = 1; i < unwrapped.length; i++) {
-      double step = phaseDeg[i] - phaseDeg[i - 1];
-      unwrapped[i] = unwrapped[i - 1] + step - 360 * Math.rint(step / 360);
-    }
-    phaseDeg = unwrapped;
   }
 
-  @Override
+  /** @return the frequencies, Hz */
   public double[] frequencyHz() {
     return frequencyHz.clone();
   }
 
-  @Override
+  /** @return the gains, dB */
   public double[] gainDb() {
     return gainDb.clone();
   }
 
   /** @return the unwrapped phase, deg */
-  @Override
   public double[] phaseDeg() {
     return phaseDeg.clone();
   }
@@ -133,18 +116,7 @@ public record MeasuredResponse(double[] frequencyHz, double[] gainDb, double[] p
       db[i] = 20 * Math.log10(Math.hypot(v[0], v[1]));
       ph[i] = Math.toDegrees(Math.atan2(v[1], v[0]));
     }
-    return new MeasuredResponse(frequencyHz, db, ph);
-  }
-
-  @Override
-  public boolean equals(Object o) {
-    return o instanceof MeasuredResponse m && Arrays.equals(frequencyHz, m.frequencyHz)
-        && Arrays.equals(gainDb, m.gainDb) && Arrays.equals(phaseDeg, m.phaseDeg);
-  }
-
-  @Override
-  public int hashCode() {
-    return 31 * (31 * Arrays.hashCode(frequencyHz) + Arrays.hashCode(gainDb)) + Arrays.hashCode(phaseDeg);
+    return new MeasuredResponse(new MeasuredTable("sampled", frequencyHz, db, ph));
   }
 
   @Override

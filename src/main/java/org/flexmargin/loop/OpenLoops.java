@@ -22,7 +22,7 @@ public final class OpenLoops {
    */
   public static LinearBlock model(OpenLoopData data) {
     if (data instanceof OpenLoopData.TransferFunction t) {
-      return new TransferFunctionBlock(t.numerator(), t.denominator());
+      return new TransferFunctionBlock(t.coefficients().numerator(), t.coefficients().denominator());
     }
     if (data instanceof OpenLoopData.ZerosPolesGain z) {
       double[] num = Polynomials.fromRoots(z.zerosReal(), z.zerosImag(), "zeros");
@@ -47,7 +47,7 @@ public final class OpenLoops {
    * @return its frequency function (phase unwrapped, log-frequency interpolation)
    */
   public static MeasuredResponse measured(MeasuredTable table) {
-    return new MeasuredResponse(table.frequencyHz(), table.gainDb(), table.phaseDeg());
+    return new MeasuredResponse(table);
   }
 
   /**

@@ -1,7 +1,5 @@
 package org.flexmargin.model;
 
-import java.util.Arrays;
-
 /**
  * A filter in a feedback path: second-order notch, second-order low-pass, lead-lag, washout,
  * general second-order section, arbitrary transfer function, or a digital filter given by its
@@ -64,47 +62,15 @@ public sealed interface FilterSpec permits NotchFilterSpec, LowPassFilterSpec, F
    * Arbitrary proper transfer function N(s)/D(s), coefficients in descending powers of s
    * ({@code [1, 3, 3]} is s^2 + 3 s + 3).
    *
-   * @param numerator numerator coefficients (finite; no more than the denominator's)
-   * @param denominator denominator coefficients (finite; leading one non-zero)
+   * @param coefficients numerator and denominator (proper)
    */
-  record TransferFunction(double[] numerator, double[] denominator) implements FilterSpec {
-    /** Validates and copies. */
+  record TransferFunction(Coefficients coefficients) implements FilterSpec {
+    /** Validates. */
     public TransferFunction {
-      numerator = coefficients("numerator", numerator);
-      denominator = coefficients("denominator", denominator);
-      if (denominator[0] == 0) {
-        throw new InvalidInputException("denominator[0]", "a non-zero leading coefficient", "0");
+      if (coefficients == null) {
+        throw new InvalidInputException("transfer_function", "numerator and denominator", "nothing");
       }
-      if (numerator.length > denominator.length) {
-        throw new InvalidInputException("numerator", "a proper transfer function: at most " + denominator.length
-            + " coefficients", numerator.length + " coefficients");
-      }
-    }
-
-    @Override
-    public double[] numerator() {
-      return numerator.clone();
-    }
-
-    @Override
-    public double[] denominator() {
-      return denominator.clone();
-    }
-
-    @Override
-    public boolean equals(Object o) {
-      return o instanceof TransferFunction t && Arrays.equals(numerator, t.numerator)
-          && Arrays.equals(denominator, t.denominator);
-    }
-
-    @Override
-    public int hashCode() {
-      return 31 * Arrays.hashCode(numerator) + Arrays.hashCode(denominator);
-    }
-
-    @Override
-    public String toString() {
-      return "TransferFunction[" + Arrays.toString(numerator) + " / " + Arrays.toString(denominator) + "]";
+      coefficients.proper();
     }
   }
 
@@ -112,53 +78,14 @@ public sealed interface FilterSpec permits NotchFilterSpec, LowPassFilterSpec, F
    * Digital filter (b0 + b1 z^-1 + ...)/(a0 + a1 z^-1 + ...) running at the loop's sample period
    * (the loop's {@code sample_period_s} must be &gt; 0); evaluated exactly at z = e^{j w T}.
    *
-   * @param numerator b0, b1, ... (finite, at least one)
-   * @param denominator a0, a1, ... (finite, a0 != 0)
+   * @param coefficients b0, b1, ... over a0, a1, ... (a0 != 0)
    */
-  record Discrete(double[] numerator, double[] denominator) implements FilterSpec {
-    /** Validates and copies. */
+  record Discrete(Coefficients coefficients) implements FilterSpec {
+    /** Validates. */
     public Discrete {
-      numerator = coefficients("numerator", numerator);
-      denominator = coefficients("denominator", denominator);
-      if (denominator[0] == 0) {
-        throw new InvalidInputException("denominator[0]", "a non-zero a0", "0");
+      if (coefficients == null) {
+        throw new InvalidInputException("discrete", "numerator and denominator", "nothing");
       }
     }
-
-    @Override
-    public double[] numerator() {
-      return numerator.clone();
-    }
-
-    @Override
-    public double[] denominator() {
-      return denominator.clone();
-    }
-
-    @Override
-    public boolean equals(Object o) {
-      return o instanceof Discrete t && Arrays.equals(numerator, t.numerator)
-          && Arrays.equals(denominator, t.denominator);
-    }
-
-    @Override
-    public int hashCode() {
-      return 31 * Arrays.hashCode(numerator) + Arrays.hashCode(denominator);
-    }
-
-    @Override
-    public String toString() {
-      return "Discrete[" + Arrays.toString(numerator) + " / " + Arrays.toString(denominator) + "]";
-    }
-  }
-
-  private static double[] coefficients(String path, double[] v) {
-    if (v == null || v.length == 0) {
-      throw new InvalidInputException(path, "at least one coefficient", v == null ? "nothing" : "an empty list");
-    }
-    for (int i = 0; i < v.length; i++) {
-      Checks.finite(path + "[" + i + "]", v[i]);
-    }
-    return v.clone();
   }
 }

@@ -14,53 +14,20 @@ public sealed interface OpenLoopData {
   /**
    * L(s) = N(s)/D(s), descending powers of s ({@code [1, 3, 3]} is s^2 + 3 s + 3).
    *
-   * @param numerator numerator coefficients (finite; degree &lt;= the denominator's)
-   * @param denominator denominator coefficients (finite, leading one non-zero)
+   * @param coefficients numerator and denominator (proper)
    */
-  record TransferFunction(double[] numerator, double[] denominator) implements OpenLoopData {
-    /** Validates and copies. */
+  record TransferFunction(Coefficients coefficients) implements OpenLoopData {
+    /** Validates. */
     public TransferFunction {
-      numerator = coefficients("numerator", numerator);
-      denominator = coefficients("denominator", denominator);
-      if (denominator[0] == 0) {
-        throw new InvalidInputException("denominator[0]", "a non-zero leading coefficient", "0");
+      if (coefficients == null) {
+        throw new InvalidInputException("transfer_function", "numerator and denominator", "nothing");
       }
-      if (numerator.length > denominator.length) {
-        throw new InvalidInputException("numerator", "a proper transfer function: at most "
-            + denominator.length + " coefficients (the denominator's degree " + (denominator.length - 1) + ")",
-            numerator.length + " coefficients");
-      }
-    }
-
-    @Override
-    public double[] numerator() {
-      return numerator.clone();
-    }
-
-    @Override
-    public double[] denominator() {
-      return denominator.clone();
+      coefficients.proper();
     }
 
     @Override
     public String key() {
       return "transfer_function";
-    }
-
-    @Override
-    public boolean equals(Object o) {
-      return o instanceof TransferFunction t && Arrays.equals(numerator, t.numerator)
-          && Arrays.equals(denominator, t.denominator);
-    }
-
-    @Override
-    public int hashCode() {
-      return 31 * Arrays.hashCode(numerator) + Arrays.hashCode(denominator);
-    }
-
-    @Override
-    public String toString() {
-      return "TransferFunction[" + Arrays.toString(numerator) + " / " + Arrays.toString(denominator) + "]";
     }
   }
 
@@ -247,14 +214,6 @@ public sealed interface OpenLoopData {
       n += imag[i] == 0 ? 1 : 2;
     }
     return n;
-  }
-
-  private static double[] coefficients(String path, double[] v) {
-    double[] c = finite(path, v);
-    if (c.length == 0) {
-      throw new InvalidInputException(path, "at least one coefficient", "an empty list");
-    }
-    return c;
   }
 
   private static double[] finite(String path, double[] v) {

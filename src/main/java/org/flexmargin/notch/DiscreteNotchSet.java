@@ -6,6 +6,7 @@ import org.flexmargin.loop.DiscreteFilter;
 import org.flexmargin.loop.NotchFilter;
 import org.flexmargin.loop.NotchFilters;
 import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.Coefficients;
 import org.flexmargin.model.FeedbackPath;
 import org.flexmargin.model.FilterSpec;
 import org.flexmargin.model.LoopSpec;
@@ -94,8 +95,8 @@ public record DiscreteNotchSet(double samplePeriodS, List<Section> sections, Loo
       List<FilterSpec> filters = new ArrayList<>();
       for (FilterSpec f : p.filters()) {
         int k = f instanceof NotchFilterSpec n ? designed.indexOf(n) : -1;
-        filters.add(k < 0 ? f : new FilterSpec.Discrete(sections.get(k).filter().numerator(),
-            sections.get(k).filter().denominator()));
+        filters.add(k < 0 ? f : new FilterSpec.Discrete(new Coefficients(sections.get(k).filter().numerator(),
+            sections.get(k).filter().denominator())));
       }
       paths.add(new FeedbackPath(p.sensor(), p.proportionalGain(), p.integralGainPerS(), filters, p.schedule()));
     }

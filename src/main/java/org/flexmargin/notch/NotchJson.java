@@ -327,9 +327,9 @@ public final class NotchJson {
           .num("denominator_frequency_hz", so.denominatorFrequencyHz())
           .num("denominator_damping_ratio", so.denominatorDampingRatio());
     } else if (f instanceof FilterSpec.TransferFunction tf) {
-      coefficients(o.open("transfer_function", '{'), tf.numerator(), tf.denominator());
+      coefficients(o.open("transfer_function", '{'), tf.coefficients().numerator(), tf.coefficients().denominator());
     } else if (f instanceof FilterSpec.Discrete d) {
-      coefficients(o.open("discrete", '{'), d.numerator(), d.denominator());
+      coefficients(o.open("discrete", '{'), d.coefficients().numerator(), d.coefficients().denominator());
     }
     o.close('}').close('}');
   }

@@ -7,6 +7,7 @@ import java.util.List;
 import org.flexmargin.loop.LinearBlock;
 import org.flexmargin.model.ActuatorOrder;
 import org.flexmargin.model.ActuatorSpec;
+import org.flexmargin.model.Coefficients;
 import org.flexmargin.model.FeedbackPath;
 import org.flexmargin.model.FilterSpec;
 import org.flexmargin.model.InvalidInputException;
@@ -66,7 +67,7 @@ class FilterBlocksTest {
    */
   @Test
   void discreteFilterUsesTheLoopSamplePeriod() {
-    FilterSpec avg = new FilterSpec.Discrete(new double[] {0.5, 0.5}, new double[] {1});
+    FilterSpec avg = new FilterSpec.Discrete(new Coefficients(new double[] {0.5, 0.5}, new double[] {1}));
     double t = 0.01;
     double[] g = at(FlightControlLaw.filter(avg, t), 10);
     double x = 2 * Math.PI * 10 * t / 2;

@@ -39,7 +39,7 @@ class GeneralFiltersReadTest {
     assertEquals(new FilterSpec.LeadLag(2, 8), f.get(0));
     assertEquals(new FilterSpec.Washout(1.5), f.get(1));
     assertEquals(new FilterSpec.SecondOrder(20, 0.1, 21, 0.6), f.get(2));
-    assertArrayEquals(new double[] {0.01, 1}, ((FilterSpec.TransferFunction) f.get(3)).denominator());
+    assertArrayEquals(new double[] {0.01, 1}, ((FilterSpec.TransferFunction) f.get(3)).coefficients().denominator());
     assertInstanceOf(FilterSpec.Discrete.class, f.get(4));
   }
 

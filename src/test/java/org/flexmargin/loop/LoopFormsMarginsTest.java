@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.flexmargin.model.Coefficients;
 import org.flexmargin.model.LoopFile;
 import org.flexmargin.model.MeasuredTable;
 import org.flexmargin.model.OpenLoopData;
@@ -35,7 +36,7 @@ class LoopFormsMarginsTest {
   void typeOneThirdOrderLoopInEveryForm() {
     double k = 2;
     List<OpenLoopData> forms = List.of(
-        new OpenLoopData.TransferFunction(new double[] {k}, new double[] {1, 3, 2, 0}),
+        new OpenLoopData.TransferFunction(new Coefficients(new double[] {k}, new double[] {1, 3, 2, 0})),
         new OpenLoopData.ZerosPolesGain(new double[0], new double[0], new double[] {0, -1, -2},
             new double[] {0, 0, 0}, k),
         new OpenLoopData.StateSpaceModel(new double[][] {{0, 1, 0}, {0, 0, 1}, {0, -2, -3}},
@@ -90,14 +91,14 @@ class LoopFormsMarginsTest {
   void integratorWithDelay() {
     double k = 2;
     double tau = 0.2;
-    LoopMarginResult r = margins(file(new OpenLoopData.TransferFunction(new double[] {k}, new double[] {1, 0}), tau,
+    LoopMarginResult r = margins(file(new OpenLoopData.TransferFunction(new Coefficients(new double[] {k}, new double[] {1, 0})), tau,
         0.01, 10));
     GainCrossover gc = r.governingPhaseMargin().orElseThrow();
     assertEquals(k, gc.omegaRadPerS(), 1e-9);
     assertEquals(90 - Math.toDegrees(k * tau), gc.phaseMarginDeg(), 1e-9);
     assertEquals(Math.PI / (2 * k) - tau, r.delayMarginS().orElseThrow(), 1e-9);
     // and without the delay: 90 deg
-    LoopMarginResult r0 = margins(file(new OpenLoopData.TransferFunction(new double[] {k}, new double[] {1, 0}), 0,
+    LoopMarginResult r0 = margins(file(new OpenLoopData.TransferFunction(new Coefficients(new double[] {k}, new double[] {1, 0})), 0,
         0.01, 10));
     assertEquals(90, r0.governingPhaseMargin().orElseThrow().phaseMarginDeg(), 1e-9);
   }
@@ -124,8 +125,7 @@ class LoopFormsMarginsTest {
     LoopFile lf = file(new OpenLoopData.Measured(table), 0, 0.001, 10);
     LoopMarginResult fromTable = MARGINS.analyse(OpenLoops.measuredLoop(lf, PadeOrder.ofDegree(2)),
         2 * Math.PI * 0.001, 2 * Math.PI * 10, Eigenvalues.none());
-    LoopMarginResult exact = margins(file(new OpenLoopData.TransferFunction(new double[] {k},
-        new double[] {1, 3, 2, 0}), 0, 0.001, 10));
+    LoopMarginResult exact = margins(file(new OpenLoopData.TransferFunction(new Coefficients(new double[] {k}, new double[] {1, 3, 2, 0})), 0, 0.001, 10));
     PhaseCrossover a = fromTable.governingGainIncreaseMargin().orElseThrow();
     PhaseCrossover b = exact.governingGainIncreaseMargin().orElseThrow();
     assertEquals(b.gainMarginDb(), a.gainMarginDb(), 1e-3);
@@ -140,8 +140,8 @@ class LoopFormsMarginsTest {
   /** Wrapped phases in a table are unwrapped; outside the table the response is not known. */
   @Test
   void tablePhaseIsUnwrappedAndNotExtrapolated() {
-    MeasuredResponse m = new MeasuredResponse(new double[] {1, 2, 3}, new double[] {0, -1, -2},
-        new double[] {-170, 175, 160});
+    MeasuredResponse m = new MeasuredResponse(new MeasuredTable("t", new double[] {1, 2, 3},
+        new double[] {0, -1, -2}, new double[] {-170, 175, 160}));
     assertEquals(-185, m.phaseDeg()[1], 1e-12);
     assertEquals(-200, m.phaseDeg()[2], 1e-12);
     double[] v = new double[2];
