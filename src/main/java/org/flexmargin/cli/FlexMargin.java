@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
     subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
         MarginsCommand.class,
         SimulateCommand.class,
+        EnvelopeCommand.class,
         CommandLine.HelpCommand.class},
     footer = {
       "",
