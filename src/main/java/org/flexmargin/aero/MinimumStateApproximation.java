@@ -3,7 +3,9 @@ package org.flexmargin.aero;
 import java.util.List;
 import java.util.Locale;
 import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
 import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.flexmargin.model.InvalidInputException;
 
@@ -26,7 +28,8 @@ import org.flexmargin.model.InvalidInputException;
  * (A<sub>1</sub>, A<sub>2</sub>, E) and splits by column; with E fixed it is linear in
  * (A<sub>1</sub>, A<sub>2</sub>, D) and splits by row. Each equation of element (i, j) is weighted
  * by 1 / max<sub>k</sub> |Q<sub>ij</sub>| (at least 1e-3 of the largest element), so that small
- * elements are fitted to the same relative accuracy as large ones. D starts with one unit entry per lag root (row l mod n). Each half-step cannot increase the weighted residual; iterations stop when it falls by less
+ * elements are fitted to the same relative accuracy as large ones. D starts from the dominant singular
+ * pairs of a Roger fit with the same lag roots (one unit entry per lag root where that fit is ill-posed). Each half-step cannot increase the weighted residual; iterations stop when it falls by less
  * than 1e-12 relative, or after {@value #MAX_ITERATIONS}.
  */
 public final class MinimumStateApproximation {
@@ -93,7 +96,7 @@ public final class MinimumStateApproximation {
     double[][] a0 = RogerApproximation.steadyForces(source);
     double[][] data = RogerApproximation.sampled(source, ks);
     Problem pr = new Problem(n, ks, lags, a0, data);
-    double[][] d = pr.initialD();
+    double[][] d = pr.initialD(source, errorThreshold, lags);
     double[][] e = new double[nl][n];
     double[][] a1 = new double[n][n];
     double[][] a2 = new double[n][n];
@@ -182,11 +185,36 @@ public final class MinimumStateApproximation {
       }
     }
 
-    /** The usual start (Tiffany &amp; Adams): D[i, l] = 1 where i = l mod n, else 0. */
-    double[][] initialD() {
+    /**
+     * Start: D[:, l] = sigma u of the dominant singular pair of lag matrix l of a Roger fit with the
+     * same lag roots; where that fit is ill-posed (many close lag roots), the usual unit pattern
+     * D[i, l] = 1 for i = l mod n (Tiffany &amp; Adams).
+     */
+    double[][] initialD(AeroSource source, double errorThreshold, double[] lags) {
       double[][] d = new double[n][nl];
+      RationalFit roger;
+      try {
+        roger = RogerApproximation.fit(source, ks, lags, errorThreshold);
+      } catch (InvalidInputException e) {
+        for (int l = 0; l < nl; l++) {
+          d[l % n][l] = 1;
+        }
+        return d;
+      }
+      SingularValueDecomposition_F64<DMatrixRMaj> svd = DecompositionFactory_DDRM.svd(n, n, true, false, false);
       for (int l = 0; l < nl; l++) {
-        d[l % n][l] = 1;
+        if (!svd.decompose(new DMatrixRMaj(roger.matrix(l + 3)))) {
+          throw new ArithmeticException("singular value decomposition failed");
+        }
+        DMatrixRMaj u = svd.getU(null, false);
+        double[] sv = svd.getSingularValues();
+        int best = 0;
+        for (int s = 1; s < svd.numberOfSingularValues(); s++) {
+          best = sv[s] > sv[best] ? s : best;
+        }
+        for (int i = 0; i < n; i++) {
+          d[i][l] = sv[best] > 0 ? sv[best] * u.get(i, best) : (i == l % n ? 1 : 0);
+        }
       }
       return d;
     }
