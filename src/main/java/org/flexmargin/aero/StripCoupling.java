@@ -116,29 +116,19 @@ public final class StripCoupling {
     List<Strip> list = strips.strips();
     for (int s = 0; s < list.size(); s++) {
       Strip strip = list.get(s);
-      StripPlacement p = placement(strip, s);
+      Geometry g = Geometry.of(strip, s);
       ShapeValue shape = mode.shapes().get(strip.station());
       if (shape == null) {
         throw new InvalidInputException("aero.strips[" + s + "].station",
             "a shape value at station \"" + strip.station() + "\" in mode \"" + mode.name() + "\"", "none");
       }
-      double b = strip.semichordM();
-      double a = strip.elasticAxisA();
-      double area = 2 * b * strip.widthM();
-      double slopeArea = strip.liftSlopePerRad() * area;
       double theta = shape.rotationRad();
-      double d = shape.displacementM() + b * (a + 0.5) * theta;
-      double xQuarter = p.elasticAxisAftOfCgM() - b * (a + 0.5);
-      double xThreeQuarter = p.elasticAxisAftOfCgM() + b * (0.5 - a);
-      lift += slopeArea * theta;
-      moment -= slopeArea * theta * xQuarter;
-      perAlpha += slopeArea * (1 - p.downwashGradient()) * d;
-      perRate += slopeArea * 2 * xThreeQuarter / referenceChordM * d;
-      if (p.hasElevator()) {
-        double scale = strip.liftSlopePerRad() / (2 * Math.PI);
-        double e = p.elevatorChordFraction();
-        perElevator += scale * area * (flapLiftPerRad(e) * d + 2 * b * flapQuarterChordMomentPerRad(e) * theta);
-      }
+      double d = shape.displacementM() + g.b * (strip.elasticAxisA() + 0.5) * theta;
+      lift += g.slopeArea * theta;
+      moment -= g.slopeArea * theta * g.xQuarter;
+      perAlpha += g.slopeArea * (1 - g.downwash) * d;
+      perRate += g.slopeArea * 2 * g.xThreeQuarter / referenceChordM * d;
+      perElevator += g.flapLift * d + g.flapMoment * theta;
     }
     return new ModeCoupling(lift / referenceAreaM2, moment / (referenceAreaM2 * referenceChordM), perAlpha,
         perElevator, perRate, CouplingOrigin.STRIPS);
@@ -162,25 +152,13 @@ public final class StripCoupling {
     double cmd = 0;
     List<Strip> list = strips.strips();
     for (int s = 0; s < list.size(); s++) {
-      Strip strip = list.get(s);
-      StripPlacement p = placement(strip, s);
-      double b = strip.semichordM();
-      double a = strip.elasticAxisA();
-      double area = 2 * b * strip.widthM();
-      double slopeArea = strip.liftSlopePerRad() * area;
-      double xQuarter = p.elasticAxisAftOfCgM() - b * (a + 0.5);
-      double xThreeQuarter = p.elasticAxisAftOfCgM() + b * (0.5 - a);
-      double alphaLift = slopeArea * (1 - p.downwashGradient());
+      Geometry g = Geometry.of(list.get(s), s);
+      double alphaLift = g.slopeArea * (1 - g.downwash);
       cla += alphaLift;
-      cma -= alphaLift * xQuarter;
-      cmq -= slopeArea * 2 * xThreeQuarter / referenceChordM * xQuarter;
-      if (p.hasElevator()) {
-        double scale = strip.liftSlopePerRad() / (2 * Math.PI);
-        double e = p.elevatorChordFraction();
-        double l = scale * area * flapLiftPerRad(e);
-        cld += l;
-        cmd += -l * xQuarter + scale * area * 2 * b * flapQuarterChordMomentPerRad(e);
-      }
+      cma -= alphaLift * g.xQuarter;
+      cmq -= g.slopeArea * 2 * g.xThreeQuarter / referenceChordM * g.xQuarter;
+      cld += g.flapLift;
+      cmd += -g.flapLift * g.xQuarter + g.flapMoment;
     }
     double s = referenceAreaM2;
     double sc = referenceAreaM2 * referenceChordM;
@@ -210,11 +188,28 @@ public final class StripCoupling {
     return rigid.withCoupling(all);
   }
 
-  private static StripPlacement placement(Strip strip, int index) {
-    if (strip.placement() == null) {
-      throw new InvalidInputException("aero.strips[" + index + "].elastic_axis_aft_of_cg_m",
-          "the strip's position behind the centre of mass (m)", "none");
+  /**
+   * One placed strip's sums: semichord b (m), lift slope times area (m^2), quarter- and
+   * three-quarter-chord positions behind the centre of mass (m), downwash gradient, and the
+   * elevator's lift (m^2, per rad, at the quarter chord) and quarter-chord moment (m^3 per rad).
+   */
+  private record Geometry(double b, double slopeArea, double xQuarter, double xThreeQuarter, double downwash,
+      double flapLift, double flapMoment) {
+    static Geometry of(Strip strip, int index) {
+      StripPlacement p = strip.placement();
+      if (p == null) {
+        throw new InvalidInputException("aero.strips[" + index + "].elastic_axis_aft_of_cg_m",
+            "the strip's position behind the centre of mass (m)", "none");
+      }
+      double b = strip.semichordM();
+      double a = strip.elasticAxisA();
+      double area = 2 * b * strip.widthM();
+      double scale = strip.liftSlopePerRad() / (2 * Math.PI);
+      double e = p.elevatorChordFraction();
+      return new Geometry(b, strip.liftSlopePerRad() * area, p.elasticAxisAftOfCgM() - b * (a + 0.5),
+          p.elasticAxisAftOfCgM() + b * (0.5 - a), p.downwashGradient(),
+          p.hasElevator() ? scale * area * flapLiftPerRad(e) : 0.0,
+          p.hasElevator() ? scale * area * 2 * b * flapQuarterChordMomentPerRad(e) : 0.0);
     }
-    return strip.placement();
   }
 }

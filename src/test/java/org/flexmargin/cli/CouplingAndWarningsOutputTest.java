@@ -9,7 +9,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -22,12 +21,12 @@ class CouplingAndWarningsOutputTest {
   private static final Path IO = Path.of("src/test/resources/io");
   private static final Path DEMO = Path.of("mode-tables/demo");
 
-  private static int replaceFirst(Path file, String from, String to) throws IOException {
-    String text = Files.readString(file);
-    int at = text.indexOf(from);
-    assertTrue(at >= 0, "test set-up: <" + from + "> not in " + file);
-    Files.writeString(file, text.substring(0, at) + to + text.substring(at + from.length()));
-    return (int) text.substring(0, at).chars().filter(c -> c == '\n').count() + 1;
+  /** Copies the files into dir; returns the copy of the first. */
+  private static Path copied(Path from, Path dir, String... files) throws IOException {
+    for (String f : files) {
+      Files.copy(from.resolve(f), dir.resolve(f));
+    }
+    return dir.resolve(files[0]);
   }
 
   @Test
@@ -43,11 +42,8 @@ class CouplingAndWarningsOutputTest {
 
   @Test
   void anElevatorOnAnUnplacedStripIsABadInputAtItsLine(@TempDir Path dir) throws IOException {
-    for (String f : List.of("demo-case.json", "ridgeline-mc7-full-payload.json", "ridgeline-mc7-empty.csv")) {
-      Files.copy(DEMO.resolve(f), dir.resolve(f));
-    }
-    Path c = dir.resolve("demo-case.json");
-    int line = replaceFirst(c, "\"elastic_axis_aft_of_cg_m\": 6.0,", "");
+    Path c = copied(DEMO, dir, "demo-case.json", "ridgeline-mc7-full-payload.json", "ridgeline-mc7-empty.csv");
+    int line = BadInputCampaignTest.mutate(c, "\"elastic_axis_aft_of_cg_m\": 6.0,", "");
     CliRun r = CliRun.of("check", c.toString());
     assertEquals(FlexMargin.EXIT_BAD_INPUT, r.code(), r.out());
     assertTrue(r.err().contains(":" + (line + 1) + ": configurations[0].aero.strip_theory.strips[12]"
@@ -57,11 +53,8 @@ class CouplingAndWarningsOutputTest {
 
   @Test
   void inputWarningsReachResultsAndTheReportsFirstScreen(@TempDir Path dir) throws IOException {
-    for (String f : List.of("good-case.json", "good-modes.json", "good-forces.json")) {
-      Files.copy(IO.resolve(f), dir.resolve(f));
-    }
-    Path c = dir.resolve("good-case.json");
-    int line = replaceFirst(c, "\"width_m\": 1.0,", "\"width_m\": 25.0,");
+    Path c = copied(IO, dir, "good-case.json", "good-modes.json", "good-forces.json");
+    int line = BadInputCampaignTest.mutate(c, "\"width_m\": 1.0,", "\"width_m\": 25.0,");
     Path out = dir.resolve("out");
     CliRun r = CliRun.of("sweep", c.toString(), "--out", out.toString(), "--quiet", "--no-svg");
     assertEquals(FlexMargin.EXIT_OK, r.code(), r.err());
