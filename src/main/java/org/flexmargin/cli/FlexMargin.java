@@ -22,6 +22,7 @@ import picocli.CommandLine.Command;
     },
     subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
         SimulateCommand.class,
+        EnvelopeCommand.class,
         CommandLine.HelpCommand.class},
     footer = {
       "",

@@ -127,7 +127,7 @@ final class NotchDesignCommand implements Callable<Integer> {
     if (overwrite && writeCase == null) {
       throw new InvalidInputException("--overwrite", "--write-case FILE (it only applies there)", "no --write-case");
     }
-    AnalysisCase c = CaseReader.read(caseFile);
+    AnalysisCase c = LatticeCache.prepare(CaseReader.read(caseFile), spec.commandLine().getErr(), common.quiet);
     c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     if (c.loop() == null) {
       throw new InvalidInputException("loop", "a flight-control loop (notch design needs one)", "none");

@@ -94,6 +94,7 @@ public final class CaseReader {
 
   private static final List<String> CASE_KEYS =
       List.of("format", "name", "description", "plausibility_overrides", "configurations", "sweep", "options",
+          "envelope",
           "loop", "requirements");
   private static final List<String> CONFIG_KEYS =
       List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
@@ -524,7 +525,7 @@ public final class CaseReader {
     String kind = a.exactlyOne("the aerodynamic data", "strip_theory", "force_table", "lifting_surfaces");
     JsonField f = a.optional(kind);
     if (kind.equals("lifting_surfaces")) {
-      return LatticeReader.read(f, table);
+      return LatticeReader.read(f, table, ctx::resolve);
     }
     if (kind.equals("force_table")) {
       String rel = f.text();
