@@ -27,7 +27,8 @@ import picocli.CommandLine.Spec;
     description = {"Run the sweep on the bundled demo: the invented Ridgeline MC-7 cargo drone (fictional "
         + "data, not any real aircraft). The case and its mode tables are inside the program, so it runs "
         + "from any folder (the same files are in mode-tables/demo/ of the source tree)."},
-    footer = {"", "Examples:", "  flexmargin demo", "  flexmargin demo --out /tmp/mc7 --speed-unit kt"})
+    footer = {"", "Examples:", "  flexmargin demo", "  flexmargin demo --out /tmp/mc7 --speed-unit kt",
+        "  flexmargin demo --design-notches"})
 final class DemoCommand implements Callable<Integer> {
   /** Resource folder of the bundled demo. */
   static final String RESOURCE_FOLDER = "/org/flexmargin/demo/";
@@ -42,6 +43,10 @@ final class DemoCommand implements Callable<Integer> {
           + "an earlier flexmargin output folder, which is replaced once the new report is complete.")
   Path out = DEFAULT_OUT;
 
+  @Option(names = "--design-notches", description = "Also place structural notches as notch-design does and show "
+      + "them in the report and in its time-domain check. Adds the cost of a notch design.")
+  boolean designNotches;
+
   @Mixin CommonOptions common;
   @Mixin ReportStyleOptions style;
   @Mixin WorkOptions work;
@@ -54,7 +59,7 @@ final class DemoCommand implements Callable<Integer> {
       spec.commandLine().getOut().println("demo: the bundled Ridgeline MC-7 case (invented data; the same files as "
           + "mode-tables/demo/ in the source tree), report to " + out);
     }
-    return SweepCommand.run(spec, bundledCase(), out, common, style, work);
+    return SweepCommand.run(spec, bundledCase(), out, common, style, work, designNotches, true);
   }
 
   /**

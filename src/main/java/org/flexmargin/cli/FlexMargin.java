@@ -21,6 +21,7 @@ import picocli.CommandLine.Command;
           + "tests, flight flutter testing and the approval of the airworthiness authority."
     },
     subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
+        MarginsCommand.class,
         SimulateCommand.class,
         EnvelopeCommand.class,
         CommandLine.HelpCommand.class},

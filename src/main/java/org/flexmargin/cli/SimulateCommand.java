@@ -8,21 +8,26 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.flexmargin.atmosphere.StandardAtmosphere;
 import org.flexmargin.io.CaseReader;
+import org.flexmargin.model.ActuatorSpec;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.LoopSpec;
+import org.flexmargin.model.SensorSpec;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.report.ResultFiles;
 import org.flexmargin.report.SimulationFiles;
 import org.flexmargin.simulate.ActuatorLimits;
 import org.flexmargin.simulate.AircraftSimulation;
+import org.flexmargin.simulate.GustPenetration;
 import org.flexmargin.simulate.InputSignal;
 import org.flexmargin.simulate.LoopClosure;
 import org.flexmargin.simulate.RandomResponse;
 import org.flexmargin.simulate.RateLimitCycle;
 import org.flexmargin.simulate.SimulationPoint;
 import org.flexmargin.simulate.SimulationResult;
+import org.flexmargin.simulate.SensorNoise;
 import org.flexmargin.simulate.SimulationScenario;
 import org.flexmargin.simulate.Turbulence;
 import org.flexmargin.simulate.TurbulenceSpectrum;
@@ -103,11 +108,37 @@ final class SimulateCommand implements Callable<Integer> {
   @Option(names = "--seed", paramLabel = "N", description = "Seed of the turbulence generator (default: ${DEFAULT-VALUE}).")
   long seed = 1;
 
-  @Option(names = "--rate-limit-deg-s", paramLabel = "R", description = "Actuator rate limit, deg/s (default: none).")
+  @Option(names = "--sensor-noise", paramLabel = "SENSOR=RMS",
+      description = "Band-limited white noise on a sensor, RMS in its signal's unit (rad/s, g or rad); repeat for "
+          + "several sensors. Applies to the random-response run (with or without --turbulence).")
+  java.util.Map<String, Double> sensorNoise = new java.util.LinkedHashMap<>();
+
+  @Option(names = "--sensor-noise-hz", paramLabel = "F",
+      description = "Corner of the sensor noise's first-order band, Hz (default: ${DEFAULT-VALUE}).")
+  double sensorNoiseHz = 100;
+
+  @Option(names = "--penetration-m", paramLabel = "D",
+      description = "Gust penetration: the tailplane meets gusts and turbulence D m after the wing (delay D / V_TAS); "
+          + "needs --downwash-gradient and --elevator-effectiveness (default: no penetration).")
+  Double penetrationM;
+
+  @Option(names = "--downwash-gradient", paramLabel = "E",
+      description = "d epsilon / d alpha at the tailplane, in [0, 1) (with --penetration-m).")
+  Double downwashGradient;
+
+  @Option(names = "--elevator-effectiveness", paramLabel = "T",
+      description = "tau_e = d alpha_tail / d delta, in (0, 1.5] (with --penetration-m): the tailplane's share of "
+          + "the angle-of-attack forces is the elevator's times (1 - E) / T.")
+  Double elevatorEffectiveness;
+
+  @Option(names = "--rate-limit-deg-s", paramLabel = "R", description = "Actuator rate limit, deg/s (default: the case's actuator rate_limit_deg_s, else none).")
   Double rateLimitDegS;
 
-  @Option(names = "--position-limit-deg", paramLabel = "P", description = "Actuator position limit, deg (default: none).")
+  @Option(names = "--position-limit-deg", paramLabel = "P", description = "Actuator position limit, deg (default: the case's actuator position_limit_deg, else none).")
   Double positionLimitDeg;
+
+  @Option(names = "--no-limits", description = "Ignore the case's actuator rate and position limits (linear actuator).")
+  boolean noLimits;
 
   @Option(names = "--duration-s", paramLabel = "S", description = "Length of each run, s (default: ${DEFAULT-VALUE}).")
   double durationS = 10;
@@ -148,7 +179,7 @@ final class SimulateCommand implements Callable<Integer> {
       throw new InvalidInputException("--speed-eas", "a speed > 0 m/s", String.valueOf(eas));
     }
     double alt = altitudeM != null ? altitudeM : (c.sweep() instanceof SpeedSweep s ? s.altitudeM() : 0.0);
-    SimulationScenario scenario = scenario();
+    SimulationScenario scenario = scenario(c.loop());
     SimulationPoint point = SimulationPoint.of(ConfigurationModel.of(conf), conf, c.loop(),
         StandardAtmosphere.atEquivalentSpeed(alt, eas));
     SimulationResult r = AircraftSimulation.run(point, scenario);
@@ -165,7 +196,14 @@ final class SimulateCommand implements Callable<Integer> {
     return r.closedLoopMaxRealPartPerS() > 0 ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
   }
 
-  private SimulationScenario scenario() {
+  private SimulationScenario scenario(LoopSpec loop) {
+    ActuatorSpec actuator = loop.actuator();
+    List<String> sensorNames = loop.sensors().stream().map(SensorSpec::name).toList();
+    for (String name : sensorNoise.keySet()) {
+      if (!sensorNames.contains(name)) {
+        throw new InvalidInputException("--sensor-noise", "a sensor of the loop: one of " + sensorNames, name);
+      }
+    }
     double amp = Math.toRadians(amplitudeDeg);
     InputSignal pilot = switch (input.toLowerCase(Locale.ROOT)) {
       case "none" -> null;
@@ -190,11 +228,31 @@ final class SimulateCommand implements Callable<Integer> {
       t = new Turbulence(kind, sigmaMps, scaleM);
     }
     ActuatorLimits limits = new ActuatorLimits(
-        rateLimitDegS == null ? Double.POSITIVE_INFINITY : Math.toRadians(rateLimitDegS),
-        positionLimitDeg == null ? Double.POSITIVE_INFINITY : Math.toRadians(positionLimitDeg));
+        rateLimitDegS != null ? Math.toRadians(rateLimitDegS)
+            : noLimits ? Double.POSITIVE_INFINITY : actuator.rateLimitRadPerS(),
+        positionLimitDeg != null ? Math.toRadians(positionLimitDeg)
+            : noLimits ? Double.POSITIVE_INFINITY : actuator.positionLimitRad());
     List<Double> gradients = gradientM.isEmpty() ? AircraftSimulation.standardGradientLengthsM() : gradientM;
+    SensorNoise noise = sensorNoise.isEmpty() ? null : new SensorNoise(sensorNoise, sensorNoiseHz);
     return new SimulationScenario(openLoop ? LoopClosure.OPEN : LoopClosure.CLOSED, pilot, gustMps, gradients, t,
-        limits, durationS, stepS, turbulenceS, seed);
+        noise, limits, durationS, stepS, turbulenceS, seed, penetration(), true);
+  }
+
+  private GustPenetration penetration() {
+    if (penetrationM == null) {
+      if (downwashGradient != null || elevatorEffectiveness != null) {
+        throw new InvalidInputException("--penetration-m", "the wing-to-tail distance (with --downwash-gradient and "
+            + "--elevator-effectiveness)", "nothing");
+      }
+      return null;
+    }
+    if (downwashGradient == null) {
+      throw new InvalidInputException("--downwash-gradient", "d epsilon / d alpha at the tail, in [0, 1)", "nothing");
+    }
+    if (elevatorEffectiveness == null) {
+      throw new InvalidInputException("--elevator-effectiveness", "tau_e in (0, 1.5]", "nothing");
+    }
+    return new GustPenetration(penetrationM, downwashGradient, elevatorEffectiveness);
   }
 
   private static List<String> summary(String caseName, SimulationResult r) {
@@ -231,15 +289,18 @@ final class SimulateCommand implements Callable<Integer> {
       s.add(String.format(Locale.ROOT, "  worst gust: H = %.1f m (peak load %.4f g at %.3f s)",
           worst.gradientLengthM(), worst.peakLoadFactorG(), worst.timeOfPeakS()));
     }
-    if (r.scenario().turbulence() != null) {
+    if (r.scenario().hasRandomInputs()) {
       if (r.turbulence() == null) {
-        s.add("turbulence: no stationary response (the linear system is unstable)");
+        s.add("random response: no stationary response (the linear system is unstable)");
       } else {
         RandomResponse.Result t = r.turbulence();
         Turbulence tu = r.scenario().turbulence();
-        s.add(String.format(Locale.ROOT, "turbulence: %s, sigma %.2f m/s, L %.1f m, %.0f s record, seed %d",
+        s.add(tu == null ? String.format(Locale.ROOT, "sensor noise alone, %.0f s record, seed %d",
+            r.scenario().turbulenceDurationS(), r.scenario().seed())
+            : String.format(Locale.ROOT, "turbulence: %s, sigma %.2f m/s, L %.1f m, %.0f s record, seed %d%s",
             tu.spectrum().name().toLowerCase(Locale.ROOT), tu.sigmaMps(), tu.scaleLengthM(),
-            r.scenario().turbulenceDurationS(), r.scenario().seed()));
+            r.scenario().turbulenceDurationS(), r.scenario().seed(),
+            r.scenario().sensorNoise() == null ? "" : ", with sensor noise"));
         s.add(String.format(Locale.ROOT, "  %-40s %12s %12s %12s", "output", "exact RMS", "simulated", "95% +/-"));
         for (int o = 0; o < t.names().size(); o++) {
           String n = t.names().get(o);
@@ -250,7 +311,7 @@ final class SimulateCommand implements Callable<Integer> {
         }
       }
     }
-    if (Double.isFinite(r.scenario().limits().rateLimitRadPerS())) {
+    if (Double.isFinite(r.scenario().limits().rateLimitRadPerS()) && r.scenario().closure() == LoopClosure.CLOSED) {
       if (r.limitCycles().isEmpty()) {
         s.add("rate-limit limit cycle: none predicted between 0.05 and 60 Hz (describing function on the exact loop)");
       }

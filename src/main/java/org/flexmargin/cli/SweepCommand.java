@@ -17,6 +17,7 @@ import org.flexmargin.notch.NotchDesignResult;
 import org.flexmargin.notch.NotchDesignSpec;
 import org.flexmargin.notch.NotchDesigner;
 import org.flexmargin.report.ProposedNotches;
+import org.flexmargin.simulate.LoopComparison;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
 import org.flexmargin.report.ResultFiles;
@@ -60,6 +61,11 @@ final class SweepCommand implements Callable<Integer> {
       + "the Bode and Nichols charts. Adds the cost of a notch design.")
   boolean designNotches;
 
+  @Option(names = "--time-domain-check", description = "Also simulate a 1 deg doublet and 1-cosine gusts at V0max "
+      + "(first configuration, the case's actuator limits) with the case's loop and, with --design-notches, the "
+      + "designed one, and show the time histories in the report. Needs a loop and requirements.")
+  boolean timeDomainCheck;
+
   @Mixin CommonOptions common;
   @Mixin ReportStyleOptions style;
   @Mixin WorkOptions work;
@@ -73,7 +79,7 @@ final class SweepCommand implements Callable<Integer> {
     if (requirementsFile != null) {
       c = RequirementsOverride.apply(c, requirementsFile);
     }
-    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work, designNotches);
+    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work, designNotches, timeDomainCheck);
   }
 
   /** @return reports/&lt;case name&gt; */
@@ -87,12 +93,15 @@ final class SweepCommand implements Callable<Integer> {
    */
   static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
       ReportStyleOptions style, WorkOptions work) {
-    return run(spec, c, target, common, style, work, false);
+    return run(spec, c, target, common, style, work, false, false);
   }
 
-  /** As above; with {@code designNotches} a notch design is made and shown in the report. */
+  /**
+   * As above; with {@code designNotches} a notch design is made and shown in the report; with
+   * {@code timeDomain} (and a loop and requirements) the doublet-and-gust check at V0max is added.
+   */
   static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
-      ReportStyleOptions style, WorkOptions work, boolean designNotches) {
+      ReportStyleOptions style, WorkOptions work, boolean designNotches, boolean timeDomain) {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
     ReportFolder.checkTarget(target);
@@ -107,8 +116,13 @@ final class SweepCommand implements Callable<Integer> {
           "at most " + CostEstimate.LIMIT_TEXT + " (give --force to run anyway)",
           "about " + CostEstimate.duration(cost.cpuSeconds()) + "; fewer sweep points or modes bring it down");
     }
-    ReportOptions reportOptions = designNotches && c.loop() != null
+    ReportOptions withNotches = designNotches && c.loop() != null
         ? style.reportOptions().withProposedNotches(proposedNotches(c)) : style.reportOptions();
+    ProposedNotches proposed = withNotches.proposedNotches();
+    ReportOptions reportOptions = timeDomain && c.loop() != null && c.requirements() != null
+        ? withNotches.withTimeDomainCheck(LoopComparison.of(c, proposed == null ? null : proposed.loop(),
+            "designed notches"))
+        : withNotches;
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, cost, terminal);
     SweepResult result = new CaseSweep(work.threads).run(c, bar);

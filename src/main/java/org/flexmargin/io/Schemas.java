@@ -50,7 +50,9 @@ final class Schemas {
     MODE_TABLE("mode-table.schema.json"),
     FORCE_TABLE("force-table.schema.json"),
     REQUIREMENTS("requirements.schema.json"),
-    FILTERS("filters.schema.json");
+    FILTERS("filters.schema.json"),
+    LOOP_FILE("loop-file.schema.json"),
+    MEASURED_RESPONSE("measured-response.schema.json");
 
     private final String file;
 

@@ -290,6 +290,7 @@ public final class ClearanceSections {
       }
       if (c.servo() != null) {
         perSpeedTable(w);
+        RateSaturationTable.write(w, c, result.analysisCase().loop(), index, unit);
         closedLoopModel(w, c.servo().closedLoop());
       }
     }

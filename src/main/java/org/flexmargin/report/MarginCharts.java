@@ -16,7 +16,6 @@ import org.flexmargin.clearance.CheckKind;
 import org.flexmargin.clearance.PointAssessment;
 import org.flexmargin.clearance.RequirementLookup;
 import org.flexmargin.clearance.StructuralModeAssessment;
-import org.flexmargin.flutter.BranchCurve;
 import org.flexmargin.loop.GainCrossover;
 import org.flexmargin.loop.MarginDirection;
 import org.flexmargin.loop.PhaseCrossover;
@@ -212,21 +211,7 @@ public final class MarginCharts {
    * lowest in-vacuo frequency.
    */
   static double firstAeroelasticHz(ConfigurationResult c, int i) {
-    if (c.clearance() != null && i < c.clearance().points().size()) {
-      return c.clearance().points().get(i).firstAeroelasticFrequencyHz();
-    }
-    double f = Double.POSITIVE_INFINITY;
-    for (BranchCurve b : c.flutter().branches()) {
-      if (i < b.size() && b.converged()[i] && b.frequencyHz()[i] > 0) {
-        f = Math.min(f, b.frequencyHz()[i]);
-      }
-    }
-    if (Double.isInfinite(f)) {
-      for (double v : c.modeFrequenciesHz()) {
-        f = Math.min(f, v);
-      }
-    }
-    return Double.isInfinite(f) ? 1.0 : f;
+    return org.flexmargin.sweep.RateSaturation.firstAeroelasticHz(c, i);
   }
 
   private static ReportChart gainChart(Data d, SpeedAxisUnit unit) {

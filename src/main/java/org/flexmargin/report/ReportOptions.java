@@ -1,5 +1,7 @@
 package org.flexmargin.report;
 
+import org.flexmargin.simulate.LoopComparison;
+
 /**
  * How the human-readable report is drawn.
  *
@@ -7,8 +9,10 @@ package org.flexmargin.report;
  *     stay in m/s)
  * @param vectorCharts whether to write an SVG copy of every chart beside the PNG
  * @param proposedNotches a notch design to show beside the case's own filters, or null
+ * @param timeDomainCheck a doublet-and-gust simulation at V0max to show, or null
  */
-public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, ProposedNotches proposedNotches) {
+public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, ProposedNotches proposedNotches,
+    LoopComparison timeDomainCheck) {
   /** Validates. */
   public ReportOptions {
     if (chartSpeedUnit == null) {
@@ -23,7 +27,7 @@ public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, 
    * @param vectorCharts whether to write SVG copies
    */
   public ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts) {
-    this(chartSpeedUnit, vectorCharts, null);
+    this(chartSpeedUnit, vectorCharts, null, null);
   }
 
   /**
@@ -31,7 +35,15 @@ public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, 
    * @return these options with the design
    */
   public ReportOptions withProposedNotches(ProposedNotches notches) {
-    return new ReportOptions(chartSpeedUnit, vectorCharts, notches);
+    return new ReportOptions(chartSpeedUnit, vectorCharts, notches, timeDomainCheck);
+  }
+
+  /**
+   * @param check the simulation to show
+   * @return these options with the time-domain check
+   */
+  public ReportOptions withTimeDomainCheck(LoopComparison check) {
+    return new ReportOptions(chartSpeedUnit, vectorCharts, proposedNotches, check);
   }
 
   /** @return EAS in m/s, SVG copies written */

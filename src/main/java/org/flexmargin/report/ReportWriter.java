@@ -86,6 +86,10 @@ public final class ReportWriter {
       int at = sections.size() - 2;
       sections.addAll(at, ClearanceSections.of(result, loopCharts, unit));
     }
+    if (options.timeDomainCheck() != null) {
+      sections.add(sections.size() - 2, new SimulationSection(options.timeDomainCheck(),
+          embed(SimulationSection.charts(options.timeDomainCheck()), chartDir, options)));
+    }
     String title = (anyLoop ? "Aeroservoelastic clearance report: " : "Flutter and divergence report: ")
         + result.analysisCase().name();
     List<EmbeddedChart> panel = embed(MarginPanel.of(result, unit), chartDir, options);

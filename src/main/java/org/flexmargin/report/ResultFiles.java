@@ -23,6 +23,7 @@ import org.flexmargin.loop.DiskMargin;
 import org.flexmargin.loop.GainCrossover;
 import org.flexmargin.loop.LoopMarginResult;
 import org.flexmargin.loop.PhaseCrossover;
+import org.flexmargin.sweep.RateSaturation;
 import org.flexmargin.clearance.ClearanceCheck;
 import org.flexmargin.clearance.PointAssessment;
 import org.flexmargin.clearance.RankedFinding;
@@ -100,7 +101,7 @@ public final class ResultFiles {
     }
     ArrayNode configs = root.putArray("configurations");
     for (ConfigurationResult c : result.configurations()) {
-      ObjectNode co = configuration(mapper, c);
+      ObjectNode co = configuration(mapper, c, RateSaturation.along(c, result.analysisCase().loop()));
       if (co.get("loop") instanceof ObjectNode lo) {
         result.analysisCase().configurations().stream().filter(k -> k.name().equals(c.configuration()))
             .findFirst().ifPresent(k -> modeCoupling(lo.putArray("mode_coupling"), ModeCouplings.of(k)));
@@ -112,7 +113,8 @@ public final class ResultFiles {
     for (ConfigurationResult c : result.configurations()) {
       writeBranchesCsv(folder.resolve("branches-" + fileSafe(c.configuration()) + ".csv"), c.flutter());
       if (c.servo() != null) {
-        writeMarginsCsv(folder.resolve("margins-" + fileSafe(c.configuration()) + ".csv"), c.servo());
+        writeMarginsCsv(folder.resolve("margins-" + fileSafe(c.configuration()) + ".csv"), c.servo(),
+            RateSaturation.along(c, result.analysisCase().loop()));
       }
     }
   }
@@ -122,7 +124,8 @@ public final class ResultFiles {
     return name.replaceAll("[^A-Za-z0-9._-]", "_");
   }
 
-  private static ObjectNode configuration(ObjectMapper mapper, ConfigurationResult c) {
+  private static ObjectNode configuration(ObjectMapper mapper, ConfigurationResult c,
+      List<Optional<RateSaturation.Line>> rateLines) {
     ObjectNode o = mapper.createObjectNode();
     o.put("name", c.configuration());
     o.put("aero", c.aeroDescription());
@@ -184,7 +187,7 @@ public final class ResultFiles {
     ArrayNode warn = fl.putArray("warnings");
     s.warnings().forEach(warn::add);
     if (c.servo() != null) {
-      loop(o.putObject("loop"), c.servo());
+      loop(o.putObject("loop"), c.servo(), rateLines);
     }
     if (c.clearance() != null) {
       clearance(o.putObject("clearance"), c.clearance());
@@ -236,7 +239,7 @@ public final class ResultFiles {
     }
   }
 
-  private static void loop(ObjectNode o, ServoResult servo) {
+  private static void loop(ObjectNode o, ServoResult servo, List<Optional<RateSaturation.Line>> rateLines) {
     ClosedLoopResult cl = servo.closedLoop();
     o.put("rational_approximation", cl.fitDescription());
     o.put("closed_loop_eigen_solves", cl.eigenSolves());
@@ -289,6 +292,9 @@ public final class ResultFiles {
       num(dm, "frequency_hz", d.frequencyHz());
       num(po, "peak_gain_db", m.peakGain().magnitudeDb());
       num(po, "peak_gain_frequency_hz", m.peakGain().frequencyHz());
+      if (!rateLines.isEmpty()) {
+        rateSaturation(po, rateLines.get(i));
+      }
       po.put("margin_grid_points", m.diagnostics().gridPoints());
       po.put("unresolved_intervals", m.diagnostics().unresolvedIntervals());
       ArrayNode paths = po.putArray("loop_at_a_time");
@@ -420,13 +426,30 @@ public final class ResultFiles {
     num(o, "normalised_excess", c.normalisedExcess());
   }
 
-  private static void writeMarginsCsv(Path file, ServoResult servo) throws IOException {
+  private static void rateSaturation(ObjectNode po, Optional<RateSaturation.Line> line) {
+    if (line.isEmpty()) {
+      po.putNull("rate_saturation");
+      return;
+    }
+    RateSaturation.Line l = line.get();
+    ObjectNode r = po.putObject("rate_saturation");
+    num(r, "frequency_hz", l.frequencyHz());
+    r.put("basis", l.basis());
+    num(r, "loop_magnitude", l.loopMagnitude());
+    num(r, "elevator_per_command", l.elevatorPerCommand());
+    num(r, "command_amplitude_rad", l.commandAmplitudeRad());
+    num(r, "closed_loop_injection_amplitude_rad", l.closedLoopInjectionAmplitudeRad());
+  }
+
+  private static void writeMarginsCsv(Path file, ServoResult servo, List<Optional<RateSaturation.Line>> rateLines)
+      throws IOException {
     try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
       w.write("point,speed_eas_mps,speed_tas_mps,mach,dynamic_pressure_pa,min_phase_margin_deg,"
           + "phase_margin_frequency_hz,min_gain_increase_margin_db,gain_increase_frequency_hz,"
           + "gain_reduction_margin_db,gain_reduction_frequency_hz,delay_margin_s,disk_margin_alpha,"
           + "disk_gain_margin_db,disk_phase_margin_deg,peak_gain_db,peak_gain_frequency_hz,"
-          + "closed_loop_max_real_per_s\n");
+          + "closed_loop_max_real_per_s,rate_saturation_frequency_hz,rate_saturation_command_amplitude_rad,"
+          + "rate_saturation_injection_amplitude_rad\n");
       for (int i = 0; i < servo.points().size(); i++) {
         ServoPoint p = servo.points().get(i);
         LoopMarginResult m = p.margins();
@@ -445,10 +468,16 @@ public final class ResultFiles {
             fmt(dm.map(GainCrossover::delayMarginS).orElse(Double.NaN)),
             fmt(m.diskMargin().alpha()), fmt(m.diskMargin().gainUpperDb()), fmt(m.diskMargin().phaseMarginDeg()),
             fmt(m.peakGain().magnitudeDb()), fmt(m.peakGain().frequencyHz()),
-            fmt(servo.closedLoop().points().get(i).maxRealPart())));
+            fmt(servo.closedLoop().points().get(i).maxRealPart()),
+            rateColumns(rateLines.isEmpty() ? Optional.empty() : rateLines.get(i))));
         w.write('\n');
       }
     }
+  }
+
+  private static String rateColumns(Optional<RateSaturation.Line> line) {
+    return line.map(l -> String.join(",", fmt(l.frequencyHz()), fmt(l.commandAmplitudeRad()),
+        fmt(l.closedLoopInjectionAmplitudeRad()))).orElse(",,");
   }
 
   private static void num(ObjectNode o, String key, double v) {

@@ -87,7 +87,8 @@ public final class SimulationCharts {
     return out;
   }
 
-  private static double[] degrees(double[] v) {
+  /** @return the values in degrees */
+  static double[] degrees(double[] v) {
     double[] d = new double[v.length];
     for (int i = 0; i < v.length; i++) {
       d[i] = Math.toDegrees(v[i]);

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
 import org.flexmargin.loop.SisoFrequencyFunction;
+import org.flexmargin.loop.StateSpace;
 
 /**
  * Runs a {@link SimulationScenario} at a {@link SimulationPoint}: the pilot input and each
@@ -26,14 +27,20 @@ public final class AircraftSimulation {
    * @return the results
    */
   public static SimulationResult run(SimulationPoint point, SimulationScenario scenario) {
-    AircraftSimulationModel model = point.model(scenario.closure());
+    AircraftSimulationModel model = point.model(scenario.closure(), scenario.penetration());
     double maxRe = model.system().eigenvalues().maxRealPart();
     List<String> notes = new ArrayList<>(point.servo().plant().assumptions());
     notes.add("aerodynamics for the time domain: " + point.fitDescription());
     notes.addAll(point.fitWarnings());
     notes.add("hold and delay ahead of the actuator as Pade approximations, as in the closed-loop eigenvalues");
-    notes.add("gusts act on the whole aircraft at once (no penetration delay) as an angle of attack w/V with "
-        + "quasi-steady forces (no unsteady lift growth)");
+    if (scenario.penetration() == null || scenario.penetration().wingToTailM() == 0) {
+      notes.add("gusts act on the whole aircraft at once (no penetration delay) as an angle of attack w/V with "
+          + "quasi-steady forces (no unsteady lift growth)");
+    } else {
+      notes.add("gusts act as an angle of attack w/V with quasi-steady forces (no unsteady lift growth); "
+          + scenario.penetration().describe(point.condition().speedTasMps(),
+              AircraftSimulationModel.maxOmega(point.servo().plant().stateSpace(point.rational()))));
+    }
     if (maxRe > 0) {
       notes.add(String.format(Locale.ROOT, "the linear %s loop is UNSTABLE at this point (largest real part "
           + "%.3f 1/s): responses grow; no stationary turbulence response exists",
@@ -77,17 +84,28 @@ public final class AircraftSimulation {
       }
     }
     RandomResponse.Result turbulence = null;
-    if (scenario.turbulence() != null && maxRe < 0) {
+    if (scenario.hasRandomInputs() && maxRe < 0) {
       int n = (int) Math.round(scenario.turbulenceDurationS() / scenario.stepS());
-      turbulence = RandomResponse.run(model.withTurbulence(scenario.turbulence()), 1, scenario.stepS(), n,
-          scenario.seed());
+      StateSpace random = model.withRandomInputs(scenario.turbulence(), scenario.sensorNoise());
+      int[] sources = new int[random.inputCount() - 1];
+      for (int i = 0; i < sources.length; i++) {
+        sources[i] = i + 1;
+      }
+      turbulence = RandomResponse.run(random, sources, scenario.stepS(), n, scenario.seed());
       if (limited) {
-        notes.add("turbulence RMS is that of the linear system (actuator limits not applied in turbulence)");
+        notes.add("random-response RMS is that of the linear system (actuator limits not applied there)");
+      }
+      if (scenario.sensorNoise() != null) {
+        SensorNoise sn = scenario.sensorNoise();
+        notes.add(String.format(Locale.ROOT, "sensor noise in the random-response run: %s, white to %.1f Hz "
+            + "(first order), independent; the sensor outputs are the measured signals", sn.rmsBySensor(),
+            sn.bandwidthHz()));
       }
     }
     List<RateLimitCycle.Prediction> cycles = new ArrayList<>();
     List<String> checks = new ArrayList<>();
-    if (Double.isFinite(scenario.limits().rateLimitRadPerS()) && scenario.closure() == LoopClosure.CLOSED) {
+    if (scenario.limitCycles() && Double.isFinite(scenario.limits().rateLimitRadPerS())
+        && scenario.closure() == LoopClosure.CLOSED) {
       SisoFrequencyFunction loop = point.servo().brokenLoop();
       cycles.addAll(RateLimitCycle.predict(loop, scenario.limits().rateLimitRadPerS(), 2 * Math.PI * CYCLE_MIN_HZ,
           2 * Math.PI * CYCLE_MAX_HZ, 600));

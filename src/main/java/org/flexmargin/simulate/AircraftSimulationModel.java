@@ -2,6 +2,7 @@ package org.flexmargin.simulate;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.flexmargin.ase.AircraftPlant;
@@ -26,9 +27,11 @@ import org.flexmargin.model.SensorSpec;
  * delta'.
  *
  * <p>Inputs: {@code pilot_command_rad} (added to the law's output at the elevator command, before
- * the hold), {@code gust_velocity_mps} (vertical gust, positive up, seen by the whole aircraft at
- * once as an angle-of-attack change w_g / V: its forces are those of alpha in the quasi-steady
- * coupling coefficients, without unsteady gust lift growth).
+ * the hold), {@code gust_velocity_mps} (vertical gust at the wing, positive up, an angle-of-attack
+ * change w_g / V: its forces are those of alpha in the quasi-steady coupling coefficients, without
+ * unsteady gust lift growth). Without {@link GustPenetration} the whole aircraft meets the gust at
+ * once; with it, the tailplane's share of those forces sees the gust delayed by d / V (Padé states
+ * after the actuator's, output {@link #TAIL_GUST}).
  *
  * <p>Outputs: every sensor, alpha, rigid pitch rate, each modal coordinate, the elevator
  * position, rate and command (actuator input), the law's output, and both inputs. Immutable.
@@ -50,19 +53,27 @@ public final class AircraftSimulationModel {
   public static final String PITCH_RATE = "rigid_pitch_rate_rad_per_s";
   /** Output: angle of attack (rad). */
   public static final String ALPHA = "rigid_alpha_rad";
+  /** Output: gust velocity at the tailplane (m/s), with gust penetration only. */
+  public static final String TAIL_GUST = "tail_gust_velocity_mps";
 
   private final StateSpace system;
+  private final DMatrixRMaj noiseB;
+  private final DMatrixRMaj noiseD;
   private final int actuatorPosition;
   private final int actuatorRate;
   private final double actuatorOmega;
   private final double actuatorDamping;
   private final int commandOutput;
   private final List<String> modeNames;
+  private final List<String> sensorNames;
   private final double speedTasMps;
 
-  private AircraftSimulationModel(StateSpace system, int actuatorPosition, int actuatorRate, double actuatorOmega,
-      double actuatorDamping, int commandOutput, List<String> modeNames, double speedTasMps) {
+  private AircraftSimulationModel(StateSpace system, DMatrixRMaj noiseB, DMatrixRMaj noiseD, int actuatorPosition,
+      int actuatorRate, double actuatorOmega, double actuatorDamping, int commandOutput, List<String> modeNames,
+      List<String> sensorNames, double speedTasMps) {
     this.system = system;
+    this.noiseB = noiseB;
+    this.noiseD = noiseD;
     this.speedTasMps = speedTasMps;
     this.actuatorPosition = actuatorPosition;
     this.actuatorRate = actuatorRate;
@@ -70,6 +81,7 @@ public final class AircraftSimulationModel {
     this.actuatorDamping = actuatorDamping;
     this.commandOutput = commandOutput;
     this.modeNames = List.copyOf(modeNames);
+    this.sensorNames = List.copyOf(sensorNames);
   }
 
   /** @return the linear system (inputs pilot and gust; outputs as described above) */
@@ -121,33 +133,78 @@ public final class AircraftSimulationModel {
    * @return the augmented system
    */
   public StateSpace withTurbulence(Turbulence turbulence) {
-    StateSpace f = turbulence.shapingFilter(speedTasMps);
-    int n = system.stateCount();
-    int nf = f.stateCount();
-    int p = system.outputCount();
-    DMatrixRMaj a = new DMatrixRMaj(n + nf, n + nf);
-    CommonOps_DDRM.insert(system.a(), a, 0, 0);
-    DMatrixRMaj bg = CommonOps_DDRM.extract(system.b(), 0, n, 1, 2);
-    DMatrixRMaj bgcf = new DMatrixRMaj(n, nf);
-    CommonOps_DDRM.mult(bg, f.c(), bgcf);
-    CommonOps_DDRM.insert(bgcf, a, 0, n);
-    CommonOps_DDRM.insert(f.a(), a, n, n);
-    DMatrixRMaj b = new DMatrixRMaj(n + nf, 2);
-    CommonOps_DDRM.insert(CommonOps_DDRM.extract(system.b(), 0, n, 0, 1), b, 0, 0);
-    CommonOps_DDRM.insert(f.b(), b, n, 1);
-    DMatrixRMaj c = new DMatrixRMaj(p, n + nf);
-    CommonOps_DDRM.insert(system.c(), c, 0, 0);
-    DMatrixRMaj dg = CommonOps_DDRM.extract(system.d(), 0, p, 1, 2);
-    DMatrixRMaj dgcf = new DMatrixRMaj(p, nf);
-    CommonOps_DDRM.mult(dg, f.c(), dgcf);
-    CommonOps_DDRM.insert(dgcf, c, 0, n);
-    DMatrixRMaj d = new DMatrixRMaj(p, 2);
-    CommonOps_DDRM.insert(CommonOps_DDRM.extract(system.d(), 0, p, 0, 1), d, 0, 0);
+    return withRandomInputs(turbulence, null);
+  }
+
+  /**
+   * The model driven by continuous turbulence and/or sensor noise: each source is unit-intensity
+   * white noise through its shaping filter, the sources independent. Inputs: {@link #PILOT_INPUT},
+   * then {@code white_noise} (turbulence, if any), then {@code noise_SENSOR} per noisy sensor;
+   * states: the model's, the turbulence filter's, one per noisy sensor. The sensor outputs are the
+   * measured signals (noise included), as the law reads them.
+   *
+   * @param turbulence the turbulence, or null
+   * @param noise sensor noise, or null
+   * @return the augmented system
+   * @throws IllegalArgumentException if the noise names a sensor the model does not have
+   */
+  public StateSpace withRandomInputs(Turbulence turbulence, SensorNoise noise) {
+    List<StateSpace> filters = new ArrayList<>();
+    List<DMatrixRMaj> intoB = new ArrayList<>();
+    List<DMatrixRMaj> intoD = new ArrayList<>();
+    List<String> inputs = new ArrayList<>(List.of(PILOT_INPUT));
     List<String> states = new ArrayList<>(system.stateNames());
-    for (int i = 0; i < nf; i++) {
-      states.add("turbulence_x" + (i + 1));
+    int n = system.stateCount();
+    int p = system.outputCount();
+    if (turbulence != null) {
+      filters.add(turbulence.shapingFilter(speedTasMps));
+      intoB.add(CommonOps_DDRM.extract(system.b(), 0, n, 1, 2));
+      intoD.add(CommonOps_DDRM.extract(system.d(), 0, p, 1, 2));
+      inputs.add("white_noise");
+      for (int i = 0; i < filters.get(0).stateCount(); i++) {
+        states.add("turbulence_x" + (i + 1));
+      }
     }
-    return new StateSpace(a, b, c, d, List.of(PILOT_INPUT, "white_noise"), system.outputNames(), states);
+    if (noise != null) {
+      for (Map.Entry<String, Double> e : noise.rmsBySensor().entrySet()) {
+        int s = sensorNames.indexOf(e.getKey());
+        if (s < 0) {
+          throw new IllegalArgumentException("sensor noise names " + e.getKey() + "; the sensors are " + sensorNames);
+        }
+        filters.add(noise.filter(e.getValue()));
+        intoB.add(CommonOps_DDRM.extract(noiseB, 0, n, s, s + 1));
+        intoD.add(CommonOps_DDRM.extract(noiseD, 0, p, s, s + 1));
+        inputs.add("noise_" + e.getKey());
+        states.add("noise_" + e.getKey());
+      }
+    }
+    int total = n;
+    for (StateSpace f : filters) {
+      total += f.stateCount();
+    }
+    DMatrixRMaj a = new DMatrixRMaj(total, total);
+    DMatrixRMaj b = new DMatrixRMaj(total, inputs.size());
+    DMatrixRMaj c = new DMatrixRMaj(p, total);
+    DMatrixRMaj d = new DMatrixRMaj(p, inputs.size());
+    CommonOps_DDRM.insert(system.a(), a, 0, 0);
+    CommonOps_DDRM.insert(CommonOps_DDRM.extract(system.b(), 0, n, 0, 1), b, 0, 0);
+    CommonOps_DDRM.insert(system.c(), c, 0, 0);
+    CommonOps_DDRM.insert(CommonOps_DDRM.extract(system.d(), 0, p, 0, 1), d, 0, 0);
+    int off = n;
+    for (int k = 0; k < filters.size(); k++) {
+      StateSpace f = filters.get(k);
+      int nf = f.stateCount();
+      DMatrixRMaj bc = new DMatrixRMaj(n, nf);
+      CommonOps_DDRM.mult(intoB.get(k), f.c(), bc);
+      CommonOps_DDRM.insert(bc, a, 0, off);
+      CommonOps_DDRM.insert(f.a(), a, off, off);
+      CommonOps_DDRM.insert(f.b(), b, off, 1 + k);
+      DMatrixRMaj dc = new DMatrixRMaj(p, nf);
+      CommonOps_DDRM.mult(intoD.get(k), f.c(), dc);
+      CommonOps_DDRM.insert(dc, c, 0, off);
+      off += nf;
+    }
+    return new StateSpace(a, b, c, d, inputs, system.outputNames(), states);
   }
 
   /** @return the model with its actuator marked for rate and position limits */
@@ -181,6 +238,20 @@ public final class AircraftSimulationModel {
    *     second-order actuator
    */
   public static AircraftSimulationModel of(ServoLoop servo, RationalAerodynamics rational, LoopClosure closure) {
+    return of(servo, rational, closure, null);
+  }
+
+  /**
+   * Assembles the model with gust penetration.
+   *
+   * @param servo the loop at the flight condition (plant and law)
+   * @param rational the elastic aerodynamics in rational form
+   * @param closure whether the law's output drives the actuator
+   * @param penetration wing-to-tail delay of the gust, or null for none
+   * @return the model
+   */
+  public static AircraftSimulationModel of(ServoLoop servo, RationalAerodynamics rational, LoopClosure closure,
+      GustPenetration penetration) {
     AircraftPlant plant = servo.plant();
     StateSpace aircraft = plant.stateSpace(rational);
     if (!"alpha".equals(aircraft.stateNames().get(0))) {
@@ -216,10 +287,25 @@ public final class AircraftSimulationModel {
       paths.add(p.stateSpace());
     }
     int[] sensorOf = servo.law().pathSensorIndex();
-    return new Assembly(plant, aircraft, paths, sensorOf, pre, wAct, zAct, nq, closure).build();
+    StateSpace delay = null;
+    if (penetration != null && penetration.wingToTailM() > 0) {
+      delay = penetration.delay(plant.condition().speedTasMps(), maxOmega(aircraft));
+    }
+    double share = penetration == null ? 0 : penetration.tailShareOfElevator();
+    return new Assembly(plant, aircraft, paths, sensorOf, pre, wAct, zAct, nq, closure, delay, share).build();
   }
 
-  /** Builds the matrices: every signal as a row over [x; pilot; gust]. */
+  /** @return 1.5 times the highest frequency among the aircraft's eigenvalues, at least 2 pi 10 rad/s */
+  static double maxOmega(StateSpace aircraft) {
+    double[] im = aircraft.eigenvalues().imag();
+    double max = 2 * Math.PI * 10 / 1.5;
+    for (double v : im) {
+      max = Math.max(max, Math.abs(v));
+    }
+    return 1.5 * max;
+  }
+
+  /** Builds the matrices: every signal as a row over [x; pilot; gust; noise of each sensor]. */
   private static final class Assembly {
     private final AircraftPlant plant;
     private final StateSpace aircraft;
@@ -230,15 +316,19 @@ public final class AircraftSimulationModel {
     private final double zeta;
     private final int nq;
     private final LoopClosure closure;
+    private final StateSpace delay;
+    private final double tailShare;
+    private final int delayOffset;
     private final int na;
     private final int[] pathOffset;
     private final int preOffset;
     private final int actOffset;
     private final int n;
     private final DMatrixRMaj dyn;
+    private final int width;
 
     Assembly(AircraftPlant plant, StateSpace aircraft, List<StateSpace> paths, int[] sensorOf, StateSpace pre,
-        double w, double zeta, int nq, LoopClosure closure) {
+        double w, double zeta, int nq, LoopClosure closure, StateSpace delay, double tailShare) {
       this.plant = plant;
       this.aircraft = aircraft;
       this.paths = paths;
@@ -248,6 +338,8 @@ public final class AircraftSimulationModel {
       this.zeta = zeta;
       this.nq = nq;
       this.closure = closure;
+      this.delay = delay;
+      this.tailShare = delay == null ? 0 : tailShare;
       this.na = aircraft.stateCount();
       this.pathOffset = new int[paths.size()];
       int off = na;
@@ -257,12 +349,14 @@ public final class AircraftSimulationModel {
       }
       this.preOffset = off;
       this.actOffset = off + pre.stateCount();
-      this.n = actOffset + nq;
-      this.dyn = new DMatrixRMaj(n, n + 2);
+      this.delayOffset = actOffset + nq;
+      this.n = delayOffset + (delay == null ? 0 : delay.stateCount());
+      this.width = n + 2 + aircraft.outputCount();
+      this.dyn = new DMatrixRMaj(n, width);
     }
 
     private DMatrixRMaj row() {
-      return new DMatrixRMaj(1, n + 2);
+      return new DMatrixRMaj(1, width);
     }
 
     /** target[row, :] += k * map. */
@@ -280,6 +374,18 @@ public final class AircraftSimulationModel {
       DMatrixRMaj dA = aircraft.d();
       DMatrixRMaj delta = row();
       delta.set(0, actOffset, 1);
+      // gust at the tailplane: the delay's output (zero row without penetration)
+      DMatrixRMaj tail = row();
+      if (delay != null) {
+        for (int i = 0; i < delay.stateCount(); i++) {
+          for (int j = 0; j < delay.stateCount(); j++) {
+            dyn.set(delayOffset + i, delayOffset + j, delay.a().get(i, j));
+          }
+          dyn.set(delayOffset + i, n + 1, delay.b().get(i, 0));
+          tail.set(0, delayOffset + i, delay.c().get(0, i));
+        }
+        tail.set(0, n + 1, delay.d().get(0, 0));
+      }
       // sensors: C x + D delta + (C[:, alpha] / V) w_g
       int ns = cA.numRows;
       DMatrixRMaj[] sensors = new DMatrixRMaj[ns];
@@ -289,7 +395,9 @@ public final class AircraftSimulationModel {
           sensors[s].set(0, j, cA.get(s, j));
         }
         addRow(sensors[s], 0, dA.get(s, 0), delta);
-        sensors[s].add(0, n + 1, cA.get(s, 0) / v);
+        sensors[s].set(0, n + 2 + s, 1);
+        sensors[s].add(0, n + 1, (cA.get(s, 0) - tailShare * dA.get(s, 0)) / v);
+        addRow(sensors[s], 0, tailShare * dA.get(s, 0) / v, tail);
       }
       // aircraft dynamics
       for (int i = 0; i < na; i++) {
@@ -297,7 +405,8 @@ public final class AircraftSimulationModel {
           dyn.set(i, j, aA.get(i, j));
         }
         addRow(dyn, i, bA.get(i, 0), delta);
-        dyn.set(i, n + 1, aA.get(i, 0) / v);
+        dyn.add(i, n + 1, (aA.get(i, 0) - tailShare * bA.get(i, 0)) / v);
+        addRow(dyn, i, tailShare * bA.get(i, 0) / v, tail);
       }
       // law paths
       DMatrixRMaj law = row();
@@ -375,7 +484,11 @@ public final class AircraftSimulationModel {
       names.add(PILOT_INPUT);
       rows.add(unit(n + 1));
       names.add(GUST_INPUT);
-      DMatrixRMaj out = new DMatrixRMaj(rows.size(), n + 2);
+      if (delay != null) {
+        rows.add(tail);
+        names.add(TAIL_GUST);
+      }
+      DMatrixRMaj out = new DMatrixRMaj(rows.size(), width);
       for (int r = 0; r < rows.size(); r++) {
         CommonOps_DDRM.insert(rows.get(r), out, r, 0);
       }
@@ -392,11 +505,15 @@ public final class AircraftSimulationModel {
       if (nq == 2) {
         states.add("actuator_rate");
       }
+      for (int i = 0; delay != null && i < delay.stateCount(); i++) {
+        states.add("gust_delay_x" + (i + 1));
+      }
       StateSpace sys = new StateSpace(CommonOps_DDRM.extract(dyn, 0, n, 0, n), CommonOps_DDRM.extract(dyn, 0, n, n, n + 2),
           CommonOps_DDRM.extract(out, 0, out.numRows, 0, n), CommonOps_DDRM.extract(out, 0, out.numRows, n, n + 2),
           List.of(PILOT_INPUT, GUST_INPUT), names, states);
-      return new AircraftSimulationModel(sys, actOffset, nq == 2 ? actOffset + 1 : -1, w, zeta, commandIndex,
-          modes, v);
+      return new AircraftSimulationModel(sys, CommonOps_DDRM.extract(dyn, 0, n, n + 2, width),
+          CommonOps_DDRM.extract(out, 0, out.numRows, n + 2, width), actOffset, nq == 2 ? actOffset + 1 : -1, w, zeta,
+          commandIndex, modes, plant.sensors().stream().map(SensorSpec::name).toList(), v);
     }
 
     private DMatrixRMaj unit(int column) {

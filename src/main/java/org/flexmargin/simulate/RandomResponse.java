@@ -29,16 +29,35 @@ public final class RandomResponse {
    * @return exact and simulated RMS of every output, and the record
    */
   public static Result run(StateSpace system, int noiseInput, double stepS, int steps, long seed) {
+    return run(system, new int[] {noiseInput}, stepS, steps, seed);
+  }
+
+  /**
+   * As {@link #run(StateSpace, int, double, int, long)} with several independent unit-intensity
+   * white-noise inputs (intensity matrix the identity).
+   *
+   * @param system the system; no feed-through from the noise inputs
+   * @param noiseInputs indices of the noise inputs
+   * @param stepS sample period (s)
+   * @param steps number of steps of the record
+   * @param seed seed of the generator
+   * @return exact and simulated RMS of every output, and the record
+   */
+  public static Result run(StateSpace system, int[] noiseInputs, double stepS, int steps, long seed) {
     int n = system.stateCount();
-    for (int o = 0; o < system.outputCount(); o++) {
-      if (system.d().get(o, noiseInput) != 0) {
-        throw new IllegalArgumentException("output " + system.outputNames().get(o)
-            + " has a direct feed-through of white noise: infinite variance");
-      }
-    }
-    DMatrixRMaj g = CommonOps_DDRM.extract(system.b(), 0, n, noiseInput, noiseInput + 1);
     DMatrixRMaj gwg = new DMatrixRMaj(n, n);
-    CommonOps_DDRM.multTransB(g, g, gwg);
+    for (int noiseInput : noiseInputs) {
+      for (int o = 0; o < system.outputCount(); o++) {
+        if (system.d().get(o, noiseInput) != 0) {
+          throw new IllegalArgumentException("output " + system.outputNames().get(o)
+              + " has a direct feed-through of white noise: infinite variance");
+        }
+      }
+      DMatrixRMaj g = CommonOps_DDRM.extract(system.b(), 0, n, noiseInput, noiseInput + 1);
+      DMatrixRMaj ggT = new DMatrixRMaj(n, n);
+      CommonOps_DDRM.multTransB(g, g, ggT);
+      CommonOps_DDRM.addEquals(gwg, ggT);
+    }
     StationaryCovariance cov = StationaryCovariance.of(system.a(), gwg, stepS);
     DMatrixRMaj p = cov.covariance();
     DMatrixRMaj c = system.c();

@@ -64,4 +64,13 @@ public record SimulationPoint(String configurationName, FlightCondition conditio
   public AircraftSimulationModel model(LoopClosure closure) {
     return AircraftSimulationModel.of(servo, rational, closure);
   }
+
+  /**
+   * @param closure open or closed loop
+   * @param penetration wing-to-tail gust delay, or null
+   * @return the simulation model at this point
+   */
+  public AircraftSimulationModel model(LoopClosure closure, GustPenetration penetration) {
+    return AircraftSimulationModel.of(servo, rational, closure, penetration);
+  }
 }

@@ -11,15 +11,21 @@ import org.flexmargin.model.InvalidInputException;
  * @param gustPeakVelocityMps peak velocity of the 1-cosine gusts (m/s), 0 for none
  * @param gradientLengthsM gradient lengths H of the gusts (m), each &gt; 0
  * @param turbulence continuous turbulence, or null for none
+ * @param sensorNoise band-limited noise on the sensors in the random-response run (with the
+ *     turbulence, or alone), or null for none
  * @param limits actuator limits (infinite for none)
  * @param durationS length of each deterministic run (s), &gt; 0
  * @param stepS output and exact-discretisation step (s), &gt; 0
  * @param turbulenceDurationS length of the turbulence record (s), &gt; 0
  * @param seed seed of the turbulence generator
+ * @param penetration wing-to-tail delay of gusts and turbulence, or null (the whole aircraft
+ *     meets the gust at once)
+ * @param limitCycles whether to predict (and check by simulation) rate-limit limit cycles when
+ *     the rate is limited and the loop closed
  */
 public record SimulationScenario(LoopClosure closure, InputSignal pilotInput, double gustPeakVelocityMps,
-    List<Double> gradientLengthsM, Turbulence turbulence, ActuatorLimits limits, double durationS, double stepS,
-    double turbulenceDurationS, long seed) {
+    List<Double> gradientLengthsM, Turbulence turbulence, SensorNoise sensorNoise, ActuatorLimits limits, double durationS, double stepS,
+    double turbulenceDurationS, long seed, GustPenetration penetration, boolean limitCycles) {
   /** Validates and copies. */
   public SimulationScenario {
     if (closure == null) {
@@ -50,6 +56,11 @@ public record SimulationScenario(LoopClosure closure, InputSignal pilotInput, do
   /** @return number of output steps of a deterministic run */
   public int steps() {
     return (int) Math.round(durationS / stepS);
+  }
+
+  /** @return true if a random-response run (turbulence and/or sensor noise) is asked for */
+  public boolean hasRandomInputs() {
+    return turbulence != null || sensorNoise != null;
   }
 
   /** @return true if the gusts are to be run */

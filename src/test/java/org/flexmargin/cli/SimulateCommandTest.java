@@ -26,7 +26,7 @@ class SimulateCommandTest {
     Path out = tmp.resolve("sim");
     String[] r = run("simulate", "mode-tables/demo/demo-case.json", "--speed-eas", "50", "--duration-s", "1.5",
         "--gust-mps", "5", "--gradient-m", "20,60", "--turbulence", "dryden", "--turbulence-s", "20", "--step-s",
-        "0.005", "--out", out.toString());
+        "0.005", "--no-limits", "--out", out.toString());
     assertEquals("0", r[0], r[2]);
     assertTrue(r[1].contains("worst gust: H ="), r[1]);
     assertTrue(r[1].contains("exact RMS"), r[1]);
@@ -47,6 +47,26 @@ class SimulateCommandTest {
     assertEquals("2", r[0], r[1] + r[2]);
     assertTrue(r[2].contains("--input") && r[2].contains("wiggle"), r[2]);
     assertFalse(r[2].contains("at org."), r[2]);
+    assertFalse(Files.exists(out));
+  }
+
+  @Test
+  void penetrationWithoutItsAerodynamicsGivesExitTwo(@TempDir Path tmp) {
+    Path out = tmp.resolve("sim");
+    String[] r = run("simulate", "mode-tables/demo/demo-case.json", "--penetration-m", "6", "--downwash-gradient",
+        "0.4", "--out", out.toString());
+    assertEquals("2", r[0], r[1] + r[2]);
+    assertTrue(r[2].contains("--elevator-effectiveness"), r[2]);
+    assertFalse(Files.exists(out));
+  }
+
+  @Test
+  void noiseOnAnUnknownSensorGivesExitTwo(@TempDir Path tmp) {
+    Path out = tmp.resolve("sim");
+    String[] r = run("simulate", "mode-tables/demo/demo-case.json", "--sensor-noise", "gyro2=0.001", "--out",
+        out.toString());
+    assertEquals("2", r[0], r[1] + r[2]);
+    assertTrue(r[2].contains("--sensor-noise") && r[2].contains("gyro2") && r[2].contains("pitch_rate"), r[2]);
     assertFalse(Files.exists(out));
   }
 }

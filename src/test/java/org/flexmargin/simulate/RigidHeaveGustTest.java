@@ -27,16 +27,16 @@ import org.flexmargin.structure.StructuralModel;
 import org.junit.jupiter.api.Test;
 
 /**
- * A rigid aircraft in pure heave (no pitching moment derivatives, so q stays zero) crossing a
+ * A rigid aircraft in pure heave (no pitching moments but pitch damping, so q stays zero) crossing a
  * 1-cosine gust, with quasi-steady lift: alpha' = -a (alpha + w/V), a = q S CL_a / (m V), load
  * factor dn = V a (alpha + w/V) / g. Against its closed-form solution and the sharp-edged-gust
  * formula.
  */
 class RigidHeaveGustTest {
-  private static final double MASS = 2000;
-  private static final double AREA = 20;
-  private static final double CLA = 5.0;
-  private static final FlightCondition FC = StandardAtmosphere.at(1000, 80);
+  static final double MASS = 2000;
+  static final double AREA = 20;
+  static final double CLA = 5.0;
+  static final FlightCondition FC = StandardAtmosphere.at(1000, 80);
 
   @Test
   void heaveResponseMatchesTheClosedForm() {
@@ -57,9 +57,7 @@ class RigidHeaveGustTest {
       if (t > end) {
         break;
       }
-      // closed form (derived: linear first-order ODE with the constant and cosine parts of the gust)
-      double alpha = -u / (2 * v) * (1 - Math.exp(-a * t))
-          + a * u / (2 * v) * (a * Math.cos(om * t) + om * Math.sin(om * t) - a * Math.exp(-a * t)) / (a * a + om * om);
+      double alpha = alphaClosedForm(t, u, om, v, a);
       double dn = v * a * (alpha + gust.value(t) / v) / AircraftPlant.STANDARD_GRAVITY_MPS2;
       // tolerance: the mid-step hold of the smooth gust, O((om dt)^2) of the peak
       assertEquals(dn, n[k], 2e-4 * u, "t = " + t);
@@ -86,21 +84,42 @@ class RigidHeaveGustTest {
     }
   }
 
+  /**
+   * Angle of attack of the heaving aircraft in a 1-cosine gust of peak u and om = pi V / H, while
+   * in the gust (0 &lt;= t &lt;= 2 H / V); 0 before it (derived: linear first-order ODE
+   * alpha' = -a (alpha + w / V) with the constant and cosine parts of the gust).
+   */
+  static double alphaClosedForm(double t, double u, double om, double v, double a) {
+    if (t <= 0) {
+      return 0;
+    }
+    return -u / (2 * v) * (1 - Math.exp(-a * t))
+        + a * u / (2 * v) * (a * Math.cos(om * t) + om * Math.sin(om * t) - a * Math.exp(-a * t)) / (a * a + om * om);
+  }
+
   private static AircraftSimulationModel heaveModel() {
+    return heaveModel(MASS, 0, null);
+  }
+
+  /**
+   * The heaving aircraft; with {@code liftPerElevator} and gust penetration the tailplane carries
+   * that share of the lift slope (pitching moments all zero, so q stays zero).
+   */
+  static AircraftSimulationModel heaveModel(double mass, double liftPerElevator, GustPenetration penetration) {
     SensorSpec accel = new SensorSpec("accel", SensorKind.NORMAL_ACCELEROMETER, "cg", 0.0, 0.0);
     ModeTable modes = new ModeTable("heave", List.of(new ElasticMode("far", 80.0, 0.02, 10.0,
         Map.of("cg", new ShapeValue(0, 0)))));
-    RigidBody rb = new RigidBody(MASS, 5000, AREA, 1.5, CLA, 0, 0, 0, 0, 0, Map.of());
+    RigidBody rb = new RigidBody(mass, 5000, AREA, 1.5, CLA, 0, -10, 0, liftPerElevator, 0, Map.of());
     ZeroAero aero = new ZeroAero();
     AircraftPlant plant = new AircraftPlant(modes, StructuralModel.fromModeTable(modes), aero, rb, List.of(accel), FC);
     LoopSpec loop = new LoopSpec(new ActuatorSpec(ActuatorOrder.FIRST, 10, 0.7), List.of(accel),
         List.of(new FeedbackPath("accel", 0.1, 0, List.of(), null)), 0, 0, 2);
     ServoLoop servo = new ServoLoop(plant, FlightControlLaw.of(loop, FC.dynamicPressurePa()));
-    return AircraftSimulationModel.of(servo, aero, LoopClosure.OPEN);
+    return AircraftSimulationModel.of(servo, aero, LoopClosure.OPEN, penetration);
   }
 
   /** No elastic aerodynamic forces (one mode, one lag root, all coefficients zero). */
-  private static final class ZeroAero implements AeroSource, RationalAerodynamics {
+  static final class ZeroAero implements AeroSource, RationalAerodynamics {
     @Override
     public int size() {
       return 1;
