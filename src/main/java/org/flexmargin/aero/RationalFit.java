@@ -33,6 +33,8 @@ import org.flexmargin.model.InvalidInputException;
  * @param errorThreshold relative error above which the fit is flagged (dimensionless, &gt; 0)
  * @param warnings fit quality and data-range remarks, in words (empty when none)
  * @param sourceDescription one-line description of the data that were fitted
+ * @param form how the fit was made, in words: {@link #ROGER} or {@link #MINIMUM_STATE} (the
+ *     minimum-state fit is held in Roger's form, its lag matrices of rank one)
  */
 public record RationalFit(
     double referenceSemichordM,
@@ -42,7 +44,13 @@ public record RationalFit(
     FitError error,
     double errorThreshold,
     List<String> warnings,
-    String sourceDescription) implements AeroSource {
+    String sourceDescription,
+    String form) implements AeroSource {
+
+  /** {@link #form()} of a least-squares fit of Roger's form. */
+  public static final String ROGER = "Roger form";
+  /** {@link #form()} of Karpel's minimum-state fit. */
+  public static final String MINIMUM_STATE = "minimum-state form (Karpel)";
 
   /** Validates and copies. */
   public RationalFit {
@@ -106,6 +114,9 @@ public record RationalFit(
     warnings = List.copyOf(warnings);
     if (sourceDescription == null) {
       sourceDescription = "";
+    }
+    if (form == null) {
+      form = ROGER;
     }
   }
 
@@ -287,7 +298,7 @@ public record RationalFit(
   @Override
   public String description() {
     return String.format(Locale.ROOT,
-        "rational fit (Roger form, %d lag roots, k up to %.3g, worst element error %.2g %%) of %s",
-        lagRoots.length, maxReducedFrequency(), 100 * error.worstRelativeError(), sourceDescription);
+        "rational fit (%s, %d lag roots, k up to %.3g, worst element error %.2g %%) of %s",
+        form, lagRoots.length, maxReducedFrequency(), 100 * error.worstRelativeError(), sourceDescription);
   }
 }

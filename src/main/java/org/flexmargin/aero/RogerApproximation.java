@@ -127,33 +127,11 @@ public final class RogerApproximation {
     }
     int n = source.size();
     int nn = n * n;
-    List<String> warnings = new ArrayList<>();
-    if (source.minReducedFrequency() > 0) {
-      warnings.add(String.format(Locale.ROOT,
-          "steady forces A0 taken from the source at k = 0, below its range (lowest k %.4g)",
-          source.minReducedFrequency()));
-    }
-    if (ks[ks.length - 1] > source.maxReducedFrequency() || ks[0] < source.minReducedFrequency()) {
-      warnings.add(String.format(Locale.ROOT,
-          "fitted reduced frequencies %.4g .. %.4g extend beyond the data range %.4g .. %.4g",
-          ks[0], ks[ks.length - 1], source.minReducedFrequency(), source.maxReducedFrequency()));
-    }
-
-    // data: Q at every k, and A0 = Re Q(0)
-    ZMatrixRMaj q = new ZMatrixRMaj(n, n);
-    source.forces(0.0, q);
+    List<String> warnings = rangeWarnings(source, ks);
     double[][][] coefficients = new double[nl + 3][n][n];
-    for (int i = 0; i < n; i++) {
-      for (int j = 0; j < n; j++) {
-        coefficients[0][i][j] = q.getReal(i, j);
-      }
-    }
+    coefficients[0] = steadyForces(source);
     int nk = ks.length;
-    double[][] data = new double[nk][];
-    for (int r = 0; r < nk; r++) {
-      source.forces(ks[r], q);
-      data[r] = q.data.clone();
-    }
+    double[][] data = sampled(source, ks);
 
     // design matrix: row 2r real part, row 2r+1 imaginary part; columns A1, A2, A3..
     DMatrixRMaj design = new DMatrixRMaj(2 * nk, unknowns);
@@ -187,9 +165,71 @@ public final class RogerApproximation {
       }
     }
 
-    // errors on the fitted frequencies
+    return measured(source, lags, coefficients, ks, data, errorThreshold, warnings, RationalFit.ROGER);
+  }
+
+  /** @return remarks on the data's range against the fitted frequencies */
+  static List<String> rangeWarnings(AeroSource source, double[] ks) {
+    List<String> warnings = new ArrayList<>();
+    if (source.minReducedFrequency() > 0) {
+      warnings.add(String.format(Locale.ROOT,
+          "steady forces A0 taken from the source at k = 0, below its range (lowest k %.4g)",
+          source.minReducedFrequency()));
+    }
+    if (ks[ks.length - 1] > source.maxReducedFrequency() || ks[0] < source.minReducedFrequency()) {
+      warnings.add(String.format(Locale.ROOT,
+          "fitted reduced frequencies %.4g .. %.4g extend beyond the data range %.4g .. %.4g",
+          ks[0], ks[ks.length - 1], source.minReducedFrequency(), source.maxReducedFrequency()));
+    }
+    return warnings;
+  }
+
+  /** @return A<sub>0</sub> = Re Q(0) of the source */
+  static double[][] steadyForces(AeroSource source) {
+    int n = source.size();
+    ZMatrixRMaj q = new ZMatrixRMaj(n, n);
+    source.forces(0.0, q);
+    double[][] a0 = new double[n][n];
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        a0[i][j] = q.getReal(i, j);
+      }
+    }
+    return a0;
+  }
+
+  /** @return Q(ik) at each k, interleaved as in {@link ZMatrixRMaj#data} */
+  static double[][] sampled(AeroSource source, double[] ks) {
+    ZMatrixRMaj q = new ZMatrixRMaj(source.size(), source.size());
+    double[][] data = new double[ks.length][];
+    for (int r = 0; r < ks.length; r++) {
+      source.forces(ks[r], q);
+      data[r] = q.data.clone();
+    }
+    return data;
+  }
+
+  /**
+   * The fit with its errors on the fitted frequencies and, above the threshold, a warning.
+   *
+   * @param source the fitted data (for its reference semichord and description)
+   * @param lags lag roots
+   * @param coefficients A<sub>0</sub> .. A<sub>nL+2</sub>
+   * @param ks fitted reduced frequencies
+   * @param data Q(ik) at each fitted k, interleaved as in {@link ZMatrixRMaj#data}
+   * @param errorThreshold relative error above which the fit is flagged
+   * @param warnings remarks so far (added to)
+   * @param form {@link RationalFit#form()}
+   * @return the fit
+   */
+  static RationalFit measured(AeroSource source, double[] lags, double[][][] coefficients, double[] ks,
+      double[][] data, double errorThreshold, List<String> warnings, String form) {
+    int n = coefficients[0].length;
+    int nn = n * n;
+    int nk = ks.length;
+    ZMatrixRMaj q = new ZMatrixRMaj(n, n);
     RationalFit provisional = new RationalFit(source.referenceSemichordM(), lags, coefficients, ks,
-        FitError.of(new double[n][n], new double[n][n]), errorThreshold, List.of(), source.description());
+        FitError.of(new double[n][n], new double[n][n]), errorThreshold, List.of(), source.description(), form);
     double[][] absolute = new double[n][n];
     double[][] largest = new double[n][n];
     for (int r = 0; r < nk; r++) {
@@ -216,7 +256,7 @@ public final class RogerApproximation {
           100 * error.worstRelativeError(), error.worstRow(), error.worstColumn(), 100 * errorThreshold));
     }
     return new RationalFit(source.referenceSemichordM(), lags, coefficients, ks, error, errorThreshold,
-        warnings, source.description());
+        warnings, source.description(), form);
   }
 
   /**
@@ -293,7 +333,7 @@ public final class RogerApproximation {
     }
   }
 
-  private static double[] checkedFrequencies(double[] ks) {
+  static double[] checkedFrequencies(double[] ks) {
     if (ks == null || ks.length == 0) {
       throw new InvalidInputException("rfa.reduced_frequencies", "a list of reduced frequencies", "none");
     }

@@ -30,13 +30,13 @@ import org.flexmargin.structure.StructuralModel;
  *  alpha' = q - (qd S / (m V)) (CL_a alpha + CL_d delta + sum_i CL_eta_i eta_i)
  *  q'     = (qd S c / I) (Cm_a alpha + Cm_q (c/2V) q + Cm_adot (c/2V) alpha' + Cm_d delta
  *                         + sum_i Cm_eta_i eta_i)
- *  M eta'' + C eta' + K eta = qd (Q(ik) eta + Q_alpha alpha + Q_delta delta)
+ *  M eta'' + C eta' + K eta = qd (Q(ik) eta + Q_alpha alpha + Q_q (c/2V) q + Q_delta delta)
  * </pre>
  *
  * <p>with qd the dynamic pressure, Q(ik) the elastic generalized aerodynamic forces of the
  * configuration's source (exact in {@link #frequencyEvaluator}, rational approximation in
  * {@link #stateSpace}), and the per-mode quasi-steady coupling coefficients of {@link ModeCoupling}
- * (zero where the user gave none; {@link #assumptions()} says so). Sensors:
+ * (supplied, computed from placed strips, or zero; {@link #assumptions()} says which). Sensors:
  *
  * <ul>
  *   <li>pitch-rate gyro: q + sum_i rot_i eta_i' (rad/s);
@@ -65,6 +65,7 @@ public final class AircraftPlant {
   private final double[] momentPerEta;
   private final double[] forcePerAlpha;
   private final double[] forcePerElevator;
+  private final double[] forcePerPitchRate;
   private final List<SensorSpec> sensors;
   private final double[][] sensorRotation;
   private final double[][] sensorDisplacement;
@@ -93,17 +94,23 @@ public final class AircraftPlant {
     this.momentPerEta = new double[m];
     this.forcePerAlpha = new double[m];
     this.forcePerElevator = new double[m];
+    this.forcePerPitchRate = new double[m];
+    List<String> supplied = new ArrayList<>();
+    List<String> computed = new ArrayList<>();
     List<String> uncoupled = new ArrayList<>();
     for (int i = 0; i < m; i++) {
       String name = modeNames.get(i);
-      if (!rigid.modeCoupling().containsKey(name)) {
-        uncoupled.add(name);
-      }
       ModeCoupling c = rigid.couplingOf(name);
+      switch (c.origin()) {
+        case SUPPLIED -> supplied.add(name);
+        case STRIPS -> computed.add(name);
+        default -> uncoupled.add(name);
+      }
       liftPerEta[i] = c.liftCoefficientPerUnitCoordinate();
       momentPerEta[i] = c.pitchMomentCoefficientPerUnitCoordinate();
       forcePerAlpha[i] = c.generalizedForcePerAlphaM2();
       forcePerElevator[i] = c.generalizedForcePerElevatorM2();
+      forcePerPitchRate[i] = c.generalizedForcePerPitchRateM2();
     }
     List<String> notes = new ArrayList<>();
     if (aero instanceof ControlSurfaceForces cs && cs.elevatorForcesM2PerRad().isPresent()) {
@@ -122,7 +129,13 @@ public final class AircraftPlant {
       }
     }
     notes.add("short period at constant speed, gravity neglected; elastic modes coupled to it only through "
-        + "the quasi-steady coefficients supplied");
+        + "quasi-steady coefficients");
+    if (!supplied.isEmpty()) {
+      notes.add("rigid-body and elevator coupling supplied for modes " + supplied);
+    }
+    if (!computed.isEmpty()) {
+      notes.add("rigid-body and elevator coupling computed from the strips (quasi-steady) for modes " + computed);
+    }
     if (!uncoupled.isEmpty()) {
       notes.add("no rigid-body or elevator coupling given for modes " + uncoupled + ": taken as zero");
     }
@@ -237,9 +250,10 @@ public final class AircraftPlant {
         system.set(1, 2 + i, -mf * momentPerEta[i], 0);
       }
       rhs.set(1, 0, mf * rigid.pitchMomentPerElevatorPerRad(), 0);
-      // elastic rows: -qd Qa alpha + (-w^2 M + i w C + K - qd Q) eta = qd Qd delta
+      // elastic rows: -qd Qa alpha - qd Qq rf q + (-w^2 M + i w C + K - qd Q) eta = qd Qd delta
       for (int i = 0; i < m; i++) {
         system.set(2 + i, 0, -qd * forcePerAlpha[i], 0);
+        system.set(2 + i, 1, -qd * forcePerPitchRate[i] * rf, 0);
         for (int j = 0; j < m; j++) {
           system.set(2 + i, 2 + j,
               -w * w * mass[i][j] + stiffness[i][j] - qd * q.getReal(i, j),
@@ -342,7 +356,7 @@ public final class AircraftPlant {
       a.add(1, 2 + i, mf * momentPerEta[i]);
     }
     bIn.set(1, 0, cad * bIn.get(0, 0) + mf * rigid.pitchMomentPerElevatorPerRad());
-    // elastic: Mbar eta'' = -Cbar eta' - Kbar eta + qd sum A_l r_l + qd Qa alpha + qd Qd delta
+    // elastic: Mbar eta'' = -Cbar eta' - Kbar eta + qd sum A_l r_l + qd Qa alpha + qd Qq rf q + qd Qd delta
     DMatrixRMaj a0 = rational.coefficient(0);
     DMatrixRMaj a1 = rational.coefficient(1);
     DMatrixRMaj a2 = rational.coefficient(2);
@@ -357,6 +371,7 @@ public final class AircraftPlant {
         rhs.set(i, 2 + m + j, -(damping[i][j] - qd * bv * a1.get(i, j)));
       }
       rhs.set(i, 0, qd * forcePerAlpha[i]);
+      rhs.set(i, 1, qd * forcePerPitchRate[i] * rf);
       rhsB.set(i, 0, qd * forcePerElevator[i]);
     }
     for (int l = 0; l < nl; l++) {

@@ -79,6 +79,7 @@ final class CheckCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "  %s airframe alone at the first point: short-period roots %.3f%+.3fi and %.3f%+.3fi 1/s%s%n",
             cfg.name(), sp[0], sp[1], sp[2], sp[3], Math.max(sp[0], sp[2]) > 0 ? " (unstable: the loop must stabilise it)" : "");
         plant.assumptions().forEach(a -> out.println("    assumption: " + a));
+        CouplingTable.print(out, cfg);
       }
     }
     if (c.requirements() != null) {

@@ -263,6 +263,54 @@ public final class StateSpaceMethod implements FlutterMethod {
     return a;
   }
 
+  /** Fit error at a flutter onset's reduced frequency above which the results say so (1 %). */
+  public static final double ONSET_FIT_ERROR_LIMIT = 0.01;
+
+  /**
+   * The fit's error at the reduced frequency of a flutter onset: max over elements of |Q_fit(ik) -
+   * Q(ik)| divided by the largest |Q_ij(ik)| (dimensionless; 0 when the source is the fit itself).
+   *
+   * @param source the fitted data
+   * @param fit the fit
+   * @param reducedFrequency k &ge; 0
+   * @return the relative error
+   */
+  public static double fitErrorAt(AeroSource source, RationalFit fit, double reducedFrequency) {
+    if (source == fit) {
+      return 0.0;
+    }
+    int n = fit.size();
+    ZMatrixRMaj exact = new ZMatrixRMaj(n, n);
+    ZMatrixRMaj approx = new ZMatrixRMaj(n, n);
+    source.forces(reducedFrequency, exact);
+    fit.evaluate(reducedFrequency, approx);
+    double diff = 0;
+    double size = 0;
+    for (int e = 0; e < n * n; e++) {
+      diff = Math.max(diff, Math.hypot(approx.data[2 * e] - exact.data[2 * e],
+          approx.data[2 * e + 1] - exact.data[2 * e + 1]));
+      size = Math.max(size, Math.hypot(exact.data[2 * e], exact.data[2 * e + 1]));
+    }
+    return size > 0 ? diff / size : (diff == 0 ? 0.0 : Double.POSITIVE_INFINITY);
+  }
+
+  private static void flagFitErrorAtOnsets(AeroSource source, RationalFit fit, List<FlutterCrossing> crossings,
+      List<String> warnings) {
+    for (FlutterCrossing x : crossings) {
+      if (x.kind() != CrossingKind.FLUTTER_ONSET) {
+        continue;
+      }
+      double k = 2 * Math.PI * x.frequencyHz() * fit.referenceSemichordM() / x.condition().speedTasMps();
+      double error = fitErrorAt(source, fit, k);
+      if (error > ONSET_FIT_ERROR_LIMIT) {
+        warnings.add(String.format(Locale.ROOT,
+            "rational fit error %.3g %% at the reduced frequency k = %.4g of the %s onset at %.2f m/s EAS exceeds "
+                + "%.3g %%: the state-space onset may be off; compare with p-k, add lag roots or refit around it",
+            100 * error, k, x.branchName(), x.condition().speedEasMps(), 100 * ONSET_FIT_ERROR_LIMIT));
+      }
+    }
+  }
+
   private static boolean finite(DMatrixRMaj x) {
     for (double d : x.data) {
       if (!Double.isFinite(d)) {
@@ -278,8 +326,8 @@ public final class StateSpaceMethod implements FlutterMethod {
     Tracker tr = new Tracker(system, f, path);
     List<String> warnings = tr.warnings;
     warnings.add(String.format(Locale.ROOT,
-        "method: state-space eigenvalues with a rational fit (Roger form, %d lag roots, k fitted up to %.3g, "
-            + "worst element error %.3g %%)", f.lagCount(), f.maxReducedFrequency(),
+        "method: state-space eigenvalues with a rational fit (%s, %d lag roots, k fitted up to %.3g, "
+            + "worst element error %.3g %%)", f.form(), f.lagCount(), f.maxReducedFrequency(),
         100 * f.error().worstRelativeError()));
     for (String w : f.warnings()) {
       warnings.add("rational fit: " + w);
@@ -318,6 +366,7 @@ public final class StateSpaceMethod implements FlutterMethod {
         (j, p, fa, level) -> tr.refine(j, p, roots[p], fa, level, options));
     tr.staticCrossings(spectra, roots);
     tr.finishWarnings();
+    flagFitErrorAtOnsets(system.aero(), f, crossings, warnings);
     return new FlutterSolution(FlutterMethodKind.STATE_SPACE, curves, crossings, tr.counters.toDiagnostics(),
         warnings);
   }

@@ -35,6 +35,7 @@ import org.flexmargin.model.LoopSpec;
 import org.flexmargin.model.LowPassFilterSpec;
 import org.flexmargin.model.MachSweep;
 import org.flexmargin.model.ModeCoupling;
+import org.flexmargin.model.CouplingOrigin;
 import org.flexmargin.model.ModeTable;
 import org.flexmargin.model.NotchFilterSpec;
 import org.flexmargin.model.PlausibleRange;
@@ -45,6 +46,7 @@ import org.flexmargin.model.SensorSpec;
 import org.flexmargin.model.ShapeValue;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.model.Strip;
+import org.flexmargin.model.StripPlacement;
 import org.flexmargin.model.StripTheorySpec;
 import org.flexmargin.model.StructureSpec;
 import org.flexmargin.model.SweepPlan;
@@ -103,7 +105,7 @@ public final class CaseReader {
       "pitch_moment_per_elevator_per_rad", "mode_coupling");
   private static final List<String> COUPLING_KEYS = List.of("lift_coefficient_per_unit_coordinate",
       "pitch_moment_coefficient_per_unit_coordinate", "generalized_force_per_alpha_m2",
-      "generalized_force_per_elevator_m2");
+      "generalized_force_per_elevator_m2", "generalized_force_per_pitch_rate_m2");
   private static final List<String> LOOP_KEYS = List.of("actuator", "sensors", "paths",
       "computation_delay_s", "sample_period_s", "pade_order");
   private static final List<String> ACTUATOR_KEYS = List.of("order", "bandwidth_hz", "damping_ratio",
@@ -382,7 +384,9 @@ public final class CaseReader {
         double moment = numberOr(m, "pitch_moment_coefficient_per_unit_coordinate", 0.0, PlausibleRange.COUPLING);
         double fAlpha = numberOr(m, "generalized_force_per_alpha_m2", 0.0, PlausibleRange.COUPLING);
         double fElev = numberOr(m, "generalized_force_per_elevator_m2", 0.0, PlausibleRange.COUPLING);
-        coupling.put(e.getKey(), m.build(() -> new ModeCoupling(lift, moment, fAlpha, fElev)));
+        double fRate = numberOr(m, "generalized_force_per_pitch_rate_m2", 0.0, PlausibleRange.COUPLING);
+        coupling.put(e.getKey(), m.build(
+            () -> new ModeCoupling(lift, moment, fAlpha, fElev, fRate, CouplingOrigin.SUPPLIED)));
       }
     }
     return r.build(() -> new RigidBody(mass, iyy, area, chord, cla, cma, cmq, cmad, cld, cmd, coupling));
@@ -585,7 +589,8 @@ public final class CaseReader {
     List<Strip> strips = new ArrayList<>();
     for (JsonField s : items) {
       s.object("a strip");
-      s.allowOnly(List.of("station", "width_m", "semichord_m", "elastic_axis_a", "lift_slope_per_rad"));
+      s.allowOnly(List.of("station", "width_m", "semichord_m", "elastic_axis_a", "lift_slope_per_rad",
+          "elastic_axis_aft_of_cg_m", "elevator_chord_fraction", "downwash_gradient"));
       JsonField st = s.required("station", "the station name of the strip in the mode table");
       String station = st.text();
       if (!stations.contains(station)) {
@@ -599,9 +604,28 @@ public final class CaseReader {
       double b = s.required("semichord_m", "the local semichord (m)").quantity(PlausibleRange.SEMICHORD);
       double ea = s.required("elastic_axis_a", "the elastic axis aft of mid-chord (semichords)").number();
       double cla = s.required("lift_slope_per_rad", "the lift-curve slope (1/rad)").quantity(PlausibleRange.LIFT_SLOPE);
-      strips.add(s.build(() -> new Strip(station, w, b, ea, cla)));
+      StripPlacement placement = readPlacement(s);
+      strips.add(s.build(() -> new Strip(station, w, b, ea, cla, placement)));
     }
     return f.build(() -> new StripTheorySpec(bRef, strips));
+  }
+
+  /** The strip's optional placement: its position is required once an elevator or downwash is given. */
+  private static StripPlacement readPlacement(JsonField s) {
+    JsonField x = s.optional("elastic_axis_aft_of_cg_m");
+    if (x == null) {
+      for (String k : List.of("elevator_chord_fraction", "downwash_gradient")) {
+        if (s.optional(k) != null) {
+          throw s.optional(k).fail("elastic_axis_aft_of_cg_m beside " + k + " (the strip's position behind the "
+              + "centre of mass, m)", k + " without a position");
+        }
+      }
+      return null;
+    }
+    double pos = x.quantity(PlausibleRange.STRIP_POSITION);
+    double e = numberOr(s, "elevator_chord_fraction", 0.0);
+    double dw = numberOr(s, "downwash_gradient", 0.0);
+    return s.build(() -> new StripPlacement(pos, e, dw));
   }
 
   private static UniformCantileverWing readUniformWing(JsonField w) {

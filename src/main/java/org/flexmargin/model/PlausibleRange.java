@@ -42,6 +42,8 @@ public enum PlausibleRange {
       "semichords of aircraft wings and tails lie between a few millimetres and about ten metres"),
   STRIP_WIDTH("strip.width_m", "m", 0, 500, 0.001, 20, true,
       "a strip is a slice of one lifting surface"),
+  STRIP_POSITION("strip.elastic_axis_aft_of_cg_m", "m", -500, 500, -100, 100, true,
+      "a strip lies on the aircraft, within its length of the centre of mass"),
   LIFT_SLOPE("aero.lift_slope_per_rad", "1/rad", 0, 20, 0.5, 8, true,
       "2 pi per radian is the thin-aerofoil value"),
   FORCE_TABLE_MACH("force_table.mach", "", 0, 5, 0, 0.95, false,

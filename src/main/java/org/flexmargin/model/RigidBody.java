@@ -51,6 +51,16 @@ public record RigidBody(
     modeCoupling = modeCoupling == null ? Map.of() : Map.copyOf(modeCoupling);
   }
 
+  /**
+   * @param coupling the new coupling per mode name
+   * @return this rigid body with another coupling map
+   */
+  public RigidBody withCoupling(Map<String, ModeCoupling> coupling) {
+    return new RigidBody(massKg, pitchInertiaKgM2, referenceAreaM2, referenceChordM, liftSlopePerRad,
+        pitchMomentSlopePerRad, pitchDampingCmq, alphaDotDampingCmAlphaDot, liftPerElevatorPerRad,
+        pitchMomentPerElevatorPerRad, coupling);
+  }
+
   /** @return the coupling of a mode, or {@link ModeCoupling#NONE} */
   public ModeCoupling couplingOf(String mode) {
     return modeCoupling.getOrDefault(mode, ModeCoupling.NONE);

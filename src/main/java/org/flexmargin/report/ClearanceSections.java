@@ -21,6 +21,7 @@ import org.flexmargin.model.ClearanceRequirements;
 import org.flexmargin.model.FrequencyBand;
 import org.flexmargin.model.MarginCell;
 import org.flexmargin.model.SpeedRegime;
+import org.flexmargin.sweep.ModeCouplings;
 import org.flexmargin.sweep.ClearanceResult;
 import org.flexmargin.sweep.ClosedLoopResult;
 import org.flexmargin.sweep.ConfigurationResult;
@@ -393,6 +394,8 @@ public final class ClearanceSections {
         w.element("li", a);
       }
       w.close("ul");
+      result.analysisCase().configurations().stream().filter(k -> k.name().equals(c.configuration())).findFirst()
+          .ifPresent(k -> CouplingTableSection.write(w, ModeCouplings.of(k)));
       w.element("p", "Warnings and remarks:");
       w.open("ul");
       for (String s : cl.warnings()) {

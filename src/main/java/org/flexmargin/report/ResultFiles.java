@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import org.flexmargin.flutter.BranchCurve;
 import org.flexmargin.flutter.DivergenceResult;
@@ -36,6 +37,9 @@ import org.flexmargin.sweep.ClosedLoopRoot;
 import org.flexmargin.sweep.ServoPoint;
 import org.flexmargin.sweep.ServoResult;
 import org.flexmargin.model.InputFile;
+import org.flexmargin.model.InputWarning;
+import org.flexmargin.model.ModeCoupling;
+import org.flexmargin.sweep.ModeCouplings;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Instability;
@@ -76,6 +80,11 @@ public final class ResultFiles {
     for (InputFile f : result.analysisCase().inputs()) {
       inputs.addObject().put("path", f.path()).put("sha256", f.sha256());
     }
+    ArrayNode inputWarnings = root.putArray("input_warnings");
+    for (InputWarning iw : result.analysisCase().warnings()) {
+      inputWarnings.addObject().put("file", iw.file()).put("line", iw.line()).put("field", iw.fieldPath())
+          .put("text", iw.text()).put("message", iw.message());
+    }
     ArrayNode fnd = root.putArray("findings");
     for (Finding f : findings) {
       ObjectNode o = fnd.addObject();
@@ -92,7 +101,12 @@ public final class ResultFiles {
     }
     ArrayNode configs = root.putArray("configurations");
     for (ConfigurationResult c : result.configurations()) {
-      configs.add(configuration(mapper, c, RateSaturation.along(c, result.analysisCase().loop())));
+      ObjectNode co = configuration(mapper, c, RateSaturation.along(c, result.analysisCase().loop()));
+      if (co.get("loop") instanceof ObjectNode lo) {
+        result.analysisCase().configurations().stream().filter(k -> k.name().equals(c.configuration()))
+            .findFirst().ifPresent(k -> modeCoupling(lo.putArray("mode_coupling"), ModeCouplings.of(k)));
+      }
+      configs.add(co);
     }
     Files.writeString(folder.resolve("results.json"), mapper.writeValueAsString(root), StandardCharsets.UTF_8);
     writeFindingsCsv(folder.resolve("findings.csv"), findings);
@@ -208,6 +222,20 @@ public final class ResultFiles {
       num(ro, "frequency_difference_hz", r.frequencyDifferenceHz());
       num(ro, "residual", r.residual());
       ro.put("remark", r.remark());
+    }
+  }
+
+  private static void modeCoupling(ArrayNode out, Map<String, ModeCoupling> couplings) {
+    for (Map.Entry<String, ModeCoupling> e : couplings.entrySet()) {
+      ModeCoupling m = e.getValue();
+      ObjectNode mo = out.addObject();
+      mo.put("mode", e.getKey());
+      mo.put("origin", m.origin().name().toLowerCase(Locale.ROOT));
+      num(mo, "lift_coefficient_per_unit_coordinate", m.liftCoefficientPerUnitCoordinate());
+      num(mo, "pitch_moment_coefficient_per_unit_coordinate", m.pitchMomentCoefficientPerUnitCoordinate());
+      num(mo, "generalized_force_per_alpha_m2", m.generalizedForcePerAlphaM2());
+      num(mo, "generalized_force_per_pitch_rate_m2", m.generalizedForcePerPitchRateM2());
+      num(mo, "generalized_force_per_elevator_m2", m.generalizedForcePerElevatorM2());
     }
   }
 

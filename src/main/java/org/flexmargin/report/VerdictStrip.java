@@ -82,6 +82,7 @@ public final class VerdictStrip {
       w.element("p", "No requirements table in the case: results are reported without pass or fail. Speeds are "
           + "equivalent airspeeds in " + unit.symbol() + ".", "class", "strip-note");
     }
+    InputWarningList.write(w, result.analysisCase().warnings());
     if (!panel.isEmpty()) {
       writePanel(w, panel, req != null);
     }

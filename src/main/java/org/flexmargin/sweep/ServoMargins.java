@@ -2,6 +2,7 @@ package org.flexmargin.sweep;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.flexmargin.aero.StripCoupling;
 import org.flexmargin.ase.AircraftPlant;
 import org.flexmargin.ase.ServoLoop;
 import org.flexmargin.atmosphere.FlightCondition;
@@ -53,7 +54,8 @@ public final class ServoMargins {
   public static ServoLoop loopAt(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       FlightCondition condition) {
     AircraftPlant plant = new AircraftPlant(model.modes(), model.system().structure(), model.loopAero().source(),
-        configuration.rigidBody(), loop.sensors(), condition);
+        StripCoupling.resolve(configuration.rigidBody(), configuration.aero(), model.modes()), loop.sensors(),
+        condition);
     return new ServoLoop(plant, FlightControlLaw.of(loop, condition.dynamicPressurePa()));
   }
 

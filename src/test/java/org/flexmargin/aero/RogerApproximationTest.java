@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
 class RogerApproximationTest {
 
   /** Fitted range, k in [0, 1.5]: reduced frequencies of flutter and of the first elastic modes (docs/validation.md §6). */
-  private static final double K_MAX = 1.5;
+  static final double K_MAX = 1.5;
 
   /**
    * Theodorsen forces of a typical section of semichord 1 m and unit span in the coordinates heave
@@ -26,13 +26,13 @@ class RogerApproximationTest {
    * mid-chord, flat-plate lift slope 2 pi. With a = -0.5 this is the section of Lee, Price &amp;
    * Wong, Prog. Aerosp. Sci. 35 (1999) (from memory; docs/validation.md §5.1).
    */
-  private static StripTheoryAero section(double a) {
+  static StripTheoryAero section(double a) {
     StripTheorySpec spec = new StripTheorySpec(1.0, List.of(new Strip("root", 1.0, 1.0, a, 2 * Math.PI)));
     return new StripTheoryAero(spec, StripTheoryAeroTest.heavePitch("root"));
   }
 
   /** Worst relative element error of a fit against its data on a dense grid of 1501 k in [0, kMax]. */
-  private static double denseError(AeroSource data, RationalFit fit, double kMax) {
+  static double denseError(AeroSource data, RationalFit fit, double kMax) {
     int n = data.size();
     ZMatrixRMaj q = new ZMatrixRMaj(n, n);
     ZMatrixRMaj f = new ZMatrixRMaj(n, n);
@@ -60,7 +60,7 @@ class RogerApproximationTest {
    * Data exactly of Roger's form, evaluated independently with Commons Math complex arithmetic:
    * Q(p) = A0 + A1 p + A2 p^2 + sum_l A_{l+2} p / (p + beta_l).
    */
-  private static final class RogerFormData implements AeroSource {
+  static final class RogerFormData implements AeroSource {
     final double[][][] a;
     final double[] beta;
 

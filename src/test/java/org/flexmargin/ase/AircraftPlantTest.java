@@ -12,6 +12,7 @@ import org.flexmargin.loop.Eigenvalues;
 import org.flexmargin.loop.FrequencyResponse;
 import org.flexmargin.loop.StateSpace;
 import org.flexmargin.model.ElasticMode;
+import org.flexmargin.model.CouplingOrigin;
 import org.flexmargin.model.ModeCoupling;
 import org.flexmargin.model.ModeTable;
 import org.flexmargin.model.RigidBody;
@@ -133,7 +134,8 @@ class AircraftPlantTest {
         new ElasticMode("m1", 4.0, 0.02, 30.0, Map.of("gyro", new ShapeValue(0.1, 0.05), "accel", new ShapeValue(0.3, 0.02))),
         new ElasticMode("m2", 9.0, 0.015, 12.0, Map.of("gyro", new ShapeValue(-0.2, 0.12), "accel", new ShapeValue(0.1, -0.04)))));
     Map<String, ModeCoupling> coupling = Map.of(
-        "m1", new ModeCoupling(0.02, -0.01, 0.5, 0.3), "m2", new ModeCoupling(-0.01, 0.03, -0.2, 0.6));
+        "m1", new ModeCoupling(0.02, -0.01, 0.5, 0.3, 0.7, CouplingOrigin.STRIPS),
+        "m2", new ModeCoupling(-0.01, 0.03, -0.2, 0.6, -0.4, CouplingOrigin.SUPPLIED));
     List<SensorSpec> sensors = List.of(SENSORS.get(0), SENSORS.get(1),
         new SensorSpec("vane", SensorKind.ANGLE_OF_ATTACK_VANE, "gyro", -3.0, 0.0));
     AircraftPlant p = plant(navion(0.1, coupling), modes, aero, sensors);

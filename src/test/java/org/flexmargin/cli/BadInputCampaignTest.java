@@ -33,7 +33,7 @@ class BadInputCampaignTest {
   }
 
   /** Replaces the first {@code from} by {@code to} in {@code file}; returns the 1-based line of the change. */
-  private static int mutate(Path file, String from, String to) throws IOException {
+  static int mutate(Path file, String from, String to) throws IOException {
     String text = Files.readString(file);
     int at = text.indexOf(from);
     assertTrue(at >= 0, "test set-up: <" + from + "> not in " + file);

@@ -1,0 +1,313 @@
+package org.flexmargin.aero;
+
+import java.util.List;
+import java.util.Locale;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
+import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
+import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.flexmargin.model.InvalidInputException;
+
+/**
+ * Karpel's minimum-state rational approximation of generalized aerodynamic forces (M. Karpel,
+ * "Design for active flutter suppression and gust alleviation using state-space aeroelastic
+ * modeling", J. Aircraft 19(3), 1982; survey in Tiffany &amp; Adams, NASA TP-2776, 1988):
+ *
+ * <pre>
+ *   Q(p) ~ A_0 + A_1 p + A_2 p^2 + D (p I - R)^-1 E p,   R = diag(-beta_1 .. -beta_nL),  p = i k on the data
+ * </pre>
+ *
+ * with D n x nL and E nL x n real. The lag term is the sum over l of the rank-one matrix D[:, l]
+ * E[l, :] times p / (p + beta_l), so the fit is held as a {@link RationalFit} in Roger's form with
+ * lag matrices of rank one (form {@link RationalFit#MINIMUM_STATE}) and evaluates like any other
+ * fit; a state-space model of it needs only nL aerodynamic states instead of Roger's nL n.
+ *
+ * <p>Fit: A<sub>0</sub> = Re Q(0) imposed (exact steady forces, as in {@link RogerApproximation});
+ * then alternating least squares (Karpel; Tiffany &amp; Adams): with D fixed the problem is linear in
+ * (A<sub>1</sub>, A<sub>2</sub>, E) and splits by column; with E fixed it is linear in
+ * (A<sub>1</sub>, A<sub>2</sub>, D) and splits by row. Each equation of element (i, j) is weighted
+ * by 1 / max<sub>k</sub> |Q<sub>ij</sub>| (at least 1e-3 of the largest element), so that small
+ * elements are fitted to the same relative accuracy as large ones. D starts from the dominant singular
+ * pairs of a Roger fit with the same lag roots (one unit entry per lag root where that fit is ill-posed). Each half-step cannot increase the weighted residual; iterations stop when it falls by less
+ * than 1e-12 relative, or after {@value #MAX_ITERATIONS}.
+ */
+public final class MinimumStateApproximation {
+
+  /** Most alternating least-squares iterations. */
+  static final int MAX_ITERATIONS = 400;
+  private static final double STOP_RELATIVE_CHANGE = 1e-12;
+  /** Elements smaller than this fraction of the largest are weighted as that size. */
+  private static final double WEIGHT_FLOOR = 1e-3;
+
+  private MinimumStateApproximation() {}
+
+  /**
+   * Fits with the default reduced frequencies and lag roots of {@link RogerApproximation}.
+   *
+   * @param source the data
+   * @param maxReducedFrequency k<sub>max</sub> &gt; 0
+   * @param lagCount nL from 1 to 12
+   * @return the fit
+   */
+  public static RationalFit fit(AeroSource source, double maxReducedFrequency, int lagCount) {
+    return fit(source, RogerApproximation.defaultReducedFrequencies(maxReducedFrequency, RogerApproximation.DEFAULT_POINTS),
+        RogerApproximation.defaultLagRoots(maxReducedFrequency, lagCount), RogerApproximation.DEFAULT_ERROR_THRESHOLD);
+  }
+
+  /**
+   * Fits the minimum-state form to {@code source} sampled at {@code reducedFrequencies}.
+   *
+   * @param source the data to fit
+   * @param reducedFrequencies k values, &ge; 0, finite, strictly increasing, enough non-zero ones for
+   *     the unknowns of one column: ceil((2 n + nL) / 2) + 1 for n coordinates
+   * @param lagRoots &beta;<sub>l</sub> &gt; 0, distinct, at least one
+   * @param errorThreshold relative element error above which the fit is flagged
+   * @return the fit, its errors and warnings
+   * @throws InvalidInputException {@code rfa.reduced_frequencies}, {@code rfa.lag_roots}, {@code
+   *     rfa.error_threshold}
+   */
+  public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
+      double errorThreshold) {
+    if (source == null) {
+      throw new InvalidInputException("rfa.source", "aerodynamic data", "none");
+    }
+    double[] ks = RogerApproximation.checkedFrequencies(reducedFrequencies);
+    double[] lags = RationalFit.checkedLagRoots("rfa.lag_roots", lagRoots);
+    if (lags.length == 0) {
+      throw new InvalidInputException("rfa.lag_roots", "at least one lag root for a minimum-state fit", "none");
+    }
+    if (!(errorThreshold > 0) || Double.isInfinite(errorThreshold)) {
+      throw new InvalidInputException("rfa.error_threshold", "a finite value > 0", String.valueOf(errorThreshold));
+    }
+    int n = source.size();
+    int nl = lags.length;
+    int positive = 0;
+    for (double k : ks) {
+      positive += k > 0 ? 1 : 0;
+    }
+    int needed = (2 * n + nl + 1) / 2 + 1;
+    if (positive < needed) {
+      throw new InvalidInputException("rfa.reduced_frequencies",
+          "at least " + needed + " values above 0 for " + n + " coordinates and " + nl + " lag roots",
+          positive + " values above 0");
+    }
+    List<String> warnings = RogerApproximation.rangeWarnings(source, ks);
+    double[][] a0 = RogerApproximation.steadyForces(source);
+    double[][] data = RogerApproximation.sampled(source, ks);
+    Problem pr = new Problem(n, ks, lags, a0, data);
+    double[][] d = pr.initialD(source, errorThreshold, lags);
+    double[][] e = new double[nl][n];
+    double[][] a1 = new double[n][n];
+    double[][] a2 = new double[n][n];
+    double last = Double.POSITIVE_INFINITY;
+    for (int it = 0; it < MAX_ITERATIONS; it++) {
+      pr.solveColumns(d, a1, a2, e);
+      double r = pr.solveRows(e, a1, a2, d);
+      if (last - r <= STOP_RELATIVE_CHANGE * last) {
+        break;
+      }
+      last = r;
+    }
+    double[][][] coefficients = new double[nl + 3][][];
+    coefficients[0] = a0;
+    coefficients[1] = a1;
+    coefficients[2] = a2;
+    for (int l = 0; l < nl; l++) {
+      double[][] m = new double[n][n];
+      for (int i = 0; i < n; i++) {
+        for (int j = 0; j < n; j++) {
+          m[i][j] = d[i][l] * e[l][j];
+        }
+      }
+      coefficients[l + 3] = m;
+    }
+    return RogerApproximation.measured(source, lags, coefficients, ks, data, errorThreshold, warnings,
+        RationalFit.MINIMUM_STATE);
+  }
+
+  /** The weighted least-squares data: Q(ik) - A0 and the lag functions p / (p + beta). */
+  private static final class Problem {
+    private final int n;
+    private final int nk;
+    private final int nl;
+    private final double[] ks;
+    /** lag function l at k r: re, im of ik / (ik + beta_l). */
+    private final double[][] lagRe;
+    private final double[][] lagIm;
+    /** target (Q - A0) at k r for element (i, j): re, im. */
+    private final double[][][] targetRe;
+    private final double[][][] targetIm;
+    private final double[][] weight;
+
+    Problem(int n, double[] ks, double[] lags, double[][] a0, double[][] data) {
+      this.n = n;
+      this.nk = ks.length;
+      this.nl = lags.length;
+      this.ks = ks;
+      lagRe = new double[nk][nl];
+      lagIm = new double[nk][nl];
+      for (int r = 0; r < nk; r++) {
+        double k = ks[r];
+        for (int l = 0; l < nl; l++) {
+          double den = k * k + lags[l] * lags[l];
+          lagRe[r][l] = k * k / den;
+          lagIm[r][l] = k * lags[l] / den;
+        }
+      }
+      targetRe = new double[nk][n][n];
+      targetIm = new double[nk][n][n];
+      weight = new double[n][n];
+      for (int r = 0; r < nk; r++) {
+        for (int i = 0; i < n; i++) {
+          for (int j = 0; j < n; j++) {
+            int idx = 2 * (i * n + j);
+            targetRe[r][i][j] = data[r][idx] - a0[i][j];
+            targetIm[r][i][j] = data[r][idx + 1];
+            weight[i][j] = Math.max(weight[i][j], Math.hypot(data[r][idx], data[r][idx + 1]));
+          }
+        }
+      }
+      double largest = 0;
+      for (int i = 0; i < n; i++) {
+        for (int j = 0; j < n; j++) {
+          weight[i][j] = Math.max(weight[i][j], Math.abs(a0[i][j]));
+          largest = Math.max(largest, weight[i][j]);
+        }
+      }
+      // elements below 1e-3 of the largest are weighted as if they were that size: a relative fit
+      // of an element that is round-off would spoil the others
+      for (int i = 0; i < n; i++) {
+        for (int j = 0; j < n; j++) {
+          double size = Math.max(weight[i][j], WEIGHT_FLOOR * largest);
+          weight[i][j] = size > 0 ? 1 / size : 1.0;
+        }
+      }
+    }
+
+    /**
+     * Start: D[:, l] = sigma u of the dominant singular pair of lag matrix l of a Roger fit with the
+     * same lag roots; where that fit is ill-posed (many close lag roots), the usual unit pattern
+     * D[i, l] = 1 for i = l mod n (Tiffany &amp; Adams).
+     */
+    double[][] initialD(AeroSource source, double errorThreshold, double[] lags) {
+      double[][] d = new double[n][nl];
+      RationalFit roger;
+      try {
+        roger = RogerApproximation.fit(source, ks, lags, errorThreshold);
+      } catch (InvalidInputException e) {
+        for (int l = 0; l < nl; l++) {
+          d[l % n][l] = 1;
+        }
+        return d;
+      }
+      SingularValueDecomposition_F64<DMatrixRMaj> svd = DecompositionFactory_DDRM.svd(n, n, true, false, false);
+      for (int l = 0; l < nl; l++) {
+        if (!svd.decompose(new DMatrixRMaj(roger.matrix(l + 3)))) {
+          throw new ArithmeticException("singular value decomposition failed");
+        }
+        DMatrixRMaj u = svd.getU(null, false);
+        double[] sv = svd.getSingularValues();
+        int best = 0;
+        for (int s = 1; s < svd.numberOfSingularValues(); s++) {
+          best = sv[s] > sv[best] ? s : best;
+        }
+        for (int i = 0; i < n; i++) {
+          d[i][l] = sv[best] > 0 ? sv[best] * u.get(i, best) : (i == l % n ? 1 : 0);
+        }
+      }
+      return d;
+    }
+
+    /**
+     * With D fixed, per column j: unknowns A1[:, j], A2[:, j], E[:, j].
+     */
+    void solveColumns(double[][] d, double[][] a1, double[][] a2, double[][] e) {
+      int unknowns = 2 * n + nl;
+      LinearSolverDense<DMatrixRMaj> ls = LinearSolverFactory_DDRM.leastSquares(2 * nk * n, unknowns);
+      for (int j = 0; j < n; j++) {
+        DMatrixRMaj a = new DMatrixRMaj(2 * nk * n, unknowns);
+        DMatrixRMaj b = new DMatrixRMaj(2 * nk * n, 1);
+        for (int r = 0; r < nk; r++) {
+          double k = ks[r];
+          for (int i = 0; i < n; i++) {
+            double w = weight[i][j];
+            int re = 2 * (r * n + i);
+            a.set(re, n + i, -k * k * w); // A2[i][j]
+            a.set(re + 1, i, k * w); // A1[i][j]
+            for (int l = 0; l < nl; l++) {
+              a.set(re, 2 * n + l, d[i][l] * lagRe[r][l] * w);
+              a.set(re + 1, 2 * n + l, d[i][l] * lagIm[r][l] * w);
+            }
+            b.set(re, 0, targetRe[r][i][j] * w);
+            b.set(re + 1, 0, targetIm[r][i][j] * w);
+          }
+        }
+        DMatrixRMaj x = solve(ls, a, b, unknowns);
+        for (int i = 0; i < n; i++) {
+          a1[i][j] = x.get(i);
+          a2[i][j] = x.get(n + i);
+        }
+        for (int l = 0; l < nl; l++) {
+          e[l][j] = x.get(2 * n + l);
+        }
+      }
+    }
+
+    /**
+     * With E fixed, per row i: unknowns A1[i, :], A2[i, :], D[i, :].
+     *
+     * @return the weighted residual sum of squares after the step
+     */
+    double solveRows(double[][] e, double[][] a1, double[][] a2, double[][] d) {
+      int unknowns = 2 * n + nl;
+      LinearSolverDense<DMatrixRMaj> ls = LinearSolverFactory_DDRM.leastSquares(2 * nk * n, unknowns);
+      double residual = 0;
+      for (int i = 0; i < n; i++) {
+        DMatrixRMaj a = new DMatrixRMaj(2 * nk * n, unknowns);
+        DMatrixRMaj b = new DMatrixRMaj(2 * nk * n, 1);
+        for (int r = 0; r < nk; r++) {
+          double k = ks[r];
+          for (int j = 0; j < n; j++) {
+            double w = weight[i][j];
+            int re = 2 * (r * n + j);
+            a.set(re, n + j, -k * k * w);
+            a.set(re + 1, j, k * w);
+            for (int l = 0; l < nl; l++) {
+              a.set(re, 2 * n + l, e[l][j] * lagRe[r][l] * w);
+              a.set(re + 1, 2 * n + l, e[l][j] * lagIm[r][l] * w);
+            }
+            b.set(re, 0, targetRe[r][i][j] * w);
+            b.set(re + 1, 0, targetIm[r][i][j] * w);
+          }
+        }
+        DMatrixRMaj x = solve(ls, a.copy(), b, unknowns);
+        for (int j = 0; j < n; j++) {
+          a1[i][j] = x.get(j);
+          a2[i][j] = x.get(n + j);
+        }
+        for (int l = 0; l < nl; l++) {
+          d[i][l] = x.get(2 * n + l);
+        }
+        DMatrixRMaj fitted = new DMatrixRMaj(b.numRows, 1);
+        org.ejml.dense.row.CommonOps_DDRM.mult(a, x, fitted);
+        for (int row = 0; row < b.numRows; row++) {
+          double diff = fitted.get(row) - b.get(row);
+          residual += diff * diff;
+        }
+      }
+      return residual;
+    }
+
+    private static DMatrixRMaj solve(LinearSolverDense<DMatrixRMaj> ls, DMatrixRMaj a, DMatrixRMaj b, int unknowns) {
+      DMatrixRMaj x = new DMatrixRMaj(unknowns, 1);
+      if (!ls.setA(a)) {
+        throw new InvalidInputException("rfa.lag_roots",
+            "lag roots far enough apart for the fitted reduced frequencies (well-posed least squares)",
+            String.format(Locale.ROOT, "a rank-deficient minimum-state step (quality %.3g)", ls.quality()));
+      }
+      ls.solve(b, x);
+      return x;
+    }
+  }
+}
