@@ -179,7 +179,8 @@ public final class LoopResponseCharts {
   /**
    * @param result the sweep
    * @param c one configuration
-   * @return the speeds at which to draw the loop, ascending, without near-duplicates
+   * @return the speeds at which to draw the loop, ascending; a speed chosen for two reasons is
+   *     drawn once with both in its label
    */
   public static List<ChosenSpeed> chosenSpeeds(SweepResult result, ConfigurationResult c) {
     double[] r = FlutterCharts.easRange(result);
@@ -213,8 +214,11 @@ public final class LoopResponseCharts {
     if (s.speedEasMps() < range[0] - 1e-9 || s.speedEasMps() > range[1] + 1e-9) {
       return;
     }
-    for (ChosenSpeed o : out) {
+    for (int i = 0; i < out.size(); i++) {
+      ChosenSpeed o = out.get(i);
       if (Math.abs(o.speedEasMps() - s.speedEasMps()) < 1e-6 * Math.max(1, s.speedEasMps())) {
+        // one curve, both reasons in its label (e.g. "V0max, worst loop check")
+        out.set(i, new ChosenSpeed(o.label() + ", " + s.label(), o.speedEasMps()));
         return;
       }
     }
