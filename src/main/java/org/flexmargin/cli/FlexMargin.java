@@ -21,7 +21,7 @@ import picocli.CommandLine.Command;
           + "tests, flight flutter testing and the approval of the airworthiness authority."
     },
     subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
-        SimulateCommand.class,
+        SimulateCommand.class, CampaignCommand.class,
         CommandLine.HelpCommand.class},
     footer = {
       "",

@@ -50,7 +50,8 @@ final class Schemas {
     MODE_TABLE("mode-table.schema.json"),
     FORCE_TABLE("force-table.schema.json"),
     REQUIREMENTS("requirements.schema.json"),
-    FILTERS("filters.schema.json");
+    FILTERS("filters.schema.json"),
+    CAMPAIGN("campaign.schema.json");
 
     private final String file;
 
