@@ -10,7 +10,7 @@ import java.nio.file.Path;
  * requirements, swept on 6 points. Its divergence speed scales exactly with the torsion frequency
  * (q_D proportional to the stiffness, V_D EAS to its square root).
  */
-final class TinyCampaign {
+public final class TinyCampaign {
   private TinyCampaign() {}
 
   /**
@@ -18,7 +18,7 @@ final class TinyCampaign {
    *
    * @return the campaign file
    */
-  static Path write(Path dir, int samples, double sigma, long seed) throws IOException {
+  public static Path write(Path dir, int samples, double sigma, long seed) throws IOException {
     Files.writeString(dir.resolve("torsion.json"), """
         {"format": 1, "name": "torsion", "description": "test section, invented",
          "modes": [{"name": "torsion", "frequency_hz": 10.0, "damping_ratio": 0.01, "generalized_mass_kg": 1.0,

@@ -50,12 +50,14 @@ public final class SparkEngine {
     if (!conf.contains("spark.master")) {
       conf.setMaster("local[*]");
     }
-    if (conf.get("spark.master").startsWith("local") && !conf.contains("spark.driver.host")) {
-      // local mode: stay on the loopback interface, whatever the host name resolves to
-      conf.set("spark.driver.host", "127.0.0.1").set("spark.driver.bindAddress", "127.0.0.1");
-    }
-    if (!conf.contains("spark.ui.enabled")) {
-      conf.set("spark.ui.enabled", "false");
+    if (conf.get("spark.master").startsWith("local")) {
+      // local mode: loopback interface whatever the host name resolves to, no web UI, no shuffle fan-out
+      for (String[] kv : new String[][] {{"spark.driver.host", "127.0.0.1"}, {"spark.driver.bindAddress", "127.0.0.1"},
+          {"spark.ui.enabled", "false"}, {"spark.sql.shuffle.partitions", "1"}}) {
+        if (!conf.contains(kv[0])) {
+          conf.set(kv[0], kv[1]);
+        }
+      }
     }
     SparkSession spark = SparkSession.builder().config(conf).getOrCreate();
     try {
