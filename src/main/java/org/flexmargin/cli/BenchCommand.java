@@ -37,13 +37,14 @@ import picocli.CommandLine.Spec;
 @Command(name = "bench", mixinStandardHelpOptions = true,
     description = {"Print timing figures: p-k sweep (10 and 30 modes, 200 speeds), closed-loop "
         + "eigenvalues (about 150 and 300 states, 200 speeds), broken-loop frequency response "
-        + "(2000 frequencies x 200 speeds, 20 and 40 modes: direct, Hessenberg, dense)."},
+        + "(2000 frequencies x 200 speeds, 20 and 40 modes: direct, Hessenberg, dense), doublet-lattice "
+        + "influence matrix and LU (1,000 boxes)."},
     footer = {"", "Examples:", "  flexmargin bench", "  flexmargin bench pk --modes 10,30",
         "  flexmargin bench closed-loop", "  flexmargin bench loop-response --speeds 50"})
 final class BenchCommand implements Callable<Integer> {
   @Parameters(index = "0", arity = "0..1", defaultValue = "all",
-      description = "Which benchmark: pk, closed-loop, loop-response or all (default); campaign (per-sample cost "
-          + "of a demo-sized campaign; not part of all).")
+      description = "Which benchmark: pk, closed-loop, loop-response, lattice or all (default); campaign "
+          + "(per-sample cost of a demo-sized campaign; not part of all).")
   String which = "all";
 
   @Option(names = "--modes", split = ",", description = "p-k mode counts. Default: ${DEFAULT-VALUE}.")
@@ -75,6 +76,9 @@ final class BenchCommand implements Callable<Integer> {
     if (which.equals("all") || which.equals("loop-response")) {
       loopResponse(out, 20);
       loopResponse(out, 40);
+    }
+    if (which.equals("all") || which.equals("lattice")) {
+      LatticeBench.run(out, repeats);
     }
     if (which.equals("campaign")) {
       CampaignBench.run(out, repeats);

@@ -42,4 +42,15 @@ final class BenchScenario {
         new FeedbackPath("accel", 0.05, 0.0, List.of(), null));
     return new LoopSpec(new ActuatorSpec(ActuatorOrder.SECOND, 12.0, 0.7), sensors, paths, 0.01, 0.0125, 2);
   }
+
+  /**
+   * Doublet-lattice timing wing: a flat rectangular wing of 1 m chord and 10 m span, 1 m of sweep
+   * at the tip, no mirror image, {@code chordwise} x {@code spanwise} boxes.
+   */
+  static org.flexmargin.lattice.BoxLattice latticeWing(int chordwise, int spanwise) {
+    org.flexmargin.model.LiftingSurface wing = new org.flexmargin.model.LiftingSurface("wing",
+        new org.flexmargin.model.SurfacePoint(0, 0, 0), 1.0,
+        new org.flexmargin.model.SurfacePoint(1.0, 10.0, 0), 1.0, chordwise, spanwise);
+    return new org.flexmargin.lattice.BoxLattice(List.of(wing), org.flexmargin.model.FlowSymmetry.NONE);
+  }
 }

@@ -1,5 +1,6 @@
 package org.flexmargin.lattice;
 
+import java.util.stream.IntStream;
 import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.model.FlowSymmetry;
 
@@ -28,11 +29,15 @@ import org.flexmargin.model.FlowSymmetry;
  */
 public final class InfluenceMatrix {
   private static final double PLANAR = 1e-3;
+  /** Rows per parallel task. */
+  private static final int ROW_BLOCK = 8;
 
   private InfluenceMatrix() {}
 
   /**
-   * Builds D(k, M).
+   * Builds D(k, M). Rows are built in parallel in blocks (the common fork-join pool, or the pool
+   * the caller runs in); each row is computed independently, so the result does not depend on the
+   * number of threads.
    *
    * @param lattice the boxes
    * @param omegaOverU omega / U = k / b_ref (rad/m), &gt;= 0
@@ -49,98 +54,202 @@ public final class InfluenceMatrix {
     int n = lattice.size();
     out.reshape(n, n);
     double[] d = out.data;
-    java.util.Arrays.fill(d, 0, 2 * n * n, 0.0);
-    FlowSymmetry sym = lattice.symmetry();
-    Workspace ws = new Workspace();
-    for (int j = 0; j < n; j++) {
-      ws.sender(lattice, j, false);
-      addSender(lattice, j, omegaOverU, mach, 1.0, ws, d);
-      if (sym != FlowSymmetry.NONE) {
-        ws.sender(lattice, j, true);
-        addSender(lattice, j, omegaOverU, mach, sym == FlowSymmetry.SYMMETRIC ? 1.0 : -1.0, ws, d);
+    Senders senders = new Senders(lattice, omegaOverU, mach);
+    int blocks = (n + ROW_BLOCK - 1) / ROW_BLOCK;
+    IntStream.range(0, blocks).parallel().forEach(b -> {
+      Workspace w = new Workspace(senders.count);
+      for (int i = b * ROW_BLOCK; i < Math.min(n, (b + 1) * ROW_BLOCK); i++) {
+        java.util.Arrays.fill(d, 2 * i * n, 2 * (i + 1) * n, 0.0);
+        for (int t = 0; t < senders.count; t++) {
+          addPair(lattice, i, senders, senders.order[t], omegaOverU, mach, w, d);
+        }
+      }
+    });
+  }
+
+  /**
+   * Geometry of every sending doublet line (the boxes, then their mirror images if the flow has a
+   * symmetry), computed once per matrix: end points (x already divided by beta for the
+   * horseshoe), midpoint, half-span, sweep, dihedral, chord, the sign of the image's load, and
+   * exp(i omega eta tan(sweep) / U) at the five points eta = -e, -e/2, 0, e/2, e of the quartic.
+   *
+   * <p>Spanwise neighbours share a point: the outboard end of one doublet line is the inboard end
+   * of the next (same coordinates, same plane, same half-span). {@code previous[s]} names the
+   * sender whose outboard end is the inboard end of s (or -1), and {@code order} visits every such
+   * predecessor first, so that the kernel at that point is evaluated once per receiver: four
+   * evaluations per box pair instead of five.
+   */
+  private static final class Senders {
+    final int count;
+    final int[] column, previous, order;
+    final double[] ax, ay, az, bx, by, bz, mx, my, mz, e, tanL, cg, sg, chord, sign, shift;
+
+    Senders(BoxLattice l, double omegaOverU, double mach) {
+      int n = l.size();
+      count = l.symmetry() == FlowSymmetry.NONE ? n : 2 * n;
+      double imageSign = l.symmetry() == FlowSymmetry.ANTISYMMETRIC ? -1 : 1;
+      double beta = Math.sqrt(1 - mach * mach);
+      column = new int[count];
+      ax = new double[count]; ay = new double[count]; az = new double[count];
+      bx = new double[count]; by = new double[count]; bz = new double[count];
+      mx = new double[count]; my = new double[count]; mz = new double[count];
+      e = new double[count]; tanL = new double[count]; cg = new double[count];
+      sg = new double[count]; chord = new double[count]; sign = new double[count];
+      shift = new double[10 * count];
+      for (int s = 0; s < count; s++) {
+        int j = s % n;
+        boolean image = s >= n;
+        column[s] = j;
+        if (image) {
+          // the mirror of A -> B runs from the image of B to the image of A (inboard to outboard)
+          ax[s] = l.bx[j]; ay[s] = -l.by[j]; az[s] = l.bz[j];
+          bx[s] = l.ax[j]; by[s] = -l.ay[j]; bz[s] = l.az[j];
+          sg[s] = -l.sinG[j];
+          sign[s] = imageSign;
+        } else {
+          ax[s] = l.ax[j]; ay[s] = l.ay[j]; az[s] = l.az[j];
+          bx[s] = l.bx[j]; by[s] = l.by[j]; bz[s] = l.bz[j];
+          sg[s] = l.sinG[j];
+          sign[s] = 1;
+        }
+        cg[s] = l.cosG[j];
+        chord[s] = l.chord[j];
+        mx[s] = 0.5 * (ax[s] + bx[s]); my[s] = 0.5 * (ay[s] + by[s]); mz[s] = 0.5 * (az[s] + bz[s]);
+        e[s] = 0.5 * Math.hypot(by[s] - ay[s], bz[s] - az[s]);
+        tanL[s] = (bx[s] - ax[s]) / (2 * e[s]);
+        ax[s] /= beta;
+        bx[s] /= beta;
+        for (int q = 0; q < 5; q++) {
+          double a = omegaOverU * (q - 2) * 0.5 * e[s] * tanL[s];
+          shift[10 * s + 2 * q] = Math.cos(a);
+          shift[10 * s + 2 * q + 1] = Math.sin(a);
+        }
+      }
+      previous = new int[count];
+      order = new int[count];
+      link();
+    }
+
+    /** Sets {@link #previous} and {@link #order} (see the class comment). */
+    private void link() {
+      java.util.Map<java.util.List<Double>, Integer> byOutboardEnd = new java.util.HashMap<>();
+      java.util.Set<java.util.List<Double>> shared = new java.util.HashSet<>();
+      for (int s = 0; s < count; s++) {
+        java.util.List<Double> key = java.util.List.of(bx[s], by[s], bz[s], cg[s], sg[s], e[s]);
+        if (byOutboardEnd.putIfAbsent(key, s) != null) {
+          shared.add(key);
+        }
+      }
+      int[] next = new int[count];
+      java.util.Arrays.fill(next, -1);
+      for (int s = 0; s < count; s++) {
+        java.util.List<Double> key = java.util.List.of(ax[s], ay[s], az[s], cg[s], sg[s], e[s]);
+        Integer p = shared.contains(key) ? null : byOutboardEnd.get(key);
+        previous[s] = p == null || p == s ? -1 : p;
+        if (previous[s] >= 0) {
+          next[previous[s]] = s;
+        }
+      }
+      int t = 0;
+      for (int s = 0; s < count; s++) {
+        if (previous[s] < 0) {
+          for (int c = s; c >= 0; c = next[c]) {
+            order[t++] = c;
+          }
+        }
+      }
+      if (t != count) {
+        // a closed chain (not possible for trapezoids, which have an inboard end): no sharing
+        java.util.Arrays.fill(previous, -1);
+        for (int s = 0; s < count; s++) {
+          order[s] = s;
+        }
       }
     }
   }
 
-  /** Per-sender geometry and scratch, reused over the receivers. */
+  /** Scratch of one thread. */
   private static final class Workspace {
-    double ax, ay, az, bx, by, bz, mx, my, mz, e, tanL, cg, sg, chord;
-    final double[] k = new double[8];
+    /** kernel numerators {re P1, im P1, re P2, im P2} at the outboard end of each sender. */
+    final double[] outboard;
+    final double[] k = new double[24];
     final double[] p1 = new double[10];
     final double[] p2 = new double[10];
     final double[] f = new double[5];
     final double[] g = new double[5];
     final double[] c = new double[10];
 
-    void sender(BoxLattice l, int j, boolean image) {
-      if (image) {
-        ax = l.bx[j]; ay = -l.by[j]; az = l.bz[j];
-        bx = l.ax[j]; by = -l.ay[j]; bz = l.az[j];
-        sg = -l.sinG[j];
-      } else {
-        ax = l.ax[j]; ay = l.ay[j]; az = l.az[j];
-        bx = l.bx[j]; by = l.by[j]; bz = l.bz[j];
-        sg = l.sinG[j];
-      }
-      cg = l.cosG[j];
-      chord = l.chord[j];
-      mx = 0.5 * (ax + bx); my = 0.5 * (ay + by); mz = 0.5 * (az + bz);
-      e = 0.5 * Math.hypot(by - ay, bz - az);
-      tanL = (bx - ax) / (2 * e);
+    Workspace(int senders) {
+      outboard = new double[4 * senders];
     }
   }
 
-  private static void addSender(
-      BoxLattice l, int j, double kbar, double mach, double sign, Workspace w, double[] d) {
+  /** Adds the normalwash at receiver i of sender s to D[i][column of s]. */
+  private static void addPair(
+      BoxLattice l, int i, Senders sd, int s, double kbar, double mach, Workspace w, double[] d) {
     int n = l.size();
     double beta = Math.sqrt(1 - mach * mach);
-    double steadyScale = sign * w.chord / 2;
-    // the kernel integrals are normalwash positive down; this class uses positive up
-    double incScale = -sign * w.chord / (8 * Math.PI);
-    for (int i = 0; i < n; i++) {
-      double px = l.cx[i], py = l.cy[i], pz = l.cz[i];
-      double nY = -l.sinG[i], nZ = l.cosG[i];
-      double v = horseshoeNormalwash(w, px / beta, py, pz, nY, nZ, beta);
-      int idx = 2 * (i * n + j);
-      d[idx] += steadyScale * v;
-      if (kbar == 0) {
-        continue;
-      }
-      // receiving point in the sender's local frame
-      double dx = px - w.mx, dy = py - w.my, dz = pz - w.mz;
-      double yb = dy * w.cg + dz * w.sg;
-      double zb = -dy * w.sg + dz * w.cg;
-      double cosDg = l.cosG[i] * w.cg + l.sinG[i] * w.sg;
-      double sinDg = l.sinG[i] * w.cg - l.cosG[i] * w.sg;
-      boolean planar = Math.abs(zb) < PLANAR * w.e;
-      if (planar) {
-        zb = 0;
-      }
-      for (int q = 0; q < 5; q++) {
-        double eta = (q - 2) * 0.5 * w.e;
-        IncrementalKernel.evaluate(dx - eta * w.tanL, yb - eta, zb, cosDg, sinDg, kbar, mach, w.k);
-        w.p1[2 * q] = w.k[0];
-        w.p1[2 * q + 1] = w.k[1];
-        w.p2[2 * q] = w.k[2];
-        w.p2[2 * q + 1] = w.k[3];
-      }
-      lineIntegrals(yb, zb, w.e, planar, w.f, w.g);
-      double re = 0, im = 0;
-      quartic(w.p1, w.e, w.c);
-      for (int m = 0; m < 5; m++) {
-        re += w.c[2 * m] * w.f[m];
-        im += w.c[2 * m + 1] * w.f[m];
-      }
-      if (!planar) {
-        quartic(w.p2, w.e, w.c);
-        for (int m = 0; m < 5; m++) {
-          re += w.c[2 * m] * w.g[m];
-          im += w.c[2 * m + 1] * w.g[m];
-        }
-      }
-      d[idx] += incScale * re;
-      d[idx + 1] += incScale * im;
+    double sign = sd.sign[s];
+    double px = l.cx[i], py = l.cy[i], pz = l.cz[i];
+    double nY = -l.sinG[i], nZ = l.cosG[i];
+    double v = horseshoeNormalwash(sd, s, px / beta, py, pz, nY, nZ);
+    int idx = 2 * (i * n + sd.column[s]);
+    double chord = sd.chord[s];
+    d[idx] += sign * chord / 2 * v;
+    if (kbar == 0) {
+      return;
     }
+    // receiving point in the sender's local frame
+    double cg = sd.cg[s], sg = sd.sg[s], e = sd.e[s], tanL = sd.tanL[s];
+    double dx = px - sd.mx[s], dy = py - sd.my[s], dz = pz - sd.mz[s];
+    double yb = dy * cg + dz * sg;
+    double zb = -dy * sg + dz * cg;
+    double cosDg = l.cosG[i] * cg + l.sinG[i] * sg;
+    double sinDg = l.sinG[i] * cg - l.cosG[i] * sg;
+    boolean planar = Math.abs(zb) < PLANAR * e;
+    if (planar) {
+      zb = 0;
+    }
+    // exp(-i kbar x0) at the midpoint; at eta it is that times exp(i kbar eta tanL)
+    double mr = Math.cos(kbar * dx), mi = -Math.sin(kbar * dx);
+    int prev = sd.previous[s];
+    for (int q = 0; q < 5; q++) {
+      double[] src = w.k;
+      int at = 0;
+      if (q == 0 && prev >= 0) {
+        // the inboard end is the outboard end of the previous sender, evaluated just before
+        src = w.outboard;
+        at = 4 * prev;
+      } else {
+        double eta = (q - 2) * 0.5 * e;
+        double sr = sd.shift[10 * s + 2 * q], si = sd.shift[10 * s + 2 * q + 1];
+        IncrementalKernel.evaluate(dx - eta * tanL, yb - eta, zb, cosDg, sinDg, kbar, mach,
+            mr * sr - mi * si, mr * si + mi * sr, w.k);
+      }
+      w.p1[2 * q] = src[at];
+      w.p1[2 * q + 1] = src[at + 1];
+      w.p2[2 * q] = src[at + 2];
+      w.p2[2 * q + 1] = src[at + 3];
+    }
+    System.arraycopy(w.k, 0, w.outboard, 4 * s, 4);
+    lineIntegrals(yb, zb, e, planar, w.f, w.g);
+    double re = 0, im = 0;
+    quartic(w.p1, e, w.c);
+    for (int m = 0; m < 5; m++) {
+      re += w.c[2 * m] * w.f[m];
+      im += w.c[2 * m + 1] * w.f[m];
+    }
+    if (!planar) {
+      quartic(w.p2, e, w.c);
+      for (int m = 0; m < 5; m++) {
+        re += w.c[2 * m] * w.g[m];
+        im += w.c[2 * m + 1] * w.g[m];
+      }
+    }
+    // the kernel integrals are normalwash positive down; this class uses positive up
+    double incScale = -sign * chord / (8 * Math.PI);
+    d[idx] += incScale * re;
+    d[idx + 1] += incScale * im;
   }
 
   /**
@@ -193,21 +302,22 @@ public final class InfluenceMatrix {
 
   /**
    * Normalwash n . v at (px, py, pz) (x already divided by beta) of a unit-circulation horseshoe:
-   * bound vortex A -> B, trailing legs along +x.
+   * bound vortex A -> B of sender s, trailing legs along +x.
    */
   private static double horseshoeNormalwash(
-      Workspace w, double px, double py, double pz, double nY, double nZ, double beta) {
-    double ax = w.ax / beta, bx = w.bx / beta;
+      Senders sd, int s, double px, double py, double pz, double nY, double nZ) {
+    double ax = sd.ax[s], ay = sd.ay[s], az = sd.az[s];
+    double bx = sd.bx[s], by = sd.by[s], bz = sd.bz[s];
     // bound segment A -> B
-    double r1x = px - ax, r1y = py - w.ay, r1z = pz - w.az;
-    double r2x = px - bx, r2y = py - w.by, r2z = pz - w.bz;
+    double r1x = px - ax, r1y = py - ay, r1z = pz - az;
+    double r2x = px - bx, r2y = py - by, r2z = pz - bz;
     double cxv = r1y * r2z - r1z * r2y, cyv = r1z * r2x - r1x * r2z, czv = r1x * r2y - r1y * r2x;
     double c2 = cxv * cxv + cyv * cyv + czv * czv;
     double vy = 0, vz = 0;
     double n1 = Math.sqrt(r1x * r1x + r1y * r1y + r1z * r1z);
     double n2 = Math.sqrt(r2x * r2x + r2y * r2y + r2z * r2z);
     if (c2 > 1e-24 * n1 * n1 * n2 * n2) {
-      double r0x = bx - ax, r0y = w.by - w.ay, r0z = w.bz - w.az;
+      double r0x = bx - ax, r0y = by - ay, r0z = bz - az;
       double dot = r0x * (r1x / n1 - r2x / n2) + r0y * (r1y / n1 - r2y / n2) + r0z * (r1z / n1 - r2z / n2);
       double f = dot / (4 * Math.PI * c2);
       vy += f * cyv;
