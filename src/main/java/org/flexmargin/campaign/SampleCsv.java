@@ -2,6 +2,7 @@ package org.flexmargin.campaign;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.flexmargin.io.CsvLine;
 
 /**
  * The per-sample result files: one line per sample ({@code samples.csv}) and one line per sample
@@ -66,7 +67,7 @@ public final class SampleCsv {
    * @throws IllegalArgumentException if the line is not one this campaign writes
    */
   public SampleOutcome parse(String line, List<String> margins) {
-    List<String> f = split(line);
+    List<String> f = CsvLine.split(line, "samples.csv", 0);
     int np = plan.spec().parameters().size();
     if (f.size() != 14 + np) {
       throw new IllegalArgumentException("expected " + (14 + np) + " fields, found " + f.size());
@@ -107,36 +108,5 @@ public final class SampleCsv {
 
   static String quote(String s) {
     return "\"" + s.replace("\"", "\"\"") + "\"";
-  }
-
-  /** Splits one CSV line (RFC 4180 quoting, no line breaks inside fields). */
-  static List<String> split(String line) {
-    List<String> out = new ArrayList<>();
-    StringBuilder cur = new StringBuilder();
-    boolean quoted = false;
-    for (int i = 0; i < line.length(); i++) {
-      char ch = line.charAt(i);
-      if (quoted) {
-        if (ch == '"') {
-          if (i + 1 < line.length() && line.charAt(i + 1) == '"') {
-            cur.append('"');
-            i++;
-          } else {
-            quoted = false;
-          }
-        } else {
-          cur.append(ch);
-        }
-      } else if (ch == '"') {
-        quoted = true;
-      } else if (ch == ',') {
-        out.add(cur.toString());
-        cur.setLength(0);
-      } else {
-        cur.append(ch);
-      }
-    }
-    out.add(cur.toString());
-    return out;
   }
 }
