@@ -1,10 +1,18 @@
 package org.flexmargin.lattice;
 
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import org.ejml.data.ZMatrixRMaj;
+import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FlowSymmetry;
 import org.flexmargin.model.LiftingSurface;
+import org.flexmargin.model.ModeTable;
+import org.flexmargin.model.ShapeValue;
+import org.flexmargin.model.SplinePoint;
 import org.flexmargin.model.SurfacePoint;
+import org.flexmargin.structure.CantileverWingModes;
 
 /** Wings and loads shared by the lattice tests. */
 final class LatticeFixtures {
@@ -39,5 +47,45 @@ final class LatticeFixtures {
       area += l.areaM2(i);
     }
     return lift / area;
+  }
+
+  /**
+   * The modes of a straight uniform beam of the given length, swept about its root by sweepDeg
+   * (negative forward) at fixed length: station i at distance s = (i + 0.5) L / stations along the
+   * axis, y = s cos(sweep), x = x_axis,root + s sin(sweep); its streamwise pitch is theta cos(sweep)
+   * - w'(s) sin(sweep) (Diederich and Budiansky, NACA TN 1680, 1948). w' by a central difference
+   * of step 1e-6 L (truncation ~1e-12 relative).
+   */
+  static ModeTable sweptBeamModes(
+      CantileverWingModes beam, double length, double sweepDeg, int stations, String prefix, String name) {
+    double sw = Math.toRadians(sweepDeg);
+    double cs = Math.cos(sw), sn = Math.sin(sw);
+    double h = 1e-6 * length;
+    ModeTable base = beam.modeTable();
+    List<ElasticMode> modes = new ArrayList<>();
+    for (int m = 0; m < base.size(); m++) {
+      Map<String, ShapeValue> shapes = new HashMap<>();
+      for (int i = 0; i < stations; i++) {
+        double s = (i + 0.5) * length / stations;
+        double slope = (beam.displacementM(m, s + h) - beam.displacementM(m, s - h)) / (2 * h);
+        double pitch = beam.rotationRad(m, s) * cs - slope * sn;
+        shapes.put(prefix + i, new ShapeValue(beam.displacementM(m, s), pitch));
+      }
+      ElasticMode e = base.modes().get(m);
+      modes.add(new ElasticMode(e.name(), e.frequencyHz(), e.dampingRatio(), e.generalizedMassKg(), shapes));
+    }
+    return new ModeTable(name, modes);
+  }
+
+  /** Spline points on the swept axis at the stations of {@link #sweptBeamModes} (x_axis at the root given). */
+  static List<SplinePoint> sweptAxis(
+      double length, double sweepDeg, int stations, String prefix, double rootAxisXM) {
+    double sw = Math.toRadians(sweepDeg);
+    List<SplinePoint> pts = new ArrayList<>();
+    for (int i = 0; i < stations; i++) {
+      double s = (i + 0.5) * length / stations;
+      pts.add(new SplinePoint(prefix + i, rootAxisXM + s * Math.sin(sw), s * Math.cos(sw)));
+    }
+    return pts;
   }
 }

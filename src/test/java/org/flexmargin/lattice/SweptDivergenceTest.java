@@ -4,24 +4,21 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import org.flexmargin.flutter.AeroelasticSystem;
 import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.DivergenceSolver;
-import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FlowSymmetry;
 import org.flexmargin.model.LatticeSpec;
 import org.flexmargin.model.LiftingSurface;
 import org.flexmargin.model.ModeTable;
-import org.flexmargin.model.ShapeValue;
 import org.flexmargin.model.SplineGroup;
 import org.flexmargin.model.SplineKind;
 import org.flexmargin.model.SplinePoint;
 import org.flexmargin.model.Strip;
 import org.flexmargin.model.StripTheorySpec;
 import org.flexmargin.model.SurfacePoint;
+import org.flexmargin.model.UniformCantileverWing;
 import org.flexmargin.structure.CantileverWingModes;
 import org.flexmargin.structure.StructuralModel;
 import org.junit.jupiter.api.Test;
@@ -37,36 +34,50 @@ import org.junit.jupiter.api.Test;
  * theta cos(sweep) - w'(s) sin(sweep).
  */
 class SweptDivergenceTest {
-  private static final double L = 6.096, C = 1.8288, EA = 0.33;
+  private static final double L0 = 6.096, C0 = 1.8288, EA = 0.33;
   private static final int STATIONS = 40;
 
+  /** Aerodynamics of a divergence run. */
+  private enum Aero {
+    /** streamwise strips, section lift slope 2 pi. */
+    STRIPS,
+    /** streamwise strips, section lift slope 2 pi cos(sweep) (simple sweep theory). */
+    STRIPS_COS,
+    /** doublet lattice, 6 x 20 boxes. */
+    LATTICE
+  }
+
   private static double divergence(CantileverWingModes beam, double sweepDeg, boolean lattice) {
+    return divergence(beam, sweepDeg, lattice ? Aero.LATTICE : Aero.STRIPS, L0, C0);
+  }
+
+  /**
+   * The Goland beam sheared so that its streamwise planform (semispan L0, streamwise chord C0)
+   * stays that of the unswept wing: beam length L0 / cos(sweep), chord normal to the beam
+   * C0 cos(sweep), same stiffness and mass per length.
+   */
+  private static double shearedDivergence(double sweepDeg, Aero aero) {
+    double cs = Math.cos(Math.toRadians(sweepDeg));
+    UniformCantileverWing g = LatticeFlutterTest.goland();
+    UniformCantileverWing sheared = new UniformCantileverWing(L0 / cs, C0 * cs,
+        g.elasticAxisChordFraction(), g.massAxisChordFraction(), g.massPerLengthKgPerM(),
+        g.pitchInertiaKgM(), g.inertiaAxis(), g.bendingStiffnessNm2(), g.torsionStiffnessNm2(),
+        g.liftSlopePerRad(), g.bendingModes(), g.torsionModes(), g.strips(), g.dampingRatio());
+    return divergence(CantileverWingModes.solve(sheared), sweepDeg, aero, L0 / cs, C0 * cs);
+  }
+
+  private static double divergence(CantileverWingModes beam, double sweepDeg, Aero aero, double L, double C) {
+    boolean lattice = aero == Aero.LATTICE;
     double sw = Math.toRadians(sweepDeg);
     double cs = Math.cos(sw), sn = Math.sin(sw);
     double streamChord = C / cs;
-    List<ElasticMode> modes = new ArrayList<>();
-    ModeTable base = beam.modeTable();
-    List<SplinePoint> pts = new ArrayList<>();
+    double sectionSlope = 2 * Math.PI * (aero == Aero.STRIPS_COS ? cs : 1);
+    List<SplinePoint> pts = LatticeFixtures.sweptAxis(L, sweepDeg, STATIONS, "s", EA * streamChord);
     List<Strip> strips = new ArrayList<>();
-    double h = 1e-6 * L;
-    for (int m = 0; m < base.size(); m++) {
-      Map<String, ShapeValue> shapes = new HashMap<>();
-      for (int i = 0; i < STATIONS; i++) {
-        double s = (i + 0.5) * L / STATIONS;
-        // w'(s) by a central difference: truncation ~h^2 w''' ~ 1e-12 relative
-        double slope = (beam.displacementM(m, s + h) - beam.displacementM(m, s - h)) / (2 * h);
-        double pitch = beam.rotationRad(m, s) * cs - slope * sn;
-        shapes.put("s" + i, new ShapeValue(beam.displacementM(m, s), pitch));
-      }
-      ElasticMode e = base.modes().get(m);
-      modes.add(new ElasticMode(e.name(), e.frequencyHz(), e.dampingRatio(), e.generalizedMassKg(), shapes));
-    }
     for (int i = 0; i < STATIONS; i++) {
-      double s = (i + 0.5) * L / STATIONS;
-      pts.add(new SplinePoint("s" + i, EA * streamChord + s * sn, s * cs));
-      strips.add(new Strip("s" + i, L * cs / STATIONS, streamChord / 2, (EA - 0.5) / 0.5, 2 * Math.PI));
+      strips.add(new Strip("s" + i, L * cs / STATIONS, streamChord / 2, (EA - 0.5) / 0.5, sectionSlope));
     }
-    ModeTable table = new ModeTable("swept", modes);
+    ModeTable table = LatticeFixtures.sweptBeamModes(beam, L, sweepDeg, STATIONS, "s", "swept");
     org.flexmargin.model.AeroSpec spec;
     if (lattice) {
       LiftingSurface wing = new LiftingSurface("wing", new SurfacePoint(0, 0, 0), streamChord,
@@ -102,13 +113,52 @@ class SweptDivergenceTest {
       assertTrue(strip[i] > strip[i - 1], all);
     }
     // lifting surface: aft sweep raises and -15 deg lowers the divergence speed (measured 273.8,
-    // 299.8, 376.2, 2054 m/s at -15, 0, 15, 30 deg). At -30 deg it gives 277.3 m/s, above the
-    // -15 deg value (docs/lifting-surfaces.md discusses it); that point is not asserted
+    // 299.8, 376.2, 2054 m/s at -15, 0, 15, 30 deg). At -30 deg it gives 277.3 m/s, 1.3 % above
+    // the -15 deg value: with the beam length fixed the planform shrinks as the wing sweeps (see
+    // planformOfFixedBeamShrinksWithSweep); asserted only as within 3 % of the -15 deg value
     assertTrue(surface[1] < surface[2] && surface[2] < surface[3] && surface[3] < surface[4], all);
     assertTrue(surface[0] < surface[2], all);
+    assertEquals(surface[1], surface[0], 0.03 * surface[1], all);
     // three-dimensional tip loss: the lattice diverges later than strip theory at every sweep
     for (int i = 0; i < sweeps.length - 1; i++) {
       assertTrue(surface[i] > strip[i], all);
     }
+  }
+
+  @Test
+  void forwardSweepLowersDivergenceAtFixedPlanform() {
+    // the beam sheared under a fixed streamwise planform (aspect ratio 6.67 at every sweep): the
+    // lattice divergence speed falls monotonically with forward sweep, as Diederich and Budiansky
+    // (NACA TN 1680, 1948) find for forward-swept wings (trend from memory). Measured 247.4,
+    // 268.7, 299.8 m/s at -30, -15, 0 deg (strip theory 178.1, 210.2, 252.3)
+    double[] sweeps = {-30, -15, 0};
+    double[] v = new double[sweeps.length];
+    for (int i = 0; i < sweeps.length; i++) {
+      v[i] = shearedDivergence(sweeps[i], Aero.LATTICE);
+    }
+    String all = java.util.Arrays.toString(v);
+    assertTrue(v[0] < v[1] && v[1] < v[2], all);
+    // unsheared at 0 deg: the same wing as the first test (299.8 m/s); 0.5 m/s covers the rounding
+    assertEquals(299.8, v[2], 0.5, all);
+  }
+
+  @Test
+  void planformOfFixedBeamShrinksWithSweep() {
+    // with the beam length fixed, the streamwise semispan falls as cos(sweep) and the aspect ratio
+    // as cos^2(sweep) (6.67 at 0, 5.0 at -30, 3.3 at -45 deg), and simple sweep theory lowers the
+    // section lift slope to 2 pi cos(sweep). Strip theory with that slope (the normal-section form
+    // of Diederich and Budiansky, NACA TN 1680, 1948) then has its lowest divergence speed in
+    // forward sweep near -30 deg and rises beyond (measured 216.3, 206.0, 214.5 m/s at -15, -30,
+    // -45 deg), like the lattice (273.8, 277.3, 311.0 m/s): the -30 deg lattice value above the
+    // -15 deg one is a property of this family of wings, not of the lattice
+    CantileverWingModes beam = CantileverWingModes.solve(LatticeFlutterTest.goland());
+    double s15 = divergence(beam, -15, Aero.STRIPS_COS, L0, C0);
+    double s30 = divergence(beam, -30, Aero.STRIPS_COS, L0, C0);
+    double s45 = divergence(beam, -45, Aero.STRIPS_COS, L0, C0);
+    String all = s15 + " " + s30 + " " + s45;
+    assertTrue(s30 < s15 && s30 < s45, all);
+    // strip forces are proportional to the section slope, so q_D scales as 1 / cos(sweep) exactly:
+    // 191.7 m/s (2 pi strips at -30 deg) / sqrt(cos 30 deg) = 206.0 m/s; 0.3 % for the rounding of 191.7
+    assertEquals(191.7 / Math.sqrt(Math.cos(Math.toRadians(30))), s30, 0.003 * s30, all);
   }
 }
