@@ -8,6 +8,7 @@ import org.ejml.dense.row.CommonOps_DDRM;
 import org.ejml.dense.row.factory.LinearSolverFactory_ZDRM;
 import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.ControlSurfaceForces;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.loop.StateSpace;
 import org.flexmargin.model.ModeCoupling;
@@ -104,6 +105,12 @@ public final class AircraftPlant {
       forcePerAlpha[i] = c.generalizedForcePerAlphaM2();
       forcePerElevator[i] = c.generalizedForcePerElevatorM2();
     }
+    List<String> notes = new ArrayList<>();
+    if (aero instanceof ControlSurfaceForces cs && cs.elevatorForcesM2PerRad().isPresent()) {
+      System.arraycopy(cs.elevatorForcesM2PerRad().get(), 0, forcePerElevator, 0, m);
+      notes.add("elevator generalized forces from the lifting surfaces' control surface \"" + cs.elevatorName()
+          + "\" (steady), in place of the mode_coupling values");
+    }
     this.sensors = List.copyOf(sensors);
     this.sensorRotation = new double[sensors.size()][m];
     this.sensorDisplacement = new double[sensors.size()][m];
@@ -114,7 +121,6 @@ public final class AircraftPlant {
         sensorDisplacement[s][i] = v == null ? 0.0 : v.displacementM();
       }
     }
-    List<String> notes = new ArrayList<>();
     notes.add("short period at constant speed, gravity neglected; elastic modes coupled to it only through "
         + "the quasi-steady coefficients supplied");
     if (!uncoupled.isEmpty()) {

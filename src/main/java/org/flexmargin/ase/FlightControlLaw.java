@@ -2,6 +2,7 @@ package org.flexmargin.ase;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.flexmargin.loop.DiscreteFilter;
 import org.flexmargin.loop.FirstOrderLag;
 import org.flexmargin.loop.Gain;
 import org.flexmargin.loop.LinearBlock;
@@ -12,6 +13,7 @@ import org.flexmargin.loop.PureDelay;
 import org.flexmargin.loop.SecondOrderActuator;
 import org.flexmargin.loop.SecondOrderLowPass;
 import org.flexmargin.loop.SeriesBlock;
+import org.flexmargin.loop.TransferFunctionBlock;
 import org.flexmargin.model.ActuatorOrder;
 import org.flexmargin.model.FeedbackPath;
 import org.flexmargin.model.FilterSpec;
@@ -66,7 +68,7 @@ public record FlightControlLaw(List<LinearBlock> paths, int[] pathSensorIndex, L
         chain.add(FirstOrderLag.ofBandwidthHz(sensor.bandwidthHz()));
       }
       for (FilterSpec f : path.filters()) {
-        chain.add(filter(f));
+        chain.add(filter(f, loop.samplePeriodS()));
       }
       double factor = path.schedule().at(dynamicPressurePa);
       if (path.integralGainPerS() != 0) {
@@ -87,13 +89,45 @@ public record FlightControlLaw(List<LinearBlock> paths, int[] pathSensorIndex, L
     return new FlightControlLaw(paths, sensorIndex, fwd.size() == 1 ? fwd.get(0) : new SeriesBlock(fwd));
   }
 
-  /** @return the block of a filter specification */
+  /** @return the block of a continuous filter specification (not {@link FilterSpec.Discrete}) */
   public static LinearBlock filter(FilterSpec f) {
+    return filter(f, 0.0);
+  }
+
+  /**
+   * The block of a filter specification. Lead-lag, washout and second-order sections are transfer
+   * functions with the coefficients of their definitions ({@link FilterSpec}); a digital filter is
+   * evaluated at z = e^{j w T} ({@link DiscreteFilter}).
+   *
+   * @param f the specification
+   * @param samplePeriodS the loop's sample period, s (&gt; 0 for a digital filter)
+   * @return the block
+   */
+  public static LinearBlock filter(FilterSpec f, double samplePeriodS) {
     if (f instanceof NotchFilterSpec n) {
       return new NotchFilter(n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio());
     }
-    LowPassFilterSpec lp = (LowPassFilterSpec) f;
-    return new SecondOrderLowPass(lp.cornerHz(), lp.dampingRatio());
+    if (f instanceof LowPassFilterSpec lp) {
+      return new SecondOrderLowPass(lp.cornerHz(), lp.dampingRatio());
+    }
+    if (f instanceof FilterSpec.LeadLag ll) {
+      return new TransferFunctionBlock(new double[] {1 / (2 * Math.PI * ll.zeroHz()), 1},
+          new double[] {1 / (2 * Math.PI * ll.poleHz()), 1});
+    }
+    if (f instanceof FilterSpec.Washout w) {
+      return new TransferFunctionBlock(new double[] {w.timeConstantS(), 0}, new double[] {w.timeConstantS(), 1});
+    }
+    if (f instanceof FilterSpec.SecondOrder so) {
+      double wn = 2 * Math.PI * so.numeratorFrequencyHz();
+      double wd = 2 * Math.PI * so.denominatorFrequencyHz();
+      return new TransferFunctionBlock(new double[] {1 / (wn * wn), 2 * so.numeratorDampingRatio() / wn, 1},
+          new double[] {1 / (wd * wd), 2 * so.denominatorDampingRatio() / wd, 1});
+    }
+    if (f instanceof FilterSpec.TransferFunction tf) {
+      return new TransferFunctionBlock(tf.coefficients().numerator(), tf.coefficients().denominator());
+    }
+    FilterSpec.Discrete d = (FilterSpec.Discrete) f;
+    return new DiscreteFilter(d.coefficients().numerator(), d.coefficients().denominator(), samplePeriodS);
   }
 
   private static LinearBlock actuator(LoopSpec loop) {

@@ -36,7 +36,7 @@ final class CheckCommand implements Callable<Integer> {
 
   @Override
   public Integer call() {
-    AnalysisCase c = CaseReader.read(caseFile);
+    AnalysisCase c = LatticeCache.prepare(CaseReader.read(caseFile), spec.commandLine().getErr(), common.quiet);
     c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     if (common.quiet) {
       return FlexMargin.EXIT_OK;

@@ -21,7 +21,9 @@ import picocli.CommandLine.Command;
           + "tests, flight flutter testing and the approval of the airworthiness authority."
     },
     subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
+        MarginsCommand.class,
         SimulateCommand.class, CampaignCommand.class,
+        EnvelopeCommand.class,
         CommandLine.HelpCommand.class},
     footer = {
       "",

@@ -21,6 +21,7 @@ import org.flexmargin.notch.ExistingNotches;
 import org.flexmargin.notch.MarginComparison;
 import org.flexmargin.notch.ModePeak;
 import org.flexmargin.notch.ModePeakChange;
+import org.flexmargin.notch.DiscreteNotchSet;
 import org.flexmargin.notch.NotchDesignResult;
 import org.flexmargin.notch.NotchDesignSpec;
 import org.flexmargin.notch.NotchDesigner;
@@ -127,7 +128,7 @@ final class NotchDesignCommand implements Callable<Integer> {
     if (overwrite && writeCase == null) {
       throw new InvalidInputException("--overwrite", "--write-case FILE (it only applies there)", "no --write-case");
     }
-    AnalysisCase c = CaseReader.read(caseFile);
+    AnalysisCase c = LatticeCache.prepare(CaseReader.read(caseFile), spec.commandLine().getErr(), common.quiet);
     c.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     if (c.loop() == null) {
       throw new InvalidInputException("loop", "a flight-control loop (notch design needs one)", "none");
@@ -168,15 +169,22 @@ final class NotchDesignCommand implements Callable<Integer> {
       return r.passes() ? FlexMargin.EXIT_OK : FlexMargin.EXIT_REQUIREMENTS_VIOLATED;
     }
     NotchDesignResult r = designer.design(c, s);
+    DiscreteNotchSet discrete = DiscreteNotchSet.of(c, r, designer);
     Path written = ReportFolder.writeAtomically(target, folder -> {
-      Files.writeString(folder.resolve("notch-design.json"), NotchJson.design(r, Cautions.TEXT));
+      Files.writeString(folder.resolve("notch-design.json"), NotchJson.design(r, discrete, Cautions.TEXT));
       Files.writeString(folder.resolve("notch-filters.json"), NotchJson.filters(r));
+      if (!discrete.sections().isEmpty()) {
+        Files.writeString(folder.resolve("notch-filters-discrete.json"), NotchJson.filters(r, discrete.designedLoop()));
+      }
     });
     Path updatedCase = r.feasible() && writeCase != null ? writeUpdatedCase(r) : null;
     if (!quiet) {
       printDesign(pw, r);
+      printDiscrete(pw, discrete);
       pw.println();
-      pw.println("written to " + written.resolve("notch-design.json") + " and " + written.resolve("notch-filters.json"));
+      pw.println("written to " + written.resolve("notch-design.json") + " and " + written.resolve("notch-filters.json")
+          + (discrete.sections().isEmpty() ? "" : " (discrete sections: " + written.resolve("notch-filters-discrete.json")
+              + ")"));
       if (updatedCase != null) {
         pw.println("case with the designed notches in place: " + updatedCase
             + " (check it: flexmargin sweep " + updatedCase + ")");
@@ -192,6 +200,36 @@ final class NotchDesignCommand implements Callable<Integer> {
   private Path writeUpdatedCase(NotchDesignResult r) {
     String text = CaseFileUpdate.withFilters(caseFile, writeCase, NotchJson.filters(r));
     return ReportFolder.writeFileAtomically(writeCase, "--write-case", text, overwrite, CaseReader::read);
+  }
+
+  private static void printDiscrete(PrintWriter pw, DiscreteNotchSet d) {
+    pw.println();
+    if (d.sections().isEmpty()) {
+      pw.println("discrete-time sections: none (" + d.note() + ")");
+      return;
+    }
+    pw.printf(Locale.ROOT, "discrete-time sections at T = %.6g s (bilinear transform pre-warped at each centre;%n"
+        + "  H(z) = (b0 + b1 z^-1 + b2 z^-2) / (1 + a1 z^-1 + a2 z^-2), coefficients to paste into flight software):%n",
+        d.samplePeriodS());
+    for (DiscreteNotchSet.Section s : d.sections()) {
+      double[] b = s.filter().numerator();
+      double[] a = s.filter().denominator();
+      pw.printf(Locale.ROOT, "  centre %7.3f Hz  b = [%s, %s, %s]%n", s.notch().centreFrequencyHz(), b[0], b[1], b[2]);
+      pw.printf(Locale.ROOT, "                    a = [%s, %s, %s]  centre gain %.3f dB (continuous %.3f dB)%n",
+          a[0], a[1], a[2], s.centreGainDb(), s.continuousCentreGainDb());
+    }
+    if (d.check() != null) {
+      pw.println(d.check().passes()
+          ? "  check of the discrete set against the requirements table (same rules as sweep): PASS"
+          : "  check of the discrete set against the requirements table (same rules as sweep): FAIL");
+      for (RobustnessCheckResult.ConfigurationVerdict v : d.check().configurations()) {
+        v.clearance().ranked().stream().filter(f -> !f.check().passed()).forEach(f -> pw.printf(Locale.ROOT,
+            "    %s: %s: required %.3g %s, achieved %.3g %s%n", v.configuration(), f.check().description(),
+            f.check().requiredValue(), f.check().unit().symbol(), f.check().achievedValue(), f.check().unit().symbol()));
+      }
+    } else {
+      pw.println("  not checked: " + d.note());
+    }
   }
 
   private static String where(ModePeak p) {

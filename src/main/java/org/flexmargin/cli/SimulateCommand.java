@@ -125,7 +125,7 @@ final class SimulateCommand implements Callable<Integer> {
   @Override
   public Integer call() {
     PrintWriter pw = spec.commandLine().getOut();
-    AnalysisCase c = CaseReader.read(caseFile);
+    AnalysisCase c = LatticeCache.prepare(CaseReader.read(caseFile), spec.commandLine().getErr(), common.quiet);
     if (c.loop() == null) {
       throw new InvalidInputException("loop", "a flight-control loop (simulate needs one)", "none");
     }

@@ -96,6 +96,7 @@ final class SweepCommand implements Callable<Integer> {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
     ReportFolder.checkTarget(target);
+    c = LatticeCache.prepare(c, err, common.quiet);
     CostEstimate cost = CostEstimate.of(c);
     if (!common.quiet) {
       out.println(cost.describe(work.threads));

@@ -20,6 +20,7 @@ import org.flexmargin.model.Altitudes;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.ClearanceRequirements;
+import org.flexmargin.model.Coefficients;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FeedbackPath;
@@ -92,6 +93,7 @@ public final class CaseReader {
 
   private static final List<String> CASE_KEYS =
       List.of("format", "name", "description", "plausibility_overrides", "configurations", "sweep", "options",
+          "envelope",
           "loop", "requirements");
   private static final List<String> CONFIG_KEYS =
       List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
@@ -475,7 +477,7 @@ public final class CaseReader {
     JsonField fl = p.optional("filters");
     if (fl != null) {
       for (JsonField f : FilterFiles.filterList(fl, index, sensor, f -> ctx.readReferenced(f, Schemas.Kind.FILTERS))) {
-        filters.add(readFilter(f.object("a filter: {\"notch\": {...}} or {\"low_pass\": {...}}")));
+        filters.add(readFilter(f.object("a filter: {\"notch\": {...}}, {\"low_pass\": {...}}, {\"lead_lag\": {...}}, ...")));
       }
     }
     JsonField sc = p.optional("schedule");
@@ -483,21 +485,56 @@ public final class CaseReader {
     return p.build(() -> new FeedbackPath(sensor, kp, ki, filters, schedule));
   }
 
+  private static final List<String> FILTER_KINDS = List.of("notch", "low_pass", "lead_lag", "washout",
+      "second_order", "transfer_function", "discrete");
+
   private static FilterSpec readFilter(JsonField f) {
-    f.allowOnly(List.of("notch", "low_pass"));
-    String kind = f.exactlyOne("the filter type", "notch", "low_pass");
+    f.allowOnly(FILTER_KINDS);
+    String kind = f.exactlyOne("the filter type", FILTER_KINDS.toArray(new String[0]));
     JsonField d = f.optional(kind).object("the filter data");
-    if (kind.equals("notch")) {
-      d.allowOnly(List.of("centre_hz", "numerator_damping_ratio", "denominator_damping_ratio"));
-      double centre = d.required("centre_hz", "the centre frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
-      double zz = d.required("numerator_damping_ratio", "zeta_z, the numerator damping ratio").number();
-      double zp = d.required("denominator_damping_ratio", "zeta_p, the denominator damping ratio").number();
-      return d.build(() -> new NotchFilterSpec(centre, zz, zp));
+    switch (kind) {
+      case "notch" -> {
+        d.allowOnly(List.of("centre_hz", "numerator_damping_ratio", "denominator_damping_ratio"));
+        double centre = d.required("centre_hz", "the centre frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
+        double zz = d.required("numerator_damping_ratio", "zeta_z, the numerator damping ratio").number();
+        double zp = d.required("denominator_damping_ratio", "zeta_p, the denominator damping ratio").number();
+        return d.build(() -> new NotchFilterSpec(centre, zz, zp));
+      }
+      case "low_pass" -> {
+        d.allowOnly(List.of("corner_hz", "damping_ratio"));
+        double corner = d.required("corner_hz", "the corner frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
+        double zeta = d.required("damping_ratio", "the damping ratio (0.7071 = Butterworth)").number();
+        return d.build(() -> new LowPassFilterSpec(corner, zeta));
+      }
+      case "lead_lag" -> {
+        d.allowOnly(List.of("zero_hz", "pole_hz"));
+        double z = d.required("zero_hz", "the zero frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
+        double p = d.required("pole_hz", "the pole frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
+        return d.build(() -> new FilterSpec.LeadLag(z, p));
+      }
+      case "washout" -> {
+        d.allowOnly(List.of("time_constant_s"));
+        double tau = d.required("time_constant_s", "the time constant (s)").number();
+        return d.build(() -> new FilterSpec.Washout(tau));
+      }
+      case "second_order" -> {
+        d.allowOnly(List.of("numerator_frequency_hz", "numerator_damping_ratio", "denominator_frequency_hz",
+            "denominator_damping_ratio"));
+        double fn = d.required("numerator_frequency_hz", "f_n (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
+        double zn = d.required("numerator_damping_ratio", "zeta_n").number();
+        double fd = d.required("denominator_frequency_hz", "f_d (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
+        double zd = d.required("denominator_damping_ratio", "zeta_d").number();
+        return d.build(() -> new FilterSpec.SecondOrder(fn, zn, fd, zd));
+      }
+      default -> {
+        d.allowOnly(List.of("numerator", "denominator"));
+        String order = kind.equals("discrete") ? "b0, b1, ... (powers of z^-1)" : "highest power of s first";
+        double[] num = d.required("numerator", "coefficients, " + order).numbers("a list of numbers");
+        double[] den = d.required("denominator", "coefficients, " + order).numbers("a list of numbers");
+        return d.build(() -> kind.equals("discrete") ? new FilterSpec.Discrete(new Coefficients(num, den))
+            : new FilterSpec.TransferFunction(new Coefficients(num, den)));
+      }
     }
-    d.allowOnly(List.of("corner_hz", "damping_ratio"));
-    double corner = d.required("corner_hz", "the corner frequency (Hz)").quantity(PlausibleRange.FILTER_FREQUENCY);
-    double zeta = d.required("damping_ratio", "the damping ratio (0.7071 = Butterworth)").number();
-    return d.build(() -> new LowPassFilterSpec(corner, zeta));
   }
 
   private static GainSchedule readSchedule(JsonField s) {
@@ -520,7 +557,7 @@ public final class CaseReader {
     String kind = a.exactlyOne("the aerodynamic data", "strip_theory", "force_table", "lifting_surfaces");
     JsonField f = a.optional(kind);
     if (kind.equals("lifting_surfaces")) {
-      return LatticeReader.read(f, table);
+      return LatticeReader.read(f, table, ctx::resolve);
     }
     if (kind.equals("force_table")) {
       String rel = f.text();

@@ -1,10 +1,13 @@
 package org.flexmargin.io;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.function.Function;
+import org.flexmargin.model.ControlSurface;
 import org.flexmargin.model.FlowSymmetry;
 import org.flexmargin.model.LatticeSpec;
 import org.flexmargin.model.LiftingSurface;
@@ -27,12 +30,36 @@ final class LatticeReader {
 
   private LatticeReader() {}
 
-  static LatticeSpec read(JsonField f, ModeTable table) {
+  /**
+   * @param f the {@code lifting_surfaces} object
+   * @param table the configuration's mode table (stations of the splines)
+   * @param resolve turns a path relative to the case file into a path
+   */
+  static LatticeSpec read(JsonField f, ModeTable table, Function<String, Path> resolve) {
     f.object("lifting-surface data");
-    f.allowOnly(List.of("reference_semichord_m", "mach", "flow_symmetry", "reduced_frequencies",
-        "surfaces", "splines"));
+    f.allowOnly(List.of("reference_semichord_m", "mach", "mach_numbers", "flow_symmetry", "reduced_frequencies",
+        "surfaces", "splines", "control_surfaces", "elevator_control", "force_cache_file"));
     double bRef = f.required("reference_semichord_m", "the reference semichord (m)").positive();
     double mach = f.required("mach", "the Mach number of the forces, 0 to 0.95").finite();
+    double[] machs = f.has("mach_numbers")
+        ? f.optional("mach_numbers").numbers("a list of Mach numbers, increasing, 0 to 0.95") : null;
+    List<ControlSurface> controls = new ArrayList<>();
+    if (f.has("control_surfaces")) {
+      for (JsonField c : f.optional("control_surfaces").list("a list of control surfaces")) {
+        controls.add(control(c));
+      }
+    }
+    String elevator = f.has("elevator_control")
+        ? f.optional("elevator_control").text() : null;
+    Path cache = null;
+    if (f.has("force_cache_file")) {
+      JsonField cf = f.optional("force_cache_file");
+      String rel = cf.text();
+      if (rel.isBlank()) {
+        throw cf.fail("a file name for the force cache (relative to the case file)", "an empty name");
+      }
+      cache = resolve.apply(rel);
+    }
     FlowSymmetry sym = FlowSymmetry.NONE;
     if (f.has("flow_symmetry")) {
       sym = choice(f.optional("flow_symmetry"), FlowSymmetry.class, "none, symmetric or antisymmetric");
@@ -50,7 +77,29 @@ final class LatticeReader {
       splines.add(spline(g, stations, table.name()));
     }
     FlowSymmetry symmetry = sym;
-    return f.build(() -> new LatticeSpec(bRef, mach, symmetry, surfaces, splines, ks));
+    Path cacheFile = cache;
+    return f.build(() -> new LatticeSpec(bRef, mach, symmetry, surfaces, splines, ks, machs, controls, elevator,
+        cacheFile, null));
+  }
+
+  private static ControlSurface control(JsonField c) {
+    c.object("a control surface");
+    c.allowOnly(List.of("name", "surface", "hinge_chord_fraction", "span_fractions"));
+    String name = c.required("name", "the control-surface name").text();
+    String surface = c.required("surface", "the name of the lifting surface that carries it").text();
+    double hinge = c.required("hinge_chord_fraction", "the hinge line as a fraction of the chord").finite();
+    double from = 0, to = 1;
+    if (c.has("span_fractions")) {
+      JsonField sf = c.optional("span_fractions");
+      double[] v = sf.numbers("[inner, outer] span fractions from the root, 0 to 1");
+      if (v.length != 2) {
+        throw sf.fail("two span fractions [inner, outer]", v.length + " numbers");
+      }
+      from = v[0];
+      to = v[1];
+    }
+    double inner = from, outer = to;
+    return c.build(() -> new ControlSurface(name, surface, hinge, inner, outer));
   }
 
   private static List<JsonField> nonEmpty(JsonField f, String key, String what) {

@@ -278,7 +278,7 @@ final class ModeTableCsv {
   }
 
   /** Decodes UTF-8, reporting the line and column of the first byte that is not UTF-8. */
-  private static String decodeUtf8(SourceFile src) {
+  static String decodeUtf8(SourceFile src) {
     byte[] bytes = src.bytes();
     ByteBuffer in = ByteBuffer.wrap(bytes);
     CharBuffer out = CharBuffer.allocate(bytes.length + 1);
@@ -304,7 +304,7 @@ final class ModeTableCsv {
     return out.toString();
   }
 
-  private static InputFileException located(InvalidInputException e, String file, int line, String prefix) {
+  static InputFileException located(InvalidInputException e, String file, int line, String prefix) {
     String rel = e.fieldPath();
     String full = prefix.isEmpty() ? rel : prefix + "." + rel;
     String msg = e.getMessage();
@@ -320,7 +320,7 @@ final class ModeTableCsv {
     return c < cells.size() ? cells.get(c).strip() : "";
   }
 
-  private static double number(String s, String file, int line, String path) {
+  static double number(String s, String file, int line, String path) {
     if (s.isEmpty()) {
       throw new InputFileException(file, line, path, "a number", "an empty cell");
     }
@@ -332,7 +332,8 @@ final class ModeTableCsv {
     }
   }
 
-  private static List<String> split(String line, String file, int lineNo) {
+  /** Splits one CSV line (RFC 4180 quoting, no line breaks inside quotes). */
+  static List<String> split(String line, String file, int lineNo) {
     return CsvLine.split(line, file, lineNo);
   }
 }

@@ -26,6 +26,11 @@ public final class BoxLattice {
   final double[] chord, area, cosG, sinG;
   /** control point (3/4 chord, centre line) and load point (1/4 chord, centre line). */
   final double[] cx, cy, cz, lx, ly, lz;
+  /** box position on its surface: start and end chord fractions, span fraction of its centre
+   * measured from the surface's root chord as given (0) to its tip chord (1). */
+  final double[] chordFrom, chordTo, spanFraction;
+  /** leading-edge x (m) and chord (m) of the box's strip at the box's span centre. */
+  final double[] stripLeadingEdgeX, stripChord;
   private final int[] surfaceOf;
   private final List<String> surfaceNames;
 
@@ -52,6 +57,8 @@ public final class BoxLattice {
     chord = new double[n]; area = new double[n]; cosG = new double[n]; sinG = new double[n];
     cx = new double[n]; cy = new double[n]; cz = new double[n];
     lx = new double[n]; ly = new double[n]; lz = new double[n];
+    chordFrom = new double[n]; chordTo = new double[n]; spanFraction = new double[n];
+    stripLeadingEdgeX = new double[n]; stripChord = new double[n];
     surfaceOf = new int[n];
     surfaceNames = surfaces.stream().map(LiftingSurface::name).toList();
     int k = 0;
@@ -73,7 +80,8 @@ public final class BoxLattice {
     double cp = sf.rootChordM(), cq = sf.tipChordM();
     // orient inboard -> outboard so that the normal (0, -sin g, cos g) has a z component >= 0
     double dy = q.yM() - p.yM(), dz = q.zM() - p.zM();
-    if (dy < 0 || (dy == 0 && dz < 0)) {
+    boolean reversed = dy < 0 || (dy == 0 && dz < 0);
+    if (reversed) {
       SurfacePoint t = p; p = q; q = t;
       double tc = cp; cp = cq; cq = tc;
       dy = -dy; dz = -dz;
@@ -98,6 +106,9 @@ public final class BoxLattice {
         cosG[k] = cg; sinG[k] = sg;
         cx[k] = xm + ca * cm; cy[k] = ym; cz[k] = zm;
         lx[k] = xm + qa * cm; ly[k] = ym; lz[k] = zm;
+        chordFrom[k] = g0; chordTo[k] = g1;
+        spanFraction[k] = reversed ? 1 - fm : fm;
+        stripLeadingEdgeX[k] = xm; stripChord[k] = cm;
         surfaceOf[k] = s;
         k++;
       }

@@ -83,9 +83,7 @@ public record NotchFilter(double centreFrequencyHz, double zeroDampingRatio,
 
   @Override
   public StateSpace stateSpace() {
-    double w = w();
-    return new TransferFunctionBlock(new double[] {1, 2 * zeroDampingRatio * w, w * w},
-        new double[] {1, 2 * poleDampingRatio * w, w * w}).stateSpace();
+    return NotchFilters.transferFunction(this).stateSpace();
   }
 
   @Override

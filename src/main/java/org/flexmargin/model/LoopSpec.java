@@ -45,6 +45,15 @@ public record LoopSpec(
     }
     Checks.nonNegative("computation_delay_s", computationDelayS);
     Checks.nonNegative("sample_period_s", samplePeriodS);
+    for (int i = 0; i < paths.size(); i++) {
+      for (int j = 0; j < paths.get(i).filters().size(); j++) {
+        if (paths.get(i).filters().get(j) instanceof FilterSpec.Discrete && !(samplePeriodS > 0)) {
+          throw new InvalidInputException("paths[" + i + "].filters[" + j + "].discrete",
+              "a loop with sample_period_s > 0 (a digital filter runs at the loop's sample period)",
+              "a continuous loop (sample_period_s " + samplePeriodS + ")");
+        }
+      }
+    }
     if (padeOrder < 1 || padeOrder > 6) {
       throw new InvalidInputException("pade_order", "an integer from 1 to 6", String.valueOf(padeOrder));
     }

@@ -7,6 +7,7 @@ import org.flexmargin.clearance.RankedFinding;
 import org.flexmargin.clearance.Severity;
 import org.flexmargin.model.FeedbackPath;
 import org.flexmargin.model.FilterSpec;
+import org.flexmargin.model.LoopSpec;
 import org.flexmargin.model.LowPassFilterSpec;
 import org.flexmargin.model.NotchFilterSpec;
 
@@ -59,6 +60,13 @@ public final class NotchJson {
       }
       sb.append(Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v).replaceAll("(\\.\\d*?)0+(e|$)", "$1$2")
           .replace(".e", "e").replaceAll("\\.$", "") : "null");
+      return this;
+    }
+
+    /** A list entry with every digit of the double (17 significant digits round-trip exactly). */
+    Out exact(double v) {
+      sep();
+      sb.append(Double.isFinite(v) ? Double.toString(v) : "null");
       return this;
     }
 
@@ -161,6 +169,16 @@ public final class NotchJson {
    * @return notch-design.json
    */
   public static String design(NotchDesignResult r, List<String> cautions) {
+    return design(r, null, cautions);
+  }
+
+  /**
+   * @param r a design
+   * @param discrete its discrete-time sections and their check (null: none written)
+   * @param cautions the cautions text to embed
+   * @return notch-design.json
+   */
+  public static String design(NotchDesignResult r, DiscreteNotchSet discrete, List<String> cautions) {
     Out o = new Out();
     o.open(null, '{').num("format", 1).str("kind", "notch_design").str("case", r.caseName())
         .bool("feasible", r.feasible());
@@ -217,9 +235,42 @@ public final class NotchJson {
           .num("frequency_hz", p.frequencyHz()).close('}');
     }
     o.close(']');
+    if (discrete != null) {
+      discrete(o, discrete);
+    }
     o.strings("cautions", cautions);
     o.close('}');
     return o.toString();
+  }
+
+  private static void discrete(Out o, DiscreteNotchSet d) {
+    o.open("discrete_sections", '{').num("sample_period_s", d.samplePeriodS()).str("method",
+        "bilinear transform pre-warped at each notch centre; H(z) = (b0 + b1 z^-1 + b2 z^-2)/(1 + a1 z^-1 + a2 z^-2)");
+    o.open("sections", '[');
+    for (DiscreteNotchSet.Section s : d.sections()) {
+      o.open(null, '{').num("centre_hz", s.notch().centreFrequencyHz())
+          .num("centre_gain_db", s.centreGainDb()).num("continuous_centre_gain_db", s.continuousCentreGainDb());
+      coefficients(o, s.filter().numerator(), s.filter().denominator());
+      o.close('}');
+    }
+    o.close(']');
+    if (d.check() != null) {
+      o.bool("check_passes", d.check().passes()).str("check", "the requirements table, same rules as sweep, on the "
+          + "loop with the discrete sections in place of the designed notches");
+      o.open("check_failures", '[');
+      for (RobustnessCheckResult.ConfigurationVerdict v : d.check().configurations()) {
+        for (RankedFinding f : v.clearance().ranked()) {
+          if (!f.check().passed()) {
+            o.open(null, '{').str("configuration", v.configuration()).str("description", f.check().description())
+                .num("required", f.check().requiredValue()).num("achieved", f.check().achievedValue())
+                .str("unit", f.check().unit().symbol()).close('}');
+          }
+        }
+      }
+      o.close(']');
+    }
+    o.str("note", d.note());
+    o.close('}');
   }
 
   /**
@@ -228,11 +279,20 @@ public final class NotchJson {
    *     list in the case-file format, ready to paste into the path
    */
   public static String filters(NotchDesignResult r) {
+    return filters(r, r.designedLoop());
+  }
+
+  /**
+   * @param r a design
+   * @param loop the designed loop to write (e.g. with the discrete sections in place of the notches)
+   * @return the filter fragment of that loop's carrying paths
+   */
+  public static String filters(NotchDesignResult r, LoopSpec loop) {
     Out o = new Out();
     o.open(null, '{').num("format", 1).str("case", r.caseName()).bool("feasible", r.feasible());
     o.open("paths", '[');
     for (int p : r.notchPaths()) {
-      FeedbackPath fp = r.designedLoop().paths().get(p);
+      FeedbackPath fp = loop.paths().get(p);
       o.open(null, '{').num("path_index", p).str("sensor", fp.sensor());
       o.open("filters", '[');
       for (FilterSpec f : fp.filters()) {
@@ -240,9 +300,8 @@ public final class NotchJson {
           o.open(null, '{').open("notch", '{').num("centre_hz", n.centreHz())
               .num("numerator_damping_ratio", n.numeratorDampingRatio())
               .num("denominator_damping_ratio", n.denominatorDampingRatio()).close('}').close('}');
-        } else if (f instanceof LowPassFilterSpec lp) {
-          o.open(null, '{').open("low_pass", '{').num("corner_hz", lp.cornerHz())
-              .num("damping_ratio", lp.dampingRatio()).close('}').close('}');
+        } else {
+          filter(o, f);
         }
       }
       o.close(']');
@@ -251,6 +310,40 @@ public final class NotchJson {
     o.close(']');
     o.close('}');
     return o.toString();
+  }
+
+  /** Writes one filter other than a notch in the case-file format. */
+  private static void filter(Out o, FilterSpec f) {
+    o.open(null, '{');
+    if (f instanceof LowPassFilterSpec lp) {
+      o.open("low_pass", '{').num("corner_hz", lp.cornerHz()).num("damping_ratio", lp.dampingRatio());
+    } else if (f instanceof FilterSpec.LeadLag ll) {
+      o.open("lead_lag", '{').num("zero_hz", ll.zeroHz()).num("pole_hz", ll.poleHz());
+    } else if (f instanceof FilterSpec.Washout w) {
+      o.open("washout", '{').num("time_constant_s", w.timeConstantS());
+    } else if (f instanceof FilterSpec.SecondOrder so) {
+      o.open("second_order", '{').num("numerator_frequency_hz", so.numeratorFrequencyHz())
+          .num("numerator_damping_ratio", so.numeratorDampingRatio())
+          .num("denominator_frequency_hz", so.denominatorFrequencyHz())
+          .num("denominator_damping_ratio", so.denominatorDampingRatio());
+    } else if (f instanceof FilterSpec.TransferFunction tf) {
+      coefficients(o.open("transfer_function", '{'), tf.coefficients().numerator(), tf.coefficients().denominator());
+    } else if (f instanceof FilterSpec.Discrete d) {
+      coefficients(o.open("discrete", '{'), d.coefficients().numerator(), d.coefficients().denominator());
+    }
+    o.close('}').close('}');
+  }
+
+  private static void coefficients(Out o, double[] numerator, double[] denominator) {
+    o.open("numerator", '[');
+    for (double v : numerator) {
+      o.exact(v);
+    }
+    o.close(']').open("denominator", '[');
+    for (double v : denominator) {
+      o.exact(v);
+    }
+    o.close(']');
   }
 
   /**

@@ -691,7 +691,7 @@ public final class LoopResponseCharts {
     };
   }
 
-  private static double[] finite(double[] a) {
+  static double[] finite(double[] a) {
     double[] out = a.clone();
     for (int i = 0; i < out.length; i++) {
       if (!Double.isFinite(out[i])) {

@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.GafTable;
+import org.flexmargin.model.LatticeSpec;
 
 /**
  * Warnings when a sweep leaves the range in which the chosen aerodynamics hold (docs/verdict.md):
@@ -35,15 +36,23 @@ final class AeroValidity {
    * @return the warnings, empty when every point is within range
    */
   static List<String> warnings(Configuration c, PlannedPath path) {
+    if (c.aero() instanceof LatticeSpec l) {
+      return warnings(l.mach(), path, "the lifting-surface forces are used at the lattice's Mach number");
+    }
     return warnings(c.aero() instanceof GafTable t ? t.machNumber() : Double.NaN, path);
+  }
+
+  static List<String> warnings(double tableMach, PlannedPath path) {
+    return warnings(tableMach, path, "the force table holds at Mach");
   }
 
   /**
    * @param tableMach the force table's Mach number, or NaN for strip theory
    * @param path the sweep path
+   * @param what the words before the Mach number in the warning
    * @return the warnings, empty when every point is within range
    */
-  static List<String> warnings(double tableMach, PlannedPath path) {
+  static List<String> warnings(double tableMach, PlannedPath path, String what) {
     List<String> out = new ArrayList<>();
     FlightCondition first = null;
     FlightCondition highest = null;
@@ -70,9 +79,9 @@ final class AeroValidity {
               + "about %.0f %% there (Prandtl-Glauert)", 100 * (1 / Math.sqrt(1 - m * m) - 1))
               : "the flow is supersonic there and the results have no physical meaning in dimensional terms"));
     } else {
-      out.add(String.format(Locale.ROOT, "aerodynamics outside their range: the force table holds at Mach %.3f "
+      out.add(String.format(Locale.ROOT, "aerodynamics outside their range: %s %.3f "
           + "(accepted within +-%.2f), but the sweep runs from Mach %.3f to %.3f (first outside at %.2f m/s EAS)",
-          tableMach, TABLE_MACH_TOLERANCE, lowest.mach(), highest.mach(), first.speedEasMps()));
+          what, tableMach, TABLE_MACH_TOLERANCE, lowest.mach(), highest.mach(), first.speedEasMps()));
     }
     return out;
   }

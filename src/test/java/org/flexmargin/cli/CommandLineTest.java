@@ -84,12 +84,12 @@ class CommandLineTest {
   }
 
   @Test
-  void demoWithFailingRequirementsExitsWithThree(@TempDir Path tmp) throws IOException {
-    CliRun r = run("demo", "--out", tmp.resolve("demo").toString(), "--quiet");
+  void demoWithFailingRequirementsExitsWithThree() throws IOException {
+    CliRun r = DemoRun.result();
     assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, r.code(), r.err());
-    JsonNode json = new ObjectMapper().readTree(tmp.resolve("demo/results.json").toFile());
+    JsonNode json = new ObjectMapper().readTree(DemoRun.folder().resolve("results.json").toFile());
     assertFalse(json.get("configurations").get(0).get("clearance").get("passed").asBoolean());
-    assertTrue(Files.exists(tmp.resolve("demo/margins-full_payload.csv")));
+    assertTrue(Files.exists(DemoRun.folder().resolve("margins-full_payload.csv")));
   }
 
   @Test

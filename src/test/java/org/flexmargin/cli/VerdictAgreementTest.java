@@ -15,7 +15,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * {@code sweep} and {@code notch-design --check-only} judge the invented demo drone by one
+ * {@code sweep} (here through {@code demo}, the sweep of the bundled case) and {@code notch-design
+ * --check-only} judge the invented demo drone by one
  * definition of frequency bands, speed regimes, modal-frequency uncertainty and the
  * phase-stabilisation rule: every requirement of every configuration (each structural mode, each
  * margin kind in each band, the flutter, divergence, damping and stability checks) gets the same
@@ -50,12 +51,12 @@ class VerdictAgreementTest {
   @Test
   void sweepAndFilterCheckGiveTheSameVerdictOnEveryModeAndBand(@TempDir Path tmp) throws IOException {
     String demo = "mode-tables/demo/demo-case.json";
-    assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, run("sweep", demo, "--out", tmp.resolve("s").toString(),
-        "--quiet"));
+    // the demo command is the sweep of the bundled demo case (one shared run, see DemoRun)
+    assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, DemoRun.result().code(), DemoRun.result().err());
     assertEquals(FlexMargin.EXIT_REQUIREMENTS_VIOLATED, run("notch-design", demo, "--check-only", "--out",
         tmp.resolve("n").toString(), "--quiet"));
     ObjectMapper m = new ObjectMapper();
-    JsonNode sweep = m.readTree(tmp.resolve("s/results.json").toFile()).get("configurations");
+    JsonNode sweep = m.readTree(DemoRun.folder().resolve("results.json").toFile()).get("configurations");
     JsonNode check = m.readTree(tmp.resolve("n/notch-check.json").toFile()).get("configurations");
     Map<String, JsonNode> a = byKey(sweep, "name", "/clearance/requirements");
     Map<String, JsonNode> b = byKey(check, "name", "");

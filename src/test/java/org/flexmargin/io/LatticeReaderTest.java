@@ -69,4 +69,34 @@ class LatticeReaderTest {
     assertHas(failsWith(tmp, base.replace("\"chordwise_boxes\": 4, \"spanwise_boxes\": 8",
         "\"chordwise_boxes\": 200, \"spanwise_boxes\": 500")), "case.json", "surfaces", "100000 boxes");
   }
+
+  /** Control surfaces, Mach numbers and the cache file, and their errors. */
+  @Test
+  void readsControlSurfacesMachNumbersAndTheCacheFile(@TempDir Path tmp) throws IOException {
+    Files.copy(DIR.resolve("wing-modes.json"), tmp.resolve("wing-modes.json"));
+    String base = Files.readString(DIR.resolve("lattice-case.json"));
+    String extra = "\"mach_numbers\": [0.2, 0.3, 0.5], \"elevator_control\": \"flap\", "
+        + "\"force_cache_file\": \"forces.bin\", \"control_surfaces\": [{\"name\": \"flap\", \"surface\": \"wing\", "
+        + "\"hinge_chord_fraction\": 0.75, \"span_fractions\": [0.5, 1]}],\n          \"mach\": 0.3,";
+    Path file = tmp.resolve("case.json");
+    Files.writeString(file, base.replace("\"mach\": 0.3,", extra));
+    LatticeSpec s = assertInstanceOf(LatticeSpec.class, CaseReader.read(file).configurations().get(0).aero());
+    assertEquals(3, s.machNumbers().length);
+    assertEquals("flap", s.elevatorControl());
+    assertEquals(0.75, s.controlSurfaces().get(0).hingeChordFraction());
+    assertEquals(0.5, s.controlSurfaces().get(0).fromSpanFraction());
+    assertEquals(tmp.resolve("forces.bin").normalize(), s.forceCacheFile());
+    // hinge between box edges (4 chordwise boxes), span limit between edges (8 spanwise boxes),
+    // unknown surface, unknown elevator, Mach outside the list
+    assertHas(failsWith(tmp, base.replace("\"mach\": 0.3,", extra.replace("0.75", "0.7"))),
+        "control_surfaces[0].hinge_chord_fraction", "a box edge", "1/4");
+    assertHas(failsWith(tmp, base.replace("\"mach\": 0.3,", extra.replace("[0.5, 1]", "[0.3, 1]"))),
+        "control_surfaces[0].span_fractions[0]", "1/8");
+    assertHas(failsWith(tmp, base.replace("\"mach\": 0.3,", extra.replace("\"surface\": \"wing\"", "\"surface\": \"tail\""))),
+        "control_surfaces[0].surface", "\"tail\"");
+    assertHas(failsWith(tmp, base.replace("\"mach\": 0.3,", extra.replace("\"elevator_control\": \"flap\"",
+        "\"elevator_control\": \"rudder\""))), "elevator_control", "\"rudder\"");
+    assertHas(failsWith(tmp, base.replace("\"mach\": 0.3,", extra.replace("[0.2, 0.3, 0.5]", "[0.4, 0.5]"))),
+        "lifting_surfaces.mach", "within the listed mach_numbers");
+  }
 }

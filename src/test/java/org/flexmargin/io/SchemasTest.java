@@ -56,6 +56,12 @@ class SchemasTest {
     if (n.has("filters") || n.has("paths")) {
       return Schemas.Kind.FILTERS;
     }
+    if (n.has("name") && n.has("format")) {
+      return Schemas.Kind.LOOP_FILE;
+    }
+    if (n.has("gain_db")) {
+      return Schemas.Kind.MEASURED_RESPONSE;
+    }
     throw new AssertionError("no schema for " + n);
   }
 
