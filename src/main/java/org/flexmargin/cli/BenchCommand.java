@@ -53,7 +53,8 @@ import picocli.CommandLine.Spec;
         "  flexmargin bench demo", "  flexmargin bench closed-loop", "  flexmargin bench loop-response --speeds 50"})
 final class BenchCommand implements Callable<Integer> {
   @Parameters(index = "0", arity = "0..1", defaultValue = "all",
-      description = "Which benchmark: demo, pk, closed-loop, loop-response, lattice or all (default).")
+      description = "Which benchmark: demo, pk, closed-loop, loop-response, lattice or all (default); "
+          + "campaign (per-sample cost of a demo-sized campaign; not part of all).")
   String which = "all";
 
   @Option(names = "--modes", split = ",", description = "p-k mode counts. Default: ${DEFAULT-VALUE}.")
@@ -91,6 +92,9 @@ final class BenchCommand implements Callable<Integer> {
     }
     if (which.equals("all") || which.equals("lattice")) {
       LatticeBench.run(out, repeats);
+    }
+    if (which.equals("campaign")) {
+      CampaignBench.run(out, repeats);
     }
     out.flush();
     return FlexMargin.EXIT_OK;

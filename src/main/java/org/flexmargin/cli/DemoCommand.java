@@ -34,7 +34,7 @@ final class DemoCommand implements Callable<Integer> {
   static final String RESOURCE_FOLDER = "/org/flexmargin/demo/";
   /** The bundled files: the case first, then the mode tables it references. */
   static final List<String> FILES =
-      List.of("demo-case.json", "ridgeline-mc7-full-payload.json", "ridgeline-mc7-empty.csv");
+      List.of("demo-case.json", "ridgeline-mc7-full-payload.json", "ridgeline-mc7-empty.csv", "demo-campaign.json");
   /** Default output folder, relative to the current folder (git-ignored in the repository). */
   static final Path DEFAULT_OUT = Path.of("reports", "demo");
 
@@ -63,6 +63,23 @@ final class DemoCommand implements Callable<Integer> {
   }
 
   /**
+   * Copies the bundled demo files ({@link #FILES}) into a folder.
+   *
+   * @param dir an existing folder
+   * @throws IOException if a file cannot be written
+   */
+  static void unpack(Path dir) throws IOException {
+    for (String name : FILES) {
+      try (InputStream in = DemoCommand.class.getResourceAsStream(RESOURCE_FOLDER + name)) {
+        if (in == null) {
+          throw new IllegalStateException("the demo file " + name + " is missing from the program's jar");
+        }
+        Files.copy(in, dir.resolve(name));
+      }
+    }
+  }
+
+  /**
    * Reads the bundled demo: its files are copied to a private temporary folder, read (every file is
    * read up front) and removed; the case's inputs name them as bundled files, with their hashes.
    *
@@ -72,14 +89,7 @@ final class DemoCommand implements Callable<Integer> {
     Path dir = null;
     try {
       dir = Files.createTempDirectory("flexmargin-demo-");
-      for (String name : FILES) {
-        try (InputStream in = DemoCommand.class.getResourceAsStream(RESOURCE_FOLDER + name)) {
-          if (in == null) {
-            throw new IllegalStateException("the demo file " + name + " is missing from the program's jar");
-          }
-          Files.copy(in, dir.resolve(name));
-        }
-      }
+      unpack(dir);
       AnalysisCase c = CaseReader.read(dir.resolve(FILES.get(0)));
       String prefix = dir.toString();
       List<InputFile> inputs = new ArrayList<>();

@@ -22,7 +22,7 @@ import picocli.CommandLine.Command;
     },
     subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
         MarginsCommand.class,
-        SimulateCommand.class,
+        SimulateCommand.class, CampaignCommand.class,
         EnvelopeCommand.class,
         CommandLine.HelpCommand.class},
     footer = {

@@ -58,7 +58,7 @@ public final class CaseFileUpdate {
     }
   }
 
-  private static void rebase(JsonNode node, Path from, Path to) {
+  static void rebase(JsonNode node, Path from, Path to) {
     if (node instanceof ObjectNode o) {
       for (Iterator<Map.Entry<String, JsonNode>> it = o.fields(); it.hasNext(); ) {
         Map.Entry<String, JsonNode> e = it.next();

@@ -52,7 +52,8 @@ final class Schemas {
     REQUIREMENTS("requirements.schema.json"),
     FILTERS("filters.schema.json"),
     LOOP_FILE("loop-file.schema.json"),
-    MEASURED_RESPONSE("measured-response.schema.json");
+    MEASURED_RESPONSE("measured-response.schema.json"),
+    CAMPAIGN("campaign.schema.json");
 
     private final String file;
 

@@ -118,13 +118,20 @@ class LayeringTest {
   }
 
   @Test
+  void campaignsRunSamplesOfTheSweep() {
+    onlyDependsOn("campaign", "model", "numerics", "aero", "lattice", "structure", "atmosphere", "flutter", "loop",
+        "ase", "clearance", "sweep", "io");
+  }
+
+  @Test
   void ioReadsIntoModelOnly() {
     onlyDependsOn("io", "model", "atmosphere");
   }
 
   @Test
   void reportReadsOnlyResults() {
-    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase", "clearance", "simulate");
+    onlyDependsOn("report", "model", "atmosphere", "flutter", "sweep", "loop", "ase", "clearance", "simulate",
+        "campaign");
   }
 
   @Test
@@ -135,6 +142,8 @@ class LayeringTest {
         .should().dependOnClassesThat().resideInAPackage("com.fasterxml.jackson..").check(classes);
     noClasses().that().resideOutsideOfPackage("org.flexmargin.report..")
         .should().dependOnClassesThat().resideInAPackage("org.knowm.xchart..").check(classes);
+    noClasses().that().resideOutsideOfPackage("org.flexmargin.campaign.spark..")
+        .should().dependOnClassesThat().resideInAPackage("org.apache.spark..").check(classes);
   }
 
   @Test

@@ -56,6 +56,9 @@ class SchemasTest {
     if (n.has("filters") || n.has("paths")) {
       return Schemas.Kind.FILTERS;
     }
+    if (n.has("base_case")) {
+      return Schemas.Kind.CAMPAIGN;
+    }
     if (n.has("name") && n.has("format")) {
       return Schemas.Kind.LOOP_FILE;
     }
