@@ -6,7 +6,7 @@ set -euo pipefail
 root="$(cd -P "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$root"
 status=0
-scripts/flexmargin sweep mode-tables/demo/demo-case.json --out reports/ridgeline-mc7-demo --no-svg --design-notches --quiet \
+scripts/flexmargin sweep mode-tables/demo/demo-case.json --out reports/ridgeline-mc7-demo --no-svg --design-notches --time-domain-check --quiet \
   || status=$?
 # exit 3 is expected: the demo's starting loop misses its requirements on purpose
 if [ "$status" -ne 0 ] && [ "$status" -ne 3 ]; then
