@@ -169,22 +169,7 @@ public final class CampaignReport {
   }
 
   private static ReportSection section(String id, String heading, java.util.function.Consumer<XhtmlWriter> body) {
-    return new ReportSection() {
-      @Override
-      public String id() {
-        return id;
-      }
-
-      @Override
-      public String heading() {
-        return heading;
-      }
-
-      @Override
-      public void writeBody(XhtmlWriter out) {
-        body.accept(out);
-      }
-    };
+    return ReportSection.of(id, heading, body);
   }
 
   private static void clearanceTable(XhtmlWriter w, CampaignSummary s) {

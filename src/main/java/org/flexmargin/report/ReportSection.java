@@ -18,4 +18,31 @@ public interface ReportSection {
    * @param out the document being written
    */
   void writeBody(XhtmlWriter out);
+
+  /**
+   * A section from its parts.
+   *
+   * @param id anchor id
+   * @param heading heading text
+   * @param body writes the body
+   * @return the section
+   */
+  static ReportSection of(String id, String heading, java.util.function.Consumer<XhtmlWriter> body) {
+    return new ReportSection() {
+      @Override
+      public String id() {
+        return id;
+      }
+
+      @Override
+      public String heading() {
+        return heading;
+      }
+
+      @Override
+      public void writeBody(XhtmlWriter out) {
+        body.accept(out);
+      }
+    };
+  }
 }
