@@ -2,7 +2,9 @@ package org.flexmargin.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.model.AnalysisCase;
@@ -49,8 +51,10 @@ final class CheckCommand implements Callable<Integer> {
     out.printf(Locale.ROOT, "  last point:  %s%n", Tables.condition(path.at(path.gridPoints() - 1)));
     out.printf(Locale.ROOT, "method: %s, damping limit g = %.3f%n", c.options().method().label(),
         c.options().dampingLimitG());
+    Map<Configuration, ConfigurationModel> models = new LinkedHashMap<>();
     for (Configuration cfg : c.configurations()) {
       ConfigurationModel m = ConfigurationModel.of(cfg);
+      models.put(cfg, m);
       out.printf(Locale.ROOT, "configuration %s: %d elastic modes; aerodynamics: %s%n",
           cfg.name(), m.modes().size(), m.system().aero().description());
       for (ElasticMode mode : m.modes().modes()) {
@@ -74,7 +78,7 @@ final class CheckCommand implements Callable<Integer> {
             fp.schedule().dynamicPressurePa().length > 1 ? "on dynamic pressure" : "constant");
       }
       for (Configuration cfg : c.configurations()) {
-        var plant = ServoMargins.loopAt(ConfigurationModel.of(cfg), cfg, loop, path.at(0)).plant();
+        var plant = ServoMargins.loopAt(models.get(cfg), cfg, loop, path.at(0)).plant();
         double[] sp = plant.shortPeriodRoots();
         out.printf(Locale.ROOT, "  %s airframe alone at the first point: short-period roots %.3f%+.3fi and %.3f%+.3fi 1/s%s%n",
             cfg.name(), sp[0], sp[1], sp[2], sp[3], Math.max(sp[0], sp[2]) > 0 ? " (unstable: the loop must stabilise it)" : "");

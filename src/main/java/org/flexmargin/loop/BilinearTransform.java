@@ -65,12 +65,7 @@ public final class BilinearTransform {
     int deg = p.length - 1;
     for (int i = 0; i < p.length; i++) {
       int power = deg - i;
-      double[] term = Polynomials.multiply(Polynomials.binomialPower(1, -1, power),
-          Polynomials.binomialPower(1, 1, n - power));
-      double scale = p[i] * Math.pow(c, power);
-      for (int k = 0; k <= n; k++) {
-        out[k] += scale * term[k];
-      }
+      addBinomialProduct(p[i] * Math.pow(c, power), power, n, 1, out);
     }
     return out;
   }
@@ -105,11 +100,15 @@ public final class BilinearTransform {
   /** Adds sum_k q_k (1 - k s)^k (1 + k s)^(n-k), ascending powers of s, to out. */
   private static void accumulate(double[] q, int n, double halfT, double[] out) {
     for (int i = 0; i < q.length; i++) {
-      double[] term = Polynomials.multiply(Polynomials.binomialPower(1, -halfT, i),
-          Polynomials.binomialPower(1, halfT, n - i));
-      for (int j = 0; j <= n; j++) {
-        out[j] += q[i] * term[j];
-      }
+      addBinomialProduct(q[i], i, n, halfT, out);
+    }
+  }
+
+  /** Adds scale (1 - h x)^m (1 + h x)^(n-m), ascending powers of x, to out (length n + 1). */
+  private static void addBinomialProduct(double scale, int m, int n, double h, double[] out) {
+    double[] term = Polynomials.multiply(Polynomials.binomialPower(1, -h, m), Polynomials.binomialPower(1, h, n - m));
+    for (int k = 0; k <= n; k++) {
+      out[k] += scale * term[k];
     }
   }
 }
