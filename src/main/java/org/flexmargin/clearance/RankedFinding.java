@@ -57,9 +57,9 @@ public record RankedFinding(ClearanceCheck check, Severity severity, double spee
         Severity.values().length, severity.words(), speedEasMps, check.description(), values);
   }
 
+  /** Value and unit symbol; only units with a symbol reach here (stability is written in words). */
   private String value(double v) {
-    String unit = check.unit().symbol();
-    return String.format(Locale.ROOT, "%.4g", v) + (unit.isEmpty() ? "" : " " + unit);
+    return String.format(Locale.ROOT, "%.4g %s", v, check.unit().symbol());
   }
 
   /**

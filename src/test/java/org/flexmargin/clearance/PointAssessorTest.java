@@ -212,6 +212,31 @@ class PointAssessorTest {
   }
 
   @Test
+  void checksSayWhichWayTheGainMayMoveInWhichBandAndRegime() {
+    // K = 2: gain may rise (|L| = 1/3 at the phase crossover); K = 8: it may only fall (|L| = 4/3);
+    // phase crossover at sqrt 2 rad/s = 0.2251 Hz (closed form above), rigid-body band
+    PointAssessment rise = PointAssessor.assess(REQ, 100, F1_HZ, MARGINS.analyse(thirdOrder(2), 0.01, 100),
+        List.of(), null);
+    assertEquals("gain margin (gain increase) at 0.2251 Hz, rigid-body band, normal envelope",
+        only(rise, CheckKind.GAIN_INCREASE_MARGIN).description());
+    PointAssessment fall = PointAssessor.assess(REQ, 130, F1_HZ, MARGINS.analyse(thirdOrder(8), 0.01, 100),
+        List.of(), null);
+    assertTrue(only(fall, CheckKind.GAIN_REDUCTION_MARGIN).description()
+        .startsWith("gain margin (gain reduction) at 0.2251 Hz, rigid-body band, up to limit speed"),
+        only(fall, CheckKind.GAIN_REDUCTION_MARGIN).description());
+    // the same crossover above a first aeroelastic mode at 0.1 Hz is in the aeroelastic band
+    PointAssessment aero = PointAssessor.assess(REQ, 100, 0.1, MARGINS.analyse(thirdOrder(2), 0.01, 100),
+        List.of(), null);
+    assertTrue(only(aero, CheckKind.GAIN_INCREASE_MARGIN).description().contains(", aeroelastic band,"));
+    // below 0.06 Hz: the gain crossover of K = 0.1 (|L| = 1 at w = 0.05 rad/s, 0.0080 Hz, derived
+    // from 0.1/(w sqrt(w^2+1) sqrt(w^2+4)) = 1 to first order in w) lies in the low-frequency band
+    PointAssessment slow = PointAssessor.assess(REQ, 100, F1_HZ, MARGINS.analyse(thirdOrder(0.1), 0.001, 100),
+        List.of(), null);
+    assertTrue(only(slow, CheckKind.PHASE_MARGIN).description().contains(", low-frequency band,"),
+        only(slow, CheckKind.PHASE_MARGIN).description());
+  }
+
+  @Test
   void checkSignsAreConsistent() {
     assertThrows(InvalidInputException.class, () -> new ClearanceCheck(CheckKind.PHASE_MARGIN,
         "rigid_body", "x", 45, 30, CheckUnit.DEGREE, RequiredSense.AT_LEAST, 1.0, 0.5));
