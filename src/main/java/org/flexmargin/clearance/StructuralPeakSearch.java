@@ -171,21 +171,30 @@ public final class StructuralPeakSearch {
 
     double db(double x) {
       eval(x);
-      return 10 * Math.log10(Math.max(v[0] * v[0] + v[1] * v[1], Double.MIN_NORMAL));
+      return gainDb(v[0], v[1]);
     }
 
-    double phaseDeg(double x) {
-      eval(x);
-      return Math.toDegrees(Math.atan2(v[1], v[0]));
-    }
-
-    /** |arg L + 180 deg|, wrapped, in [0, 180]. */
     double distance(double x) {
-      return Math.abs(wrapDeg(phaseDeg(x) + 180));
+      eval(x);
+      return distanceDeg(Math.toDegrees(Math.atan2(v[1], v[0])));
     }
   }
 
-  /** Refined samples: x = ln w, gain dB, phase deg, phase distance deg. */
+  /** 20 log10 |re + j im|, floored at the smallest normal number so that a zero stays finite. */
+  private static double gainDb(double re, double im) {
+    return 10 * Math.log10(Math.max(re * re + im * im, Double.MIN_NORMAL));
+  }
+
+  /** |arg L + 180 deg|, wrapped, in [0, 180]: the distance of a phase from -180 deg (mod 360). */
+  private static double distanceDeg(double phaseDeg) {
+    return Math.abs(wrapDeg(phaseDeg + 180));
+  }
+
+  /**
+   * Refined samples: x = ln w, gain dB, phase deg, phase distance deg. A grid is created with the
+   * capacity it will need (a refinement level adds fewer samples than it holds; one more for the
+   * inserted peak). The phase serves the refinement only and is not kept by {@link #insert}.
+   */
   private static final class Grid {
     double[] x;
     double[] db;
@@ -201,20 +210,11 @@ public final class StructuralPeakSearch {
     }
 
     void add(double xv, Sampler s) {
-      if (n == x.length) {
-        int c = 2 * n;
-        x = Arrays.copyOf(x, c);
-        db = Arrays.copyOf(db, c);
-        ph = Arrays.copyOf(ph, c);
-        d = Arrays.copyOf(d, c);
-      }
       s.eval(xv);
-      double re = s.v[0];
-      double im = s.v[1];
       x[n] = xv;
-      db[n] = 10 * Math.log10(Math.max(re * re + im * im, Double.MIN_NORMAL));
-      ph[n] = Math.toDegrees(Math.atan2(im, re));
-      d[n] = Math.abs(wrapDeg(ph[n] + 180));
+      db[n] = gainDb(s.v[0], s.v[1]);
+      ph[n] = Math.toDegrees(Math.atan2(s.v[1], s.v[0]));
+      d[n] = distanceDeg(ph[n]);
       n++;
     }
 
@@ -227,15 +227,12 @@ public final class StructuralPeakSearch {
       int at = -i - 1;
       add(xv, s);
       double dbv = db[n - 1];
-      double phv = ph[n - 1];
       double dv = d[n - 1];
       System.arraycopy(x, at, x, at + 1, n - 1 - at);
       System.arraycopy(db, at, db, at + 1, n - 1 - at);
-      System.arraycopy(ph, at, ph, at + 1, n - 1 - at);
       System.arraycopy(d, at, d, at + 1, n - 1 - at);
       x[at] = xv;
       db[at] = dbv;
-      ph[at] = phv;
       d[at] = dv;
     }
 
