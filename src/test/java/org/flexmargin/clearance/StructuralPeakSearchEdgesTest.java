@@ -140,6 +140,35 @@ class StructuralPeakSearchEdgesTest {
   }
 
   @Test
+  void aGainStepAloneIsEnoughToRefine() {
+    // a zero-phase response (real, positive: 180 deg from -180 everywhere), so only the gain steps
+    // can drive the refinement: L = 0.1 + A + B, A = 0.5/(1 + ((1 - (w/wa)^2)/0.02)^2) a broad
+    // bump at 4.6 Hz (0.6 at its top, where the initial samples peak) and B = k/|1 - r^2 + 2 j zeta r|
+    // at 5.2 Hz, zeta 1e-6, whose maximum k/(2 zeta sqrt(1 - zeta^2)) (Thomson, Theory of Vibration)
+    // is 20 at r = sqrt(1 - 2 zeta^2). A varies by ~2e-9 relative across B's width and
+    // shifts the maximum by far less than its width: expected peak 0.1 + A(w_B) + 20, to ~1e-8.
+    double wa = 2 * Math.PI * 4.6;
+    double wb = 2 * Math.PI * 5.2;
+    double k = 4e-5;
+    double zeta = 1e-6;
+    java.util.function.DoubleUnaryOperator bump = w -> {
+      double e = (1 - (w / wa) * (w / wa)) / 0.02;
+      return 0.5 / (1 + e * e);
+    };
+    SisoFrequencyFunction l = (w, v) -> {
+      double[] b = mode(k, wb, zeta, w);
+      v[0] = 0.1 + bump.applyAsDouble(w) + Math.hypot(b[0], b[1]);
+      v[1] = 0;
+    };
+    StructuralModeAssessment a = StructuralPeakSearch.assess(MODE, l, -6, 60, U);
+    double peak = 0.1 + bump.applyAsDouble(wb) + k / (2 * zeta * Math.sqrt(1 - zeta * zeta));
+    // 1e-8 relative of the amplitude is 9e-8 dB; 1e-6 dB leaves room for the refined maximum
+    assertEquals(20 * Math.log10(peak), a.peakDb(), 1e-6);
+    assertEquals(5.2, a.peakFrequencyHz(), 1e-5 * 5.2);
+    assertEquals(StructuralStabilisation.PHASE_STABILISED, a.status());
+  }
+
+  @Test
   void aPhaseWindingFasterThanAnyRefinementStopsAtTheSampleCap() {
     // L = 0.1 e^{-j w tau}, tau = 1000 s: 360 000 deg of phase over the band, so every interval
     // stays coarser than 5 deg and the refinement runs until its cap of 20 000 samples. The gain
