@@ -243,7 +243,6 @@ public final class NotchOptimiser {
     double[] hi = new double[nm];
     double[] excess = new double[nm];
     java.util.Arrays.fill(lo, Double.MAX_VALUE);
-    java.util.Arrays.fill(hi, 0);
     java.util.Arrays.fill(excess, Double.NEGATIVE_INFINITY);
     double[][] peak = before.peakDb();
     double[][] hz = before.peakHz();
