@@ -304,4 +304,32 @@ class NotchEvaluatorTest {
     assertEquals(inc, e.gainIncreaseMarginDb()[0], 0.03);
     assertEquals(red, e.gainReductionMarginDb()[0], 0.03);
   }
+
+  @Test
+  void tiesKeepTheFirstGridPointTheFirstGridAndTheFirstCrossover() {
+    LoopSamples.Builder b = LoopSamples.builder();
+    int g = b.modeGrid(10, 0.02, 9, 11);
+    int h = b.modeGrid(20, 0.02, 18, 22);
+    int r = b.rigidGrid(0.01, 5);
+    // |L| = 1 on every grid point of both grids of one mode: the first point of the first grid
+    b.add(label("flat"), ZERO, ClosedForm.constant(1, 0), List.of("m", "m"), new int[] {h, g}, r);
+    b.add(label("wavy"), ZERO, WAVY, List.of(), new int[0], r);
+    SampleEvaluation e = new NotchEvaluator(b.build()).evaluate(List.of());
+    assertEquals(0, e.peakDb()[0][0], 1e-12);
+    assertEquals(18, e.peakHz()[0][0], 1e-12);
+    // no notch: zero loss at all six crossovers, reported at the first, exp(-2 pi/3) rad/s
+    assertEquals(0, e.phaseLossDeg()[1], 0.0);
+    assertEquals(Math.exp(-2 * Math.PI / 3) / TWO_PI, e.phaseLossCrossoverHz()[1], 1e-9);
+  }
+
+  @Test
+  void aLoopAboveUnityEverywhereHasNoCrossingAtAll() {
+    LoopSamples.Builder b = LoopSamples.builder();
+    int r = b.rigidGrid(0.01, 5);
+    b.add(label("high"), ZERO, ClosedForm.constant(2, 0), List.of(), new int[0], r);
+    SampleEvaluation e = new NotchEvaluator(b.build()).evaluate(List.of());
+    assertEquals(Double.POSITIVE_INFINITY, e.phaseMarginDeg()[0]);
+    assertEquals(Double.POSITIVE_INFINITY, e.gainIncreaseMarginDb()[0]);
+    assertEquals(Double.NEGATIVE_INFINITY, e.gainReductionMarginDb()[0]);
+  }
 }

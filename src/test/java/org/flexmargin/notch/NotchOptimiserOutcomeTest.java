@@ -23,6 +23,12 @@ class NotchOptimiserOutcomeTest {
    * the carrying path: crossover near wc, resonance peak k/(2 zeta) at wn (closed form).
    */
   private static LoopSamples samples(NotchDesignSpec spec, double wc, double lag, double fn, double k) {
+    return samples(spec, wc, lag, fn, k, Double.NaN);
+  }
+
+  /** As above, the samples labelled with an equivalent airspeed (m/s). */
+  private static LoopSamples samples(NotchDesignSpec spec, double wc, double lag, double fn, double k,
+      double eas) {
     double zeta = 0.01;
     LoopSamples.Builder b = LoopSamples.builder();
     for (double s : spec.shiftFactors()) {
@@ -48,7 +54,7 @@ class NotchOptimiserOutcomeTest {
       double[] band = CaseLoopSampler.band(modes, 0, spec.modeBandFraction());
       int g = b.modeGrid(fn * s, zeta, band[0], band[1]);
       int r = b.rigidGrid(0.01, spec.rigidBandFraction() * fn * s);
-      b.add(new SampleLabel("constructed", 0, Double.NaN, Double.NaN, s), ClosedForm.constant(0, 0), path,
+      b.add(new SampleLabel("constructed", 0, eas, Double.NaN, s), ClosedForm.constant(0, 0), path,
           List.of("mode_1"), new int[] {g}, r);
     }
     return b.build();
@@ -154,5 +160,53 @@ class NotchOptimiserOutcomeTest {
     List<String> kinds = new ArrayList<>();
     r.violations().forEach(v -> kinds.add(v.kind().name()));
     assertTrue(kinds.contains("STRUCTURAL_PEAK"), kinds.toString());
+  }
+
+  /** Objective at a returned set, as documented: worst loss + 1000 x squared excesses. */
+  private static double objective(OptimisedNotches r, NotchDesignSpec spec, double eas) {
+    double target = spec.peakLimitDb() - spec.designMarginDb();
+    double pen = 0;
+    boolean[] held = r.constrained();
+    for (int i = 0; i < held.length; i++) {
+      for (double p : r.after().peakDb()[i]) {
+        pen += sq(Math.max(0, p - target));
+      }
+      if (held[i]) {
+        pen += sq(Math.max(0, spec.requiredPhaseMarginDeg(eas) - r.after().phaseMarginDeg()[i]));
+        pen += sq(Math.max(0, spec.requiredGainMarginDb(eas) - r.after().gainIncreaseMarginDb()[i]));
+        pen += sq(Math.max(0, r.after().gainReductionMarginDb()[i] + spec.requiredGainMarginDb(eas)));
+      }
+    }
+    return r.after().worstPhaseLossDeg() + 1000 * pen;
+  }
+
+  @Test
+  void infeasibleSetsReportTheObjectiveOfTheHeldRun() {
+    NotchDesignSpec spec = NotchDesignSpec.defaults();
+    double wc = TWO_PI * 0.8;
+    LoopSamples s = samples(spec, wc, wc / Math.tan(Math.toRadians(40)), 2.0, 0.1);
+    OptimisedNotches r = new NotchOptimiser().optimise(s, spec);
+    assertFalse(r.feasible());
+    double expected = objective(r, spec, Double.NaN);
+    assertTrue(expected > r.after().worstPhaseLossDeg(), "a penalty remains");
+    assertEquals(expected, r.diagnostics().finalObjective(), 1e-9 * expected);
+    // held and free runs each count at least 2n + 1 = 7 evaluations per BOBYQA run
+    assertTrue(r.diagnostics().evaluations() > 8 * 7, "evaluations " + r.diagnostics().evaluations());
+  }
+
+  @Test
+  void withATableTheHeldMarginIsThatOfTheSampleSpeed() {
+    // the loop of the phase-cost case, now at 140 m/s EAS where the invented table asks 25 deg /
+    // 4 dB instead of 45 deg / 6 dB
+    NotchDesignSpec spec = NotchDesignSpec.defaults().withMarginTable(NotchDesignSpecTest.table());
+    double wc = TWO_PI * 0.8;
+    LoopSamples s = samples(spec, wc, wc / Math.tan(Math.toRadians(40)), 2.0, 0.1, 140);
+    OptimisedNotches r = new NotchOptimiser().optimise(s, spec);
+    assertTrue(r.feasible(), () -> String.join("; ", r.reasons()));
+    for (int i = 0; i < s.size(); i++) {
+      assertTrue(r.after().phaseMarginDeg()[i] >= 25 - NotchOptimiser.FEASIBILITY_TOLERANCE);
+    }
+    assertTrue(r.after().worstPhaseLossDeg() > 5, "the notch spends more than the 5 deg to spare at 45 deg");
+    assertEquals(objective(r, spec, 140), r.diagnostics().finalObjective(), 1e-9);
   }
 }

@@ -154,6 +154,32 @@ class NotchOptimiserRulesTest {
   }
 
   @Test
+  void aViolationMustExceedTheToleranceStrictly() {
+    // with a 0 dB limit and zero required margins the excesses below are exactly 0.01 (binary
+    // exact differences with zero): not violations; 0.02 is
+    LoopSamples s = samples(List.of(at("cfg", 55, 1), at("cfg", 65, 1)), "wing");
+    SampleEvaluation e = new SampleEvaluation(new double[][] {{0.01}, {0.02}}, new double[][] {{10}, {11}},
+        new double[2], new double[2], new double[] {-0.01, -0.02}, new double[] {-0.01, -0.02},
+        new double[] {0.01, 0.02});
+    NotchDesignSpec spec = NotchDesignSpec.defaults().withPeakLimitDb(0).withRequiredMargins(0, 0);
+    List<ConstraintViolation> v = NotchOptimiser.violations(s, e, new boolean[] {true, true}, spec);
+    assertEquals(4, v.size(), v.toString());
+    for (ConstraintViolation x : v) {
+      assertEquals(65, x.where().speedEasMps());
+      assertEquals(0.02, x.excess(), 1e-15);
+    }
+  }
+
+  @Test
+  void aModePeakingExactlyAtTheLimitNeedsNoNotch() {
+    LoopSamples s = samples(List.of(at("x", 50, 1)), "p", "q");
+    SampleEvaluation e = peaks(new double[][] {{-6, -5}}, new double[][] {{60, 20}});
+    List<double[]> c = NotchOptimiser.clusters(s, e, NotchDesignSpec.defaults());
+    assertEquals(1, c.size());
+    assertArrayEquals(new double[] {20, 20, 1}, c.get(0), 1e-12);
+  }
+
+  @Test
   void marginRequirementsFollowTheTableAtEachSampleSpeed() {
     // invented table: 45 deg / 6 dB up to 100 m/s, 35 deg / 5 dB up to 120, 25 deg / 4 dB to 150
     LoopSamples s = samples(List.of(at("cfg", 90, 1), at("cfg", 110, 1), at("cfg", 140, 1)), "wing");
@@ -230,6 +256,12 @@ class NotchOptimiserRulesTest {
     assertTrue(o.violations().isEmpty());
     assertTrue(o.reasons().isEmpty());
     assertArrayEquals(new boolean[] {true, false}, o.constrained());
+    // against 0 deg / 17 dB neither is held (gain-increase margins 16.5 and 12.0 dB); against
+    // 0 deg / 11 dB both are
+    assertArrayEquals(new boolean[] {false, false},
+        new NotchOptimiser().optimise(s, NotchDesignSpec.defaults().withRequiredMargins(0, 17)).constrained());
+    assertArrayEquals(new boolean[] {true, true},
+        new NotchOptimiser().optimise(s, NotchDesignSpec.defaults().withRequiredMargins(0, 11)).constrained());
     assertEquals(o.before(), o.after());
     OptimiserDiagnostics d = o.diagnostics();
     assertEquals("none needed", d.method());
@@ -246,5 +278,24 @@ class NotchOptimiserRulesTest {
     // the held flags are a copy
     o.constrained()[1] = true;
     assertFalse(o.constrained()[1]);
+  }
+
+  /** L = (s + 1)^2 / s^3: -180 deg at w = 1 with |L| = 2 (gain-reduction margin -6.02 dB). */
+  @Test
+  void aSampleIsHeldOnlyWhenItsGainReductionMarginReachesMinusTheRequirement() {
+    SisoFrequencyFunction conditional = (w, out) -> {
+      out[0] = -2 * w / (w * w * w);
+      out[1] = (1 - w * w) / (w * w * w);
+    };
+    LoopSamples.Builder b = LoopSamples.builder();
+    int g = b.modeGrid(10, 0.05, 9, 11);
+    int r = b.rigidGrid(0.01, 5);
+    b.add(at("a", 40, 1), ClosedForm.constant(0, 0), conditional, List.of("wing"), new int[] {g}, r);
+    LoopSamples s = b.build();
+    // its phase margin is 21.4 deg (1 + w^2 = w^3 at w_c = 1.466: 180 - 270 + 2 atan w_c), so ask for 0 deg
+    assertArrayEquals(new boolean[] {true},
+        new NotchOptimiser().optimise(s, NotchDesignSpec.defaults().withRequiredMargins(0, 6)).constrained());
+    assertArrayEquals(new boolean[] {false},
+        new NotchOptimiser().optimise(s, NotchDesignSpec.defaults().withRequiredMargins(0, 8)).constrained());
   }
 }
