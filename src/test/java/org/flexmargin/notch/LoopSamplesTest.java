@@ -33,8 +33,12 @@ class LoopSamplesTest {
     int r = b.rigidGrid(0.01, 1.0);
     // 0.01..0.5 Hz: log10(50) = 1.69897 decades -> ceil(101.94) + 1 = 103
     int r2 = b.rigidGrid(0.01, 0.5);
-    assertEquals(List.of(0, 1, 2, 3, 4, 5), List.of(g1, g2, g3, g4, r, r2));
-    b.add(label("a"), ZERO, ClosedForm.constant(1, 0), List.of("m"), new int[] {g1}, r);
+    // the band-fraction form again: 10 Hz +-10 %, the 9..11 Hz band
+    int g5 = b.modeGrid(10, 0.01, 0.1);
+    assertEquals(List.of(0, 1, 2, 3, 4, 5, 6), List.of(g1, g2, g3, g4, r, r2, g5));
+    // the builder chains
+    b.add(label("a"), ZERO, ClosedForm.constant(1, 0), List.of("m"), new int[] {g1}, r)
+        .add(label("b"), ZERO, ClosedForm.constant(1, 0), List.of("m"), new int[] {g5}, r);
     LoopSamples s = b.build();
     int[] expected = {42, 22, 102, 27, 121, 103};
     for (int i = 0; i < expected.length; i++) {
@@ -52,8 +56,9 @@ class LoopSamplesTest {
     assertEquals(TWO_PI * 0.01, rg[0], 1e-14);
     assertEquals(TWO_PI, rg[120], 1e-12);
     assertEquals(Math.pow(10, 1.0 / 60), rg[61] / rg[60], 1e-12);
-    // stored values: one sample with one mode grid (42) and the rigid grid (121)
-    assertEquals(42 + 121, s.storedValues());
+    assertEquals(42, s.grids().get(g5).length);
+    // stored values: two samples with one mode grid (42) and the rigid grid (121) each
+    assertEquals(2 * (42 + 121), s.storedValues());
   }
 
   @Test

@@ -71,6 +71,9 @@ class NotchHelpersTest {
     assertNull(y.where());
     assertEquals(new PhaseCost("z", -3, 0.5, s.label(3)), NotchDesigner.phaseCost(s, e, "z"));
     assertEquals(0.0, NotchDesigner.phaseCost(s, e, "absent").worstLossDeg());
+    // the first sample the worst
+    SampleEvaluation first = evaluation(none, none, new double[] {4, 1, 2, 3, 0}, new double[] {1, 1, 1, 1, 1});
+    assertEquals(new PhaseCost("all", 4, 1, s.label(0)), NotchDesigner.phaseCost(s, first, null));
   }
 
   @Test
