@@ -69,10 +69,10 @@ public final class NotchOptimiser {
     }
     List<double[]> clusters = clusters(samples, before, spec);
     if (clusters.isEmpty()) {
-      List<ConstraintViolation> v = violations(samples, before, constrained, spec);
-      return new OptimisedNotches(v.isEmpty(), List.of(), before, before, constrained, v,
-          v.isEmpty() ? List.of() : List.of("rigid-body margins are not met even without notches"),
-          new OptimiserDiagnostics("none needed", 1, 0, 0.0, PENALTY_WEIGHT, worstExcess(before, spec), v.size(),
+      // no peak above the limit, and the held samples meet their margins by their definition:
+      // nothing can be violated
+      return new OptimisedNotches(true, List.of(), before, before, constrained, List.of(), List.of(),
+          new OptimiserDiagnostics("none needed", 1, 0, 0.0, PENALTY_WEIGHT, worstExcess(before, spec), 0,
               samples.size(), samples.storedValues()));
     }
     Run run = run(ev, clusters, spec, constrained, true, speeds);
@@ -243,7 +243,6 @@ public final class NotchOptimiser {
     double[] hi = new double[nm];
     double[] excess = new double[nm];
     java.util.Arrays.fill(lo, Double.MAX_VALUE);
-    java.util.Arrays.fill(hi, 0);
     java.util.Arrays.fill(excess, Double.NEGATIVE_INFINITY);
     double[][] peak = before.peakDb();
     double[][] hz = before.peakHz();

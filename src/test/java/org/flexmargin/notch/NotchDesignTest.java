@@ -36,18 +36,9 @@ class NotchDesignTest {
 
   private static final double TWO_PI = 2 * Math.PI;
 
-  /**
-   * Closed-form notch N(j w) = (wn^2 - w^2 + 2j zz wn w) / (wn^2 - w^2 + 2j zp wn w), written out
-   * here independently of {@link NotchFilter#response}: returns {|N|, arg N (rad)}.
-   */
+  /** Closed-form notch response of a designed notch ({@link ClosedForm#notch}): {|N|, arg N (rad)}. */
   private static double[] notch(DesignedNotch n, double omega) {
-    double wn = TWO_PI * n.centreHz();
-    double re = wn * wn - omega * omega;
-    double a = Math.atan2(2 * n.numeratorDampingRatio() * wn * omega, re);
-    double b = Math.atan2(2 * n.denominatorDampingRatio() * wn * omega, re);
-    double mag = Math.hypot(re, 2 * n.numeratorDampingRatio() * wn * omega)
-        / Math.hypot(re, 2 * n.denominatorDampingRatio() * wn * omega);
-    return new double[] {mag, a - b};
+    return ClosedForm.notch(n.centreHz(), n.numeratorDampingRatio(), n.denominatorDampingRatio(), omega);
   }
 
   /**
