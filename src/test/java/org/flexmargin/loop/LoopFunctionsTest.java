@@ -196,4 +196,10 @@ class LoopFunctionsTest {
     assertEquals(0.025, both.pureDelayS(), 1e-15);
     assertInstanceOf(TransferFunctionBlock.class, OpenLoops.modelLoop(file(0, 0), PadeOrder.ORDER_2));
   }
+
+  /** A static gain has no states, hence no eigenvalues. */
+  @Test
+  void aStaticGainHasNoEigenvalues() {
+    assertEquals(0, StateSpace.staticGain(2.5).eigenvalues().size());
+  }
 }

@@ -72,4 +72,12 @@ class MarginDiagnosticsTest {
     assertEquals(c, r.governingDelayMargin().orElseThrow());
     assertEquals(0.16, r.delayMarginS().orElseThrow(), 0.0);
   }
+
+  /** Angles wrap into (-pi, pi]: -pi itself maps to +pi, +pi stays, 3 pi/2 becomes -pi/2. */
+  @Test
+  void wrapKeepsTheHalfOpenInterval() {
+    assertEquals(Math.PI, LoopMargins.wrap(-Math.PI), 0.0);
+    assertEquals(Math.PI, LoopMargins.wrap(Math.PI), 0.0);
+    assertEquals(-Math.PI / 2, LoopMargins.wrap(1.5 * Math.PI), 1e-15);
+  }
 }

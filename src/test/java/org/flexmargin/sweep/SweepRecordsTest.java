@@ -34,13 +34,15 @@ class SweepRecordsTest {
         1e-6);
   }
 
-  /** s = -1 + 6 pi j: 3 Hz, zeta = 1/|s|, V-g g = 2 Re/Im = -1/(3 pi). */
+  /** s = -0.5 + 6 pi j: 3 Hz, zeta = 0.5/|s|, V-g g = 2 Re/Im = -1/(6 pi). */
   @Test
   void closedLoopRootDampingAndFrequency() {
-    ClosedLoopRoot r = new ClosedLoopRoot(-1, 6 * Math.PI, "wing_bending");
+    ClosedLoopRoot r = new ClosedLoopRoot(-0.5, 6 * Math.PI, "wing_bending");
     assertEquals(3, r.frequencyHz(), 1e-15);
-    assertEquals(1 / Math.hypot(1, 6 * Math.PI), r.dampingRatio(), 1e-15);
-    assertEquals(-1 / (3 * Math.PI), r.dampingG(), 1e-15);
+    assertEquals(0.5 / Math.hypot(0.5, 6 * Math.PI), r.dampingRatio(), 1e-15);
+    assertEquals(-1 / (6 * Math.PI), r.dampingG(), 1e-15);
+    // a root at the origin is not growing: g = -infinity
+    assertEquals(Double.NEGATIVE_INFINITY, new ClosedLoopRoot(0, 0, "x").dampingG());
     assertEquals(Double.POSITIVE_INFINITY, new ClosedLoopRoot(0.5, 0, "x").dampingG());
     assertEquals(Double.NEGATIVE_INFINITY, new ClosedLoopRoot(-0.5, 0, "x").dampingG());
     assertEquals(1.0, new ClosedLoopRoot(-0.5, 0, "x").dampingRatio(), 0.0);
