@@ -45,8 +45,7 @@ public record NotchFilter(double centreFrequencyHz, double zeroDampingRatio,
         "a finite attenuation > 0 dB", String.valueOf(depthDb));
     StateSpace.require(Double.isFinite(widthHz) && widthHz > 0, "notch.width_hz",
         "a finite value > 0", String.valueOf(widthHz));
-    StateSpace.require(Double.isFinite(centreFrequencyHz) && centreFrequencyHz > 0,
-        "notch.centre_frequency_hz", "a finite value > 0", String.valueOf(centreFrequencyHz));
+    // the centre frequency is validated by the constructor, with the same field and wording
     double r = Math.pow(10, -depthDb / 20);
     double zp = widthHz / (2 * centreFrequencyHz) / Math.sqrt(r);
     return new NotchFilter(centreFrequencyHz, r * zp, zp);
