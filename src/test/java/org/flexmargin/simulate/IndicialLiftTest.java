@@ -2,6 +2,7 @@ package org.flexmargin.simulate;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.flexmargin.loop.StateSpace;
@@ -74,8 +75,11 @@ class IndicialLiftTest {
     // the limits themselves are valid: a1 + a2 = 1 (no lift at once), a zero amplitude
     assertEquals(0.0, new IndicialLift("x", 0.6, 1, 0.4, 1).initialValue(), 1e-15);
     assertEquals(1.0, new IndicialLift("x", 0, 1, 0, 1).value(0), 1e-15);
-    assertThrows(IllegalArgumentException.class, () -> IndicialLift.WAGNER.filter(0, B));
-    assertThrows(IllegalArgumentException.class, () -> IndicialLift.WAGNER.filter(V, 0));
+    for (double[] vb : new double[][] {{0, B}, {-V, B}, {V, 0}, {V, -B}}) {
+      IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+          () -> IndicialLift.WAGNER.filter(vb[0], vb[1]));
+      assertTrue(e.getMessage().startsWith("speed and semichord must be > 0"), e.getMessage());
+    }
   }
 
   @Test
