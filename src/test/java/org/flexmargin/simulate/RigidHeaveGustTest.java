@@ -114,11 +114,12 @@ class RigidHeaveGustTest {
   static AircraftSimulationModel heaveModel(double mass, double liftPerElevator, GustPenetration penetration,
       LiftGrowth growth) {
     SensorSpec accel = new SensorSpec("accel", SensorKind.NORMAL_ACCELEROMETER, "cg", 0.0, 0.0);
+    SensorSpec vane = new SensorSpec("vane", SensorKind.ANGLE_OF_ATTACK_VANE, "cg", 0.0, 0.0);
     ModeTable modes = new ModeTable("heave", List.of(new ElasticMode("far", 80.0, 0.02, 10.0,
         Map.of("cg", new ShapeValue(0, 0)))));
     RigidBody rb = new RigidBody(mass, 5000, AREA, CHORD, CLA, 0, -10, 0, liftPerElevator, 0, Map.of());
     ZeroAero aero = new ZeroAero();
-    AircraftPlant plant = new AircraftPlant(modes, StructuralModel.fromModeTable(modes), aero, rb, List.of(accel), FC);
+    AircraftPlant plant = new AircraftPlant(modes, StructuralModel.fromModeTable(modes), aero, rb, List.of(accel, vane), FC);
     LoopSpec loop = new LoopSpec(new ActuatorSpec(ActuatorOrder.FIRST, 10, 0.7), List.of(accel),
         List.of(new FeedbackPath("accel", 0.1, 0, List.of(), null)), 0, 0, 2);
     ServoLoop servo = new ServoLoop(plant, FlightControlLaw.of(loop, FC.dynamicPressurePa()));

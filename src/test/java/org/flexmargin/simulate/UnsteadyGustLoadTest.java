@@ -83,6 +83,32 @@ class UnsteadyGustLoadTest {
   }
 
   @Test
+  void theVaneReadsTheGeometricAngleAndAZeroDistanceChangesNothing() {
+    // Step gust of U on the heavy aircraft: the vane reads alpha + U / V at once (it measures the
+    // flow angle, not the lift), alpha staying below 1e-4 U / V (heave a t, as above). Half the
+    // lift on a tailplane at d = 0 gives the same load factor as no penetration, to round-off.
+    double mass = 1e7;
+    double u = 5;
+    AircraftSimulationModel plain = RigidHeaveGustTest.heaveModel(mass, RigidHeaveGustTest.CLA / 2, null,
+        LiftGrowth.UNSTEADY);
+    AircraftSimulationModel zero = RigidHeaveGustTest.heaveModel(mass, RigidHeaveGustTest.CLA / 2,
+        new GustPenetration(0.0, 0.0, 1.0), LiftGrowth.UNSTEADY);
+    double dt = 0.0005;
+    InputSignal gust = new InputSignal.Step(u, 0.0);
+    TimeHistory a = LinearSimulation.run(plain.system(), dt, 300, List.of(t -> 0.0, gust::value), null, null);
+    TimeHistory b = LinearSimulation.run(zero.system(), dt, 300, List.of(t -> 0.0, gust::value), null, null);
+    double[] vane = a.channel("sensor_vane_rad");
+    double[] na = a.channel("sensor_accel_g");
+    double[] nb = b.channel("sensor_accel_g");
+    double sharp = sharpEdged(mass, u);
+    for (int k = 0; k <= 300; k += 20) {
+      assertEquals(u / V, vane[k], 1e-4 * u / V, "vane at step " + k);
+      assertEquals(na[k], nb[k], 1e-12 * sharp, "load at step " + k);
+    }
+    assertTrue(na[300] > 0.5 * sharp, "the gust lift has grown: " + na[300] / sharp);
+  }
+
+  @Test
   void quasiSteadyIsTheDefaultAndAddsNoStates() {
     AircraftSimulationModel qs = RigidHeaveGustTest.heaveModel(RigidHeaveGustTest.MASS, 0, null);
     AircraftSimulationModel unsteady = RigidHeaveGustTest.heaveModel(RigidHeaveGustTest.MASS, 0, null,
