@@ -52,6 +52,7 @@ import picocli.CommandLine.Spec;
     footer = {"", "Examples:",
         "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 100 --input doublet --amplitude-deg 1",
         "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 60 --gust-mps 10 --turbulence dryden",
+        "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 60 --gust-mps 10 --lift-growth unsteady",
         "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 60 --rate-limit-deg-s 40 "
             + "--position-limit-deg 20 --input 3211"})
 final class SimulateCommand implements Callable<Integer> {

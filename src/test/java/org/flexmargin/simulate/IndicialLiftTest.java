@@ -90,6 +90,14 @@ class IndicialLiftTest {
     InvalidInputException e = assertThrows(InvalidInputException.class, () -> LiftGrowth.of("--lift-growth", "wagner"));
     assertEquals("--lift-growth", e.fieldPath());
     assertThrows(InvalidInputException.class, () -> LiftGrowth.of("f", null));
+    // a scenario without a lift growth is quasi-steady; null is refused
+    ActuatorLimits none = new ActuatorLimits(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY);
+    SimulationScenario plain = new SimulationScenario(LoopClosure.OPEN, null, 5, List.of(30.0), null, null, none, 1,
+        0.01, 1, 1, null, false);
+    assertEquals(LiftGrowth.QUASI_STEADY, plain.liftGrowth());
+    InvalidInputException missing = assertThrows(InvalidInputException.class, () -> new SimulationScenario(
+        LoopClosure.OPEN, null, 5, List.of(30.0), null, null, none, 1, 0.01, 1, 1, null, false, null));
+    assertEquals("lift_growth", missing.fieldPath());
   }
 
   private static double[] step(IndicialLift f, double dt, int steps) {
