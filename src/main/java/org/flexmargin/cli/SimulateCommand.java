@@ -8,6 +8,8 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.flexmargin.atmosphere.StandardAtmosphere;
 import org.flexmargin.io.CaseReader;
+import org.flexmargin.io.GustSection;
+import org.flexmargin.io.GustSectionReader;
 import org.flexmargin.model.ActuatorSpec;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.Configuration;
@@ -22,6 +24,7 @@ import org.flexmargin.simulate.ActuatorLimits;
 import org.flexmargin.simulate.AircraftSimulation;
 import org.flexmargin.simulate.GustPenetration;
 import org.flexmargin.simulate.InputSignal;
+import org.flexmargin.simulate.LiftGrowth;
 import org.flexmargin.simulate.LoopClosure;
 import org.flexmargin.simulate.RandomResponse;
 import org.flexmargin.simulate.RateLimitCycle;
@@ -49,6 +52,7 @@ import picocli.CommandLine.Spec;
     footer = {"", "Examples:",
         "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 100 --input doublet --amplitude-deg 1",
         "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 60 --gust-mps 10 --turbulence dryden",
+        "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 60 --gust-mps 10 --lift-growth unsteady",
         "  flexmargin simulate mode-tables/demo/demo-case.json --speed-eas 60 --rate-limit-deg-s 40 "
             + "--position-limit-deg 20 --input 3211"})
 final class SimulateCommand implements Callable<Integer> {
@@ -119,7 +123,8 @@ final class SimulateCommand implements Callable<Integer> {
 
   @Option(names = "--penetration-m", paramLabel = "D",
       description = "Gust penetration: the tailplane meets gusts and turbulence D m after the wing (delay D / V_TAS); "
-          + "needs --downwash-gradient and --elevator-effectiveness (default: no penetration).")
+          + "needs --downwash-gradient and --elevator-effectiveness (default: the case's gusts section, else no "
+          + "penetration). Each of the three options overrides the case's value.")
   Double penetrationM;
 
   @Option(names = "--downwash-gradient", paramLabel = "E",
@@ -130,6 +135,12 @@ final class SimulateCommand implements Callable<Integer> {
       description = "tau_e = d alpha_tail / d delta, in (0, 1.5] (with --penetration-m): the tailplane's share of "
           + "the angle-of-attack forces is the elevator's times (1 - E) / T.")
   Double elevatorEffectiveness;
+
+  @Option(names = "--lift-growth", paramLabel = "KIND",
+      description = "Rigid-body lift growth: quasi_steady (forces follow w/V and alpha at once) or unsteady (gust "
+          + "angle through Kuessner's function, angle of attack through Wagner's; default: the case's gusts "
+          + "section, else quasi_steady).")
+  String liftGrowth;
 
   @Option(names = "--rate-limit-deg-s", paramLabel = "R", description = "Actuator rate limit, deg/s (default: the case's actuator rate_limit_deg_s, else none).")
   Double rateLimitDegS;
@@ -179,7 +190,9 @@ final class SimulateCommand implements Callable<Integer> {
       throw new InvalidInputException("--speed-eas", "a speed > 0 m/s", String.valueOf(eas));
     }
     double alt = altitudeM != null ? altitudeM : (c.sweep() instanceof SpeedSweep s ? s.altitudeM() : 0.0);
-    SimulationScenario scenario = scenario(c.loop());
+    GustSection gusts = GustSectionReader.read(caseFile);
+    gusts.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
+    SimulationScenario scenario = scenario(c.loop(), gusts);
     SimulationPoint point = SimulationPoint.of(ConfigurationModel.of(conf), conf, c.loop(),
         StandardAtmosphere.atEquivalentSpeed(alt, eas));
     SimulationResult r = AircraftSimulation.run(point, scenario);
@@ -196,7 +209,7 @@ final class SimulateCommand implements Callable<Integer> {
     return r.closedLoopMaxRealPartPerS() > 0 ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : FlexMargin.EXIT_OK;
   }
 
-  private SimulationScenario scenario(LoopSpec loop) {
+  private SimulationScenario scenario(LoopSpec loop, GustSection gusts) {
     ActuatorSpec actuator = loop.actuator();
     List<String> sensorNames = loop.sensors().stream().map(SensorSpec::name).toList();
     for (String name : sensorNoise.keySet()) {
@@ -235,24 +248,38 @@ final class SimulateCommand implements Callable<Integer> {
     List<Double> gradients = gradientM.isEmpty() ? AircraftSimulation.standardGradientLengthsM() : gradientM;
     SensorNoise noise = sensorNoise.isEmpty() ? null : new SensorNoise(sensorNoise, sensorNoiseHz);
     return new SimulationScenario(openLoop ? LoopClosure.OPEN : LoopClosure.CLOSED, pilot, gustMps, gradients, t,
-        noise, limits, durationS, stepS, turbulenceS, seed, penetration(), true);
+        noise, limits, durationS, stepS, turbulenceS, seed, penetration(gusts), true, liftGrowth(gusts));
   }
 
-  private GustPenetration penetration() {
-    if (penetrationM == null) {
-      if (downwashGradient != null || elevatorEffectiveness != null) {
+  /** The lift growth of the option, else of the case, else quasi-steady. */
+  private LiftGrowth liftGrowth(GustSection gusts) {
+    if (liftGrowth != null) {
+      return LiftGrowth.of("--lift-growth", liftGrowth);
+    }
+    return gusts.liftGrowth() == null ? LiftGrowth.QUASI_STEADY : LiftGrowth.of("gusts.lift_growth", gusts.liftGrowth());
+  }
+
+  /** Gust penetration from the options, each overriding the case's value. */
+  private GustPenetration penetration(GustSection gusts) {
+    boolean inCase = gusts.hasPenetration();
+    Double d = penetrationM != null ? penetrationM : inCase ? Double.valueOf(gusts.wingToTailM()) : null;
+    Double e = downwashGradient != null ? downwashGradient : inCase ? Double.valueOf(gusts.downwashGradient()) : null;
+    Double t = elevatorEffectiveness != null ? elevatorEffectiveness
+        : inCase ? Double.valueOf(gusts.elevatorEffectiveness()) : null;
+    if (d == null) {
+      if (e != null || t != null) {
         throw new InvalidInputException("--penetration-m", "the wing-to-tail distance (with --downwash-gradient and "
-            + "--elevator-effectiveness)", "nothing");
+            + "--elevator-effectiveness, or all three in the case's gusts section)", "nothing");
       }
       return null;
     }
-    if (downwashGradient == null) {
+    if (e == null) {
       throw new InvalidInputException("--downwash-gradient", "d epsilon / d alpha at the tail, in [0, 1)", "nothing");
     }
-    if (elevatorEffectiveness == null) {
+    if (t == null) {
       throw new InvalidInputException("--elevator-effectiveness", "tau_e in (0, 1.5]", "nothing");
     }
-    return new GustPenetration(penetrationM, downwashGradient, elevatorEffectiveness);
+    return new GustPenetration(d, e, t);
   }
 
   private static List<String> summary(String caseName, SimulationResult r) {
@@ -274,7 +301,11 @@ final class SimulateCommand implements Callable<Integer> {
       }
     }
     if (!r.gusts().isEmpty()) {
-      s.add(String.format(Locale.ROOT, "1-cosine gusts of %.2f m/s:", r.scenario().gustPeakVelocityMps()));
+      GustPenetration pen = r.scenario().penetration();
+      s.add(String.format(Locale.ROOT, "1-cosine gusts of %.2f m/s (%s lift growth; %s):",
+          r.scenario().gustPeakVelocityMps(), r.scenario().liftGrowth().word(), pen == null ? "no penetration"
+              : String.format(Locale.ROOT, "tailplane %.2f m behind the wing, downwash gradient %.2f, elevator "
+                  + "effectiveness %.2f", pen.wingToTailM(), pen.downwashGradient(), pen.elevatorEffectiveness())));
       s.add(String.format(Locale.ROOT, "  %10s %12s %14s %12s %14s", "H m", "peak load g", "elev rate deg/s",
           "elevator deg", "pitch rate deg/s"));
       SimulationResult.GustPeak worst = null;

@@ -96,7 +96,7 @@ public final class CaseReader {
   private static final List<String> CASE_KEYS =
       List.of("format", "name", "description", "plausibility_overrides", "configurations", "sweep", "options",
           "envelope",
-          "loop", "requirements");
+          "loop", "gusts", "requirements");
   private static final List<String> CONFIG_KEYS =
       List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
   private static final List<String> RIGID_BODY_KEYS = List.of("mass_kg", "pitch_inertia_kg_m2",
@@ -161,6 +161,7 @@ public final class CaseReader {
     AnalysisOptions options = opts == null ? AnalysisOptions.defaults() : readOptions(opts.object("options"));
     JsonField loopField = root.optional("loop");
     LoopSpec loop = loopField == null ? null : readLoop(loopField.object("a loop section"), configs, configurations, ctx);
+    GustSectionReader.read(root.optional("gusts"), ctx.log);
     JsonField rq = root.optional("requirements");
     ClearanceRequirements requirements = rq == null ? null : readRequirements(rq, ctx);
     List<InputFile> inputs = new ArrayList<>(ctx.inputs.values());
@@ -253,7 +254,7 @@ public final class CaseReader {
    * Reads {@code plausibility_overrides}: the ids of plausible ranges ({@link PlausibleRange}) whose
    * bounds this case lifts; values beyond them are then read with a warning.
    */
-  private static void readOverrides(JsonField f, ReadLog log) {
+  static void readOverrides(JsonField f, ReadLog log) {
     if (f == null) {
       return;
     }

@@ -78,6 +78,8 @@ public enum PlausibleRange {
       "elevator rate limits lie between about 10 and 500 deg/s"),
   ACTUATOR_POSITION_LIMIT("actuator.position_limit_deg", "deg", 0, 90, 2, 45, false,
       "elevator deflection limits lie between a few degrees and about 45 deg"),
+  GUST_WING_TO_TAIL("gusts.wing_to_tail_m", "m", 0, 500, 0, 40, true,
+      "the tailplane sits within the aircraft's length behind the wing"),
   SENSOR_LEVER_ARM("sensor.lever_arm_m", "m", -500, 500, -50, 50, true,
       "a sensor sits on the aircraft, within its length of the reference station"),
   SENSOR_BANDWIDTH("sensor.bandwidth_hz", "Hz", 0, 1e4, 0, 1000, true,

@@ -27,17 +27,17 @@ public final class AircraftSimulation {
    * @return the results
    */
   public static SimulationResult run(SimulationPoint point, SimulationScenario scenario) {
-    AircraftSimulationModel model = point.model(scenario.closure(), scenario.penetration());
+    AircraftSimulationModel model = point.model(scenario.closure(), scenario.penetration(), scenario.liftGrowth());
     double maxRe = model.system().eigenvalues().maxRealPart();
     List<String> notes = new ArrayList<>(point.servo().plant().assumptions());
     notes.add("aerodynamics for the time domain: " + point.fitDescription());
     notes.addAll(point.fitWarnings());
     notes.add("hold and delay ahead of the actuator as Pade approximations, as in the closed-loop eigenvalues");
+    String forces = liftGrowthNote(scenario.liftGrowth(), point.referenceChordM() / 2);
     if (scenario.penetration() == null || scenario.penetration().wingToTailM() == 0) {
-      notes.add("gusts act on the whole aircraft at once (no penetration delay) as an angle of attack w/V with "
-          + "quasi-steady forces (no unsteady lift growth)");
+      notes.add("gusts act on the whole aircraft at once (no penetration delay) as an angle of attack w/V; " + forces);
     } else {
-      notes.add("gusts act as an angle of attack w/V with quasi-steady forces (no unsteady lift growth); "
+      notes.add("gusts act as an angle of attack w/V; " + forces + "; "
           + scenario.penetration().describe(point.condition().speedTasMps(),
               AircraftSimulationModel.maxOmega(point.servo().plant().stateSpace(point.rational()))));
     }
@@ -186,6 +186,16 @@ public final class AircraftSimulation {
 
   private static double peak(TimeHistory h, String name) {
     return Math.abs(h.channel(name)[h.peakIndex(name)]);
+  }
+
+  private static String liftGrowthNote(LiftGrowth growth, double semichordM) {
+    if (growth == LiftGrowth.QUASI_STEADY) {
+      return "quasi-steady forces (no unsteady lift growth)";
+    }
+    return String.format(Locale.ROOT, "unsteady lift growth: gust angle through %s, angle of attack through %s "
+        + "(2-D indicial functions on the whole rigid-body angle-of-attack force, reduced time V t / b, "
+        + "b = %.3f m); elastic forces keep their rational fit", IndicialLift.KUSSNER.name(),
+        IndicialLift.WAGNER.name(), semichordM);
   }
 
   /** @return the standard gradient lengths of a sweep of discrete gusts: 9 to 107 m (CS-25.341) */

@@ -13,6 +13,7 @@ import org.flexmargin.loop.LinearBlock;
 import org.flexmargin.loop.SecondOrderActuator;
 import org.flexmargin.loop.SeriesBlock;
 import org.flexmargin.loop.StateSpace;
+import org.flexmargin.model.SensorKind;
 import org.flexmargin.model.SensorSpec;
 
 /**
@@ -28,10 +29,17 @@ import org.flexmargin.model.SensorSpec;
  *
  * <p>Inputs: {@code pilot_command_rad} (added to the law's output at the elevator command, before
  * the hold), {@code gust_velocity_mps} (vertical gust at the wing, positive up, an angle-of-attack
- * change w_g / V: its forces are those of alpha in the quasi-steady coupling coefficients, without
- * unsteady gust lift growth). Without {@link GustPenetration} the whole aircraft meets the gust at
- * once; with it, the tailplane's share of those forces sees the gust delayed by d / V (Padé states
- * after the actuator's, output {@link #TAIL_GUST}).
+ * change w_g / V: its forces are those of alpha in the quasi-steady coupling coefficients).
+ * Without {@link GustPenetration} the whole aircraft meets the gust at once; with it, the
+ * tailplane's share of those forces sees the gust delayed by d / V (Padé states after the
+ * actuator's, output {@link #TAIL_GUST}).
+ *
+ * <p>Lift growth ({@link LiftGrowth}): quasi-steady by default. With {@link LiftGrowth#UNSTEADY}
+ * every force the model takes per unit angle of attack (the alpha column of the aircraft: lift,
+ * pitching moment, modal forces per alpha) acts on Wagner's effective angle of the angle of
+ * attack, and every gust force on Küssner's effective angle of w/V (wing and tail each with its
+ * own filter, {@link IndicialLift}); two states per filter follow the delay's. The elastic forces
+ * Q(ik) eta keep their rational fit. An angle-of-attack vane reads the geometric angles.
  *
  * <p>Outputs: every sensor, alpha, rigid pitch rate, each modal coordinate, the elevator
  * position, rate and command (actuator input), the law's output, and both inputs. Immutable.
@@ -252,6 +260,23 @@ public final class AircraftSimulationModel {
    */
   public static AircraftSimulationModel of(ServoLoop servo, RationalAerodynamics rational, LoopClosure closure,
       GustPenetration penetration) {
+    return of(servo, rational, closure, penetration, LiftGrowth.QUASI_STEADY, Double.NaN);
+  }
+
+  /**
+   * Assembles the model with gust penetration and a choice of lift growth.
+   *
+   * @param servo the loop at the flight condition (plant and law)
+   * @param rational the elastic aerodynamics in rational form
+   * @param closure whether the law's output drives the actuator
+   * @param penetration wing-to-tail delay of the gust, or null for none
+   * @param growth quasi-steady or unsteady (Wagner and Küssner) rigid-body lift
+   * @param semichordM b, half the reference chord (m), the length of the reduced time V t / b;
+   *     used only with {@link LiftGrowth#UNSTEADY}
+   * @return the model
+   */
+  public static AircraftSimulationModel of(ServoLoop servo, RationalAerodynamics rational, LoopClosure closure,
+      GustPenetration penetration, LiftGrowth growth, double semichordM) {
     AircraftPlant plant = servo.plant();
     StateSpace aircraft = plant.stateSpace(rational);
     if (!"alpha".equals(aircraft.stateNames().get(0))) {
@@ -292,7 +317,11 @@ public final class AircraftSimulationModel {
       delay = penetration.delay(plant.condition().speedTasMps(), maxOmega(aircraft));
     }
     double share = penetration == null ? 0 : penetration.tailShareOfElevator();
-    return new Assembly(plant, aircraft, paths, sensorOf, pre, wAct, zAct, nq, closure, delay, share).build();
+    Lift lift = growth == LiftGrowth.UNSTEADY
+        ? new Lift(IndicialLift.WAGNER.filter(plant.condition().speedTasMps(), semichordM),
+            IndicialLift.KUSSNER.filter(plant.condition().speedTasMps(), semichordM))
+        : null;
+    return new Assembly(plant, aircraft, paths, sensorOf, pre, wAct, zAct, nq, closure, delay, share, lift).build();
   }
 
   /** @return 1.5 times the highest frequency among the aircraft's eigenvalues, at least 2 pi 10 rad/s */
@@ -304,6 +333,9 @@ public final class AircraftSimulationModel {
     }
     return 1.5 * max;
   }
+
+  /** Wagner's filter for the angle of attack and Küssner's for the gust angle. */
+  private record Lift(StateSpace wagner, StateSpace kussner) {}
 
   /** Builds the matrices: every signal as a row over [x; pilot; gust; noise of each sensor]. */
   private static final class Assembly {
@@ -319,6 +351,8 @@ public final class AircraftSimulationModel {
     private final StateSpace delay;
     private final double tailShare;
     private final int delayOffset;
+    private final Lift lift;
+    private final int liftOffset;
     private final int na;
     private final int[] pathOffset;
     private final int preOffset;
@@ -328,7 +362,7 @@ public final class AircraftSimulationModel {
     private final int width;
 
     Assembly(AircraftPlant plant, StateSpace aircraft, List<StateSpace> paths, int[] sensorOf, StateSpace pre,
-        double w, double zeta, int nq, LoopClosure closure, StateSpace delay, double tailShare) {
+        double w, double zeta, int nq, LoopClosure closure, StateSpace delay, double tailShare, Lift lift) {
       this.plant = plant;
       this.aircraft = aircraft;
       this.paths = paths;
@@ -350,7 +384,10 @@ public final class AircraftSimulationModel {
       this.preOffset = off;
       this.actOffset = off + pre.stateCount();
       this.delayOffset = actOffset + nq;
-      this.n = delayOffset + (delay == null ? 0 : delay.stateCount());
+      this.liftOffset = delayOffset + (delay == null ? 0 : delay.stateCount());
+      this.lift = lift;
+      // unsteady lift: Wagner on alpha, Kuessner on the gust at the wing and (with a delay) at the tail
+      this.n = liftOffset + (lift == null ? 0 : 2 * 2 + (delay == null ? 0 : 2));
       this.width = n + 2 + aircraft.outputCount();
       this.dyn = new DMatrixRMaj(n, width);
     }
@@ -364,6 +401,37 @@ public final class AircraftSimulationModel {
       for (int j = 0; j < map.numCols; j++) {
         target.add(row, j, k * map.get(0, j));
       }
+    }
+
+    /**
+     * Adds a filter driven by {@code input}: its states from {@code offset} on.
+     *
+     * @return the filter's output as a row
+     */
+    private DMatrixRMaj filtered(StateSpace filter, int offset, DMatrixRMaj input) {
+      DMatrixRMaj out = row();
+      int k = filter.stateCount();
+      for (int i = 0; i < k; i++) {
+        for (int j = 0; j < k; j++) {
+          dyn.set(offset + i, offset + j, filter.a().get(i, j));
+        }
+        addRow(dyn, offset + i, filter.b().get(i, 0), input);
+        out.set(0, offset + i, filter.c().get(0, i));
+      }
+      addRow(out, 0, filter.d().get(0, 0), input);
+      return out;
+    }
+
+    /**
+     * Adds the angle-of-attack and gust forces of one row: {@code perAlpha} times the angle of
+     * attack plus the gust angle, the tailplane's share of the gust taken at the tail.
+     *
+     * @param angles alpha, gust angle at the wing and at the tail, as rows
+     */
+    private void addAngleForces(DMatrixRMaj target, int r, double perAlpha, double perElevator, DMatrixRMaj[] angles) {
+      addRow(target, r, perAlpha, angles[0]);
+      addRow(target, r, perAlpha - tailShare * perElevator, angles[1]);
+      addRow(target, r, tailShare * perElevator, angles[2]);
     }
 
     AircraftSimulationModel build() {
@@ -386,27 +454,37 @@ public final class AircraftSimulationModel {
         }
         tail.set(0, n + 1, delay.d().get(0, 0));
       }
-      // sensors: C x + D delta + (C[:, alpha] / V) w_g
+      // angles as seen by the geometry (a vane) and as they act on the forces
+      DMatrixRMaj[] geometric = {unit(0), unit(n + 1), tail.copy()};
+      CommonOps_DDRM.scale(1 / v, geometric[1]);
+      CommonOps_DDRM.scale(1 / v, geometric[2]);
+      DMatrixRMaj[] forcing = geometric;
+      if (lift != null) {
+        forcing = new DMatrixRMaj[] {filtered(lift.wagner(), liftOffset, geometric[0]),
+            filtered(lift.kussner(), liftOffset + 2, geometric[1]),
+            delay == null ? row() : filtered(lift.kussner(), liftOffset + 4, geometric[2])};
+      }
+      // sensors: C x + D delta + C[:, alpha] (alpha + w_g / V); a vane reads the geometric angles,
+      // an accelerometer the forces
       int ns = cA.numRows;
       DMatrixRMaj[] sensors = new DMatrixRMaj[ns];
       for (int s = 0; s < ns; s++) {
         sensors[s] = row();
-        for (int j = 0; j < na; j++) {
+        for (int j = 1; j < na; j++) {
           sensors[s].set(0, j, cA.get(s, j));
         }
         addRow(sensors[s], 0, dA.get(s, 0), delta);
         sensors[s].set(0, n + 2 + s, 1);
-        sensors[s].add(0, n + 1, (cA.get(s, 0) - tailShare * dA.get(s, 0)) / v);
-        addRow(sensors[s], 0, tailShare * dA.get(s, 0) / v, tail);
+        boolean vane = plant.sensors().get(s).kind() == SensorKind.ANGLE_OF_ATTACK_VANE;
+        addAngleForces(sensors[s], 0, cA.get(s, 0), dA.get(s, 0), vane ? geometric : forcing);
       }
       // aircraft dynamics
       for (int i = 0; i < na; i++) {
-        for (int j = 0; j < na; j++) {
+        for (int j = 1; j < na; j++) {
           dyn.set(i, j, aA.get(i, j));
         }
         addRow(dyn, i, bA.get(i, 0), delta);
-        dyn.add(i, n + 1, (aA.get(i, 0) - tailShare * bA.get(i, 0)) / v);
-        addRow(dyn, i, tailShare * bA.get(i, 0) / v, tail);
+        addAngleForces(dyn, i, aA.get(i, 0), bA.get(i, 0), forcing);
       }
       // law paths
       DMatrixRMaj law = row();
@@ -507,6 +585,12 @@ public final class AircraftSimulationModel {
       }
       for (int i = 0; delay != null && i < delay.stateCount(); i++) {
         states.add("gust_delay_x" + (i + 1));
+      }
+      if (lift != null) {
+        states.addAll(List.of("wagner_lag1", "wagner_lag2", "kuessner_wing_lag1", "kuessner_wing_lag2"));
+        if (delay != null) {
+          states.addAll(List.of("kuessner_tail_lag1", "kuessner_tail_lag2"));
+        }
       }
       StateSpace sys = new StateSpace(CommonOps_DDRM.extract(dyn, 0, n, 0, n), CommonOps_DDRM.extract(dyn, 0, n, n, n + 2),
           CommonOps_DDRM.extract(out, 0, out.numRows, 0, n), CommonOps_DDRM.extract(out, 0, out.numRows, n, n + 2),

@@ -9,6 +9,7 @@ import org.flexmargin.ase.ServoLoop;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
+import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.model.LoopSpec;
 import org.flexmargin.sweep.ClosedLoopSweep;
 import org.flexmargin.sweep.ConfigurationModel;
@@ -26,13 +27,19 @@ import org.flexmargin.sweep.ServoMargins;
  * @param rational the elastic forces in rational form
  * @param fitDescription the fit and its worst element error, in words
  * @param fitWarnings the fit's own warnings
+ * @param referenceChordM the rigid body's reference chord c (m), &gt; 0; c / 2 is the length of
+ *     the reduced time of unsteady lift growth
  */
 public record SimulationPoint(String configurationName, FlightCondition condition, ServoLoop servo,
-    RationalAerodynamics rational, String fitDescription, List<String> fitWarnings) {
+    RationalAerodynamics rational, String fitDescription, List<String> fitWarnings, double referenceChordM) {
 
-  /** Copies. */
+  /** Copies and validates. */
   public SimulationPoint {
     fitWarnings = List.copyOf(fitWarnings);
+    if (!(referenceChordM > 0) || !Double.isFinite(referenceChordM)) {
+      throw new InvalidInputException("rigid_body.reference_chord_m", "a finite chord > 0 m",
+          String.valueOf(referenceChordM));
+    }
   }
 
   /**
@@ -54,7 +61,7 @@ public record SimulationPoint(String configurationName, FlightCondition conditio
         100 * fit.error().worstRelativeError());
     return new SimulationPoint(configuration.name(), condition,
         ServoMargins.loopAt(model, configuration, loop, condition), RationalAerodynamics.of(fit), text,
-        fit.warnings());
+        fit.warnings(), configuration.rigidBody().referenceChordM());
   }
 
   /**
@@ -71,6 +78,16 @@ public record SimulationPoint(String configurationName, FlightCondition conditio
    * @return the simulation model at this point
    */
   public AircraftSimulationModel model(LoopClosure closure, GustPenetration penetration) {
-    return AircraftSimulationModel.of(servo, rational, closure, penetration);
+    return model(closure, penetration, LiftGrowth.QUASI_STEADY);
+  }
+
+  /**
+   * @param closure open or closed loop
+   * @param penetration wing-to-tail gust delay, or null
+   * @param growth quasi-steady or unsteady rigid-body lift (reduced time on half the reference chord)
+   * @return the simulation model at this point
+   */
+  public AircraftSimulationModel model(LoopClosure closure, GustPenetration penetration, LiftGrowth growth) {
+    return AircraftSimulationModel.of(servo, rational, closure, penetration, growth, referenceChordM / 2);
   }
 }

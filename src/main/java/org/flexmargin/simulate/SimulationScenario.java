@@ -22,14 +22,18 @@ import org.flexmargin.model.InvalidInputException;
  *     meets the gust at once)
  * @param limitCycles whether to predict (and check by simulation) rate-limit limit cycles when
  *     the rate is limited and the loop closed
+ * @param liftGrowth quasi-steady or unsteady rigid-body lift for every run
  */
 public record SimulationScenario(LoopClosure closure, InputSignal pilotInput, double gustPeakVelocityMps,
     List<Double> gradientLengthsM, Turbulence turbulence, SensorNoise sensorNoise, ActuatorLimits limits, double durationS, double stepS,
-    double turbulenceDurationS, long seed, GustPenetration penetration, boolean limitCycles) {
+    double turbulenceDurationS, long seed, GustPenetration penetration, boolean limitCycles, LiftGrowth liftGrowth) {
   /** Validates and copies. */
   public SimulationScenario {
     if (closure == null) {
       throw new InvalidInputException("loop", "open or closed", "nothing");
+    }
+    if (liftGrowth == null) {
+      throw new InvalidInputException("lift_growth", "quasi_steady or unsteady", "nothing");
     }
     gradientLengthsM = List.copyOf(gradientLengthsM);
     for (int i = 0; i < gradientLengthsM.size(); i++) {
@@ -51,6 +55,15 @@ public record SimulationScenario(LoopClosure closure, InputSignal pilotInput, do
     if (limits == null) {
       throw new InvalidInputException("actuator_limits", "limits (infinite for none)", "nothing");
     }
+  }
+
+  /** A scenario with quasi-steady lift; the parameters as in the canonical constructor. */
+  public SimulationScenario(LoopClosure closure, InputSignal pilotInput, double gustPeakVelocityMps,
+      List<Double> gradientLengthsM, Turbulence turbulence, SensorNoise sensorNoise, ActuatorLimits limits,
+      double durationS, double stepS, double turbulenceDurationS, long seed, GustPenetration penetration,
+      boolean limitCycles) {
+    this(closure, pilotInput, gustPeakVelocityMps, gradientLengthsM, turbulence, sensorNoise, limits, durationS, stepS,
+        turbulenceDurationS, seed, penetration, limitCycles, LiftGrowth.QUASI_STEADY);
   }
 
   /** @return number of output steps of a deterministic run */

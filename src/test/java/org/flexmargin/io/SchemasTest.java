@@ -93,7 +93,8 @@ class SchemasTest {
   private static final Map<String, String> FRAGMENT_SCHEMA = Map.of(
       "sweep", "#/definitions/sweep", "uniform_wing", "#/definitions/uniform_wing",
       "typical_section", "#/definitions/typical_section", "rigid_body", "#/definitions/rigid_body",
-      "loop", "#/definitions/loop", "plausibility_overrides", "#/properties/plausibility_overrides");
+      "loop", "#/definitions/loop", "plausibility_overrides", "#/properties/plausibility_overrides",
+      "gusts", "#/definitions/gusts");
 
   @Test
   void everyExampleInTheDocumentationConformsToItsSchema() throws IOException {

@@ -36,6 +36,7 @@ class RigidHeaveGustTest {
   static final double MASS = 2000;
   static final double AREA = 20;
   static final double CLA = 5.0;
+  static final double CHORD = 1.5;
   static final FlightCondition FC = StandardAtmosphere.at(1000, 80);
 
   @Test
@@ -106,16 +107,23 @@ class RigidHeaveGustTest {
    * that share of the lift slope (pitching moments all zero, so q stays zero).
    */
   static AircraftSimulationModel heaveModel(double mass, double liftPerElevator, GustPenetration penetration) {
+    return heaveModel(mass, liftPerElevator, penetration, LiftGrowth.QUASI_STEADY);
+  }
+
+  /** As above, with a choice of lift growth (reduced time on half the reference chord, 0.75 m). */
+  static AircraftSimulationModel heaveModel(double mass, double liftPerElevator, GustPenetration penetration,
+      LiftGrowth growth) {
     SensorSpec accel = new SensorSpec("accel", SensorKind.NORMAL_ACCELEROMETER, "cg", 0.0, 0.0);
+    SensorSpec vane = new SensorSpec("vane", SensorKind.ANGLE_OF_ATTACK_VANE, "cg", 0.0, 0.0);
     ModeTable modes = new ModeTable("heave", List.of(new ElasticMode("far", 80.0, 0.02, 10.0,
         Map.of("cg", new ShapeValue(0, 0)))));
-    RigidBody rb = new RigidBody(mass, 5000, AREA, 1.5, CLA, 0, -10, 0, liftPerElevator, 0, Map.of());
+    RigidBody rb = new RigidBody(mass, 5000, AREA, CHORD, CLA, 0, -10, 0, liftPerElevator, 0, Map.of());
     ZeroAero aero = new ZeroAero();
-    AircraftPlant plant = new AircraftPlant(modes, StructuralModel.fromModeTable(modes), aero, rb, List.of(accel), FC);
+    AircraftPlant plant = new AircraftPlant(modes, StructuralModel.fromModeTable(modes), aero, rb, List.of(accel, vane), FC);
     LoopSpec loop = new LoopSpec(new ActuatorSpec(ActuatorOrder.FIRST, 10, 0.7), List.of(accel),
         List.of(new FeedbackPath("accel", 0.1, 0, List.of(), null)), 0, 0, 2);
     ServoLoop servo = new ServoLoop(plant, FlightControlLaw.of(loop, FC.dynamicPressurePa()));
-    return AircraftSimulationModel.of(servo, aero, LoopClosure.OPEN, penetration);
+    return AircraftSimulationModel.of(servo, aero, LoopClosure.OPEN, penetration, growth, CHORD / 2);
   }
 
   /** No elastic aerodynamic forces (one mode, one lag root, all coefficients zero). */
