@@ -63,6 +63,16 @@ public final class NotchJson {
       return this;
     }
 
+    /** A whole number (a count, an index or a format version), written with every digit. */
+    Out num(String key, long v) {
+      sep();
+      if (key != null) {
+        sb.append(quote(key)).append(": ");
+      }
+      sb.append(v);
+      return this;
+    }
+
     /** A list entry with every digit of the double (17 significant digits round-trip exactly). */
     Out exact(double v) {
       sep();

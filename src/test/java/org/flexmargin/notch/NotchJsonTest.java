@@ -41,6 +41,10 @@ class NotchJsonTest {
 
   /** A hand-made design with values exact in six significant digits. */
   private static NotchDesignResult design(int violations) {
+    return design(violations, 321, 1234);
+  }
+
+  private static NotchDesignResult design(int violations, int evaluations, int storedValues) {
     NotchDesignSpec spec = NotchDesignSpec.defaults().withNotchPaths(List.of(0)).withPoints(2, 70.5);
     SampleLabel a = label("heavy", 52.5, 1.1);
     SampleLabel b = new SampleLabel("constructed", 0, Double.NaN, Double.NaN, 0.9);
@@ -56,7 +60,7 @@ class NotchJsonTest {
             b))),
         List.of(new PhaseCost("all", 3.25, 0.75, a), new PhaseCost("empty", 0, Double.NaN, null)),
         new PhaseCost("all", 1.5, 0.5, a),
-        new OptimiserDiagnostics("method words", 321, 4, 1e-7, 1000, -0.5, violations, 6, 1234),
+        new OptimiserDiagnostics("method words", evaluations, 4, 1e-7, 1000, -0.5, violations, 6, storedValues),
         v, List.of("first reason", "second\treason"),
         List.of(new MarginComparison(new RigidMargins("heavy", 7, 52.5, 50.5, 0.75, 12, Double.NEGATIVE_INFINITY, true),
             new RigidMargins("heavy", 7, 52.5, 47.25, 0.8125, 11.5, -8.5, false))),
@@ -188,6 +192,15 @@ class NotchJsonTest {
     assertEquals(89, v.get(49).get("value").asDouble());
     assertEquals(50, JSON.readTree(NotchJson.design(design(50), List.of())).get("violations").size());
     assertEquals(0, JSON.readTree(NotchJson.design(design(0), List.of())).get("violations").size());
+  }
+
+  @Test
+  void countsAreWrittenWithEveryDigit() {
+    // a count above a million would lose digits if written like a measured value (6 significant digits)
+    String text = NotchJson.design(design(0, 12_345_678, 1_234_567), List.of());
+    assertTrue(text.contains("\"evaluations\": 12345678,"), text);
+    assertTrue(text.contains("\"stored_values\": 1234567\n"), text);
+    assertTrue(text.contains("\"format\": 1,"), text);
   }
 
   @Test
