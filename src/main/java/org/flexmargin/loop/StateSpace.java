@@ -89,6 +89,8 @@ public final class StateSpace {
    * @return the system
    */
   public static StateSpace of(double[][] a, double[][] b, double[][] c, double[][] d) {
+    require(a != null && b != null && c != null && d != null, "state_space", "four matrices",
+        "a null matrix");
     int n = a.length;
     int p = d.length;
     int m = p == 0 ? (n == 0 ? 0 : b[0].length) : d[0].length;
@@ -106,6 +108,8 @@ public final class StateSpace {
    * @return the system
    */
   public static StateSpace of(DMatrixRMaj a, DMatrixRMaj b, DMatrixRMaj c, DMatrixRMaj d) {
+    require(a != null && b != null && c != null && d != null, "state_space", "four matrices",
+        "a null matrix");
     return new StateSpace(a, b, c, d, defaultNames("u", d.numCols), defaultNames("y", d.numRows),
         defaultNames("x", a.numRows));
   }

@@ -249,6 +249,16 @@ class StateSpaceTest {
   }
 
   @Test
+  void missingMatricesAreReportedNotThrownAsNullPointers() {
+    double[][] one = {{1}};
+    assertThrows(InvalidInputException.class, () -> StateSpace.of(null, one, one, one));
+    assertThrows(InvalidInputException.class, () -> StateSpace.of(one, one, one, null));
+    DMatrixRMaj m = new DMatrixRMaj(one);
+    assertThrows(InvalidInputException.class, () -> StateSpace.of(null, m, m, m));
+    assertThrows(InvalidInputException.class, () -> StateSpace.of(m, m, m, (DMatrixRMaj) null));
+  }
+
+  @Test
   void invalidMatricesAreRejected() {
     assertThrows(InvalidInputException.class, () -> StateSpace.of(new double[][] {{1, 0}},
         new double[][] {{1}}, new double[][] {{1}}, new double[][] {{0}}));
