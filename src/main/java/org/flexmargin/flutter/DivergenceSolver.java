@@ -6,6 +6,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
+import org.ejml.dense.row.MatrixFeatures_DDRM;
 import org.ejml.dense.row.NormOps_DDRM;
 import org.ejml.dense.row.SingularOps_DDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
@@ -133,7 +134,7 @@ public final class DivergenceSolver {
     DMatrixRMaj qr = realForces(system, k0);
     DMatrixRMaj k = new DMatrixRMaj(n, n, true, system.stiffnessFlat());
     DMatrixRMaj kInvQ = new DMatrixRMaj(n, n);
-    if (!CommonOps_DDRM.solve(k, qr, kInvQ)) {
+    if (!CommonOps_DDRM.solve(k, qr, kInvQ) || MatrixFeatures_DDRM.hasUncountable(kInvQ)) {
       throw new IllegalArgumentException(
           "stiffness matrix is singular: divergence needs the rigid body restrained (elastic modes only)");
     }

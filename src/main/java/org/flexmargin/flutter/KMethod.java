@@ -7,6 +7,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_ZDRM;
+import org.ejml.dense.row.MatrixFeatures_ZDRM;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.FlutterMethodKind;
@@ -229,7 +230,7 @@ public final class KMethod implements FlutterMethod {
         }
       }
       kcInverse = new ZMatrixRMaj(n, n);
-      if (!CommonOps_ZDRM.invert(kc.copy(), kcInverse)) {
+      if (!CommonOps_ZDRM.invert(kc.copy(), kcInverse) || MatrixFeatures_ZDRM.hasUncountable(kcInverse)) {
         throw new IllegalArgumentException("stiffness matrix is singular (k method needs elastic modes only)");
       }
     }
