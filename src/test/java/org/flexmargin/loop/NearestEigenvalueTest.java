@@ -148,4 +148,45 @@ class NearestEigenvalueTest {
     }
     assertEquals(1, sum, 1e-14);
   }
+
+  /**
+   * The same matrix scaled by 1000 (eigenvalues scale with it: -1000 +- 4000j, ...): the stopping
+   * test is relative to |lambda| and the residual test relative to |A|, so the iteration settles
+   * just as well on large roots. Tolerance 1e-12 relative, as above.
+   */
+  @Test
+  void settlesOnLargeRootsAsOnSmallOnes() {
+    DMatrixRMaj a = known();
+    CommonOps_DDRM.scale(1000, a);
+    NearestEigenvalue.Estimate e = NearestEigenvalue.near(a, -1100, 3800);
+    assertTrue(e.converged());
+    assertEquals(-1000, e.real(), 1e-12 * 4123);
+    assertEquals(4000, e.imag(), 1e-12 * 4123);
+  }
+
+  /** A shift exactly on an eigenvalue of diag(1, 2, 3) makes A - sigma I singular: refused. */
+  @Test
+  void refusesAShiftOnAnEigenvalue() {
+    DMatrixRMaj a = new DMatrixRMaj(new double[][] {{1, 0, 0}, {0, 2, 0}, {0, 0, 3}});
+    NearestEigenvalue.Estimate e = NearestEigenvalue.near(a, 2, 0);
+    assertFalse(e.converged());
+    assertEquals(1, e.iterations());
+  }
+
+  /**
+   * |A x - lambda x| for A = diag(2, 3) and x = (1, 0): 0 at lambda = 2, |2 - 2.5| = 0.5 at 2.5,
+   * |2 - (2 + j)| = 1 at 2 + j; for x = (0, j): |3 - 1| = 2 at lambda = 1.
+   */
+  @Test
+  void residualIsTheNormOfAxMinusLambdaX() {
+    DMatrixRMaj a = new DMatrixRMaj(new double[][] {{2, 0}, {0, 3}});
+    var x = new org.ejml.data.ZMatrixRMaj(2, 1);
+    x.set(0, 0, 1, 0);
+    assertEquals(0, NearestEigenvalue.residual(a, x, 2, 0), 0.0);
+    assertEquals(0.5, NearestEigenvalue.residual(a, x, 2.5, 0), 1e-15);
+    assertEquals(1, NearestEigenvalue.residual(a, x, 2, 1), 1e-15);
+    var y = new org.ejml.data.ZMatrixRMaj(2, 1);
+    y.set(1, 0, 0, 1);
+    assertEquals(2, NearestEigenvalue.residual(a, y, 1, 0), 1e-15);
+  }
 }
