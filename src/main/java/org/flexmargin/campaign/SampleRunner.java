@@ -12,22 +12,27 @@ import org.flexmargin.loop.GainCrossover;
 import org.flexmargin.loop.PhaseCrossover;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.CaseVariant;
+import org.flexmargin.model.Configuration;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Instability;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.ServoPoint;
+import org.flexmargin.sweep.SweepProgress;
 
 /**
  * Computes campaign samples: writes the sample's case as a plain case file (and its mode table)
  * into a scratch folder, reads it back like {@code sweep} does, analyses it and reduces the
- * result to a {@link SampleOutcome}. A failing sample gives an {@link SampleStatus#ERROR} outcome
- * with the message, never an exception. Thread-safe: each call uses its own scratch files.
+ * result to a {@link SampleOutcome}. Samples whose strip-theory forces are the same share the
+ * loop's interpolated forces ({@link SharedLoopAerodynamics}). A failing sample gives an
+ * {@link SampleStatus#ERROR} outcome with the message, never an exception. Thread-safe: each call
+ * uses its own scratch files.
  */
 public final class SampleRunner {
   private final CampaignPlan plan;
   private final CaseVariantWriter writer;
   private final Path scratch;
+  private final SharedLoopAerodynamics models = new SharedLoopAerodynamics();
 
   /**
    * @param plan the campaign's tasks
@@ -38,6 +43,11 @@ public final class SampleRunner {
     this.plan = plan;
     this.writer = new CaseVariantWriter(baseCaseFile);
     this.scratch = scratch;
+  }
+
+  /** @return the number of distinct loop force sources shared between samples so far */
+  int sharedLoopSources() {
+    return models.size();
   }
 
   /** @return the plan */
@@ -65,7 +75,9 @@ public final class SampleRunner {
       folder = Files.createTempDirectory(scratch, "task" + task + "-");
       Path file = writer.write(v, folder);
       AnalysisCase c = CaseReader.read(file);
-      ConfigurationResult r = CaseSweep.analyse(c.configurations().get(0), new PlannedPath(c.sweep()), c);
+      Configuration cfg = c.configurations().get(0);
+      ConfigurationResult r = CaseSweep.analyse(models.modelOf(cfg), cfg, new PlannedPath(c.sweep()), c,
+          SweepProgress.NONE);
       return outcome(task, cell, sample, draws, r);
     } catch (InputFileException e) {
       return error(task, cell, sample, draws, "perturbed input refused: " + e.getMessage());

@@ -45,14 +45,18 @@ final class CampaignBench {
       SampleRunner runner = new SampleRunner(plan, dir.resolve("demo-case.json"), scratch);
       runner.run(0);
       int n = Math.max(2, repeats);
+      double c0 = BenchCommand.cpuSeconds();
       long t0 = System.nanoTime();
       for (int t = 1; t <= n; t++) {
         runner.run(t);
       }
       double perSample = (System.nanoTime() - t0) * 1e-9 / n;
+      double cpuPerSample = (BenchCommand.cpuSeconds() - c0) / n;
       int cores = Runtime.getRuntime().availableProcessors();
       out.printf(Locale.ROOT, "campaign: demo full_payload, 8 modes, loop and requirements, 28 points; %d samples "
-          + "after warm-up: %.2f s per sample on one thread%n", n, perSample);
+          + "after warm-up: %.2f s per sample on one thread, %.2f s CPU per sample (all threads of the process; "
+          + "%.2f s CPU would run %d samples in 10 min on %d core(s))%n", n, perSample, cpuPerSample,
+          600.0 * cores / PROJECTED_SAMPLES, PROJECTED_SAMPLES, cores);
       out.printf(Locale.ROOT, "  projected %d-sample campaign: %.1f h of computing, %.1f h on %d core(s)%n",
           PROJECTED_SAMPLES, PROJECTED_SAMPLES * perSample / 3600, PROJECTED_SAMPLES * perSample / 3600 / cores,
           cores);

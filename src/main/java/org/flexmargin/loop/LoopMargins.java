@@ -3,6 +3,7 @@ package org.flexmargin.loop;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.DoubleBinaryOperator;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.optim.MaxEval;
@@ -260,14 +261,10 @@ public final class LoopMargins {
     }
 
     // 6. peak gain and disk margin
-    double[] peak = maximise(g, x -> {
-      f.at(Math.exp(x), v);
-      return Math.hypot(v[0], v[1]);
-    });
-    double[] disk = maximise(g, x -> {
-      f.at(Math.exp(x), v);
-      return Math.hypot(1 - v[0], v[1]) / (2 * Math.hypot(1 + v[0], v[1]));
-    });
+    DoubleBinaryOperator gain = Math::hypot;
+    DoubleBinaryOperator diskInverse = (re, im) -> Math.hypot(1 - re, im) / (2 * Math.hypot(1 + re, im));
+    double[] peak = maximise(g, gain, f, v);
+    double[] disk = maximise(g, diskInverse, f, v);
     double wPeak = Math.exp(peak[0]);
     PeakGain peakGain = new PeakGain(wPeak, wPeak / (2 * Math.PI), peak[1],
         20 * Math.log10(peak[1]));
@@ -280,13 +277,18 @@ public final class LoopMargins {
   }
 
   /**
-   * Maximises q(x) over the grid: samples q at every grid point, refines the largest local
-   * maxima by Brent's method on their neighbouring intervals, returns {x, q}.
+   * Maximises q(L(j w)) over the grid: takes q at every grid point from the L already sampled
+   * there (the same value a new evaluation would give), refines the largest local maxima by
+   * Brent's method on their neighbouring intervals, returns {x, q}.
    */
-  private static double[] maximise(Grid g, DoubleUnaryOperator q) {
+  private static double[] maximise(Grid g, DoubleBinaryOperator ofL, Counted f, double[] v) {
+    DoubleUnaryOperator q = x -> {
+      f.at(Math.exp(x), v);
+      return ofL.applyAsDouble(v[0], v[1]);
+    };
     double[] values = new double[g.size];
     for (int i = 0; i < g.size; i++) {
-      values[i] = q.applyAsDouble(g.x[i]);
+      values[i] = ofL.applyAsDouble(g.re[i], g.im[i]);
       if (Double.isNaN(values[i])) {
         values[i] = Double.POSITIVE_INFINITY;
       }

@@ -12,7 +12,8 @@ import org.flexmargin.flutter.FlutterCrossing;
  *     the exact frequency-domain loop when that refinement succeeded (see {@code refinements}),
  *     damping-limit crossings are those of the rational model
  * @param fitDescription the rational approximation used (lags, range, worst element error)
- * @param eigenSolves closed-loop eigen-decompositions performed
+ * @param eigenSolves full closed-loop eigen-decompositions performed (grid points, and onset refinement
+ *     steps where tracking the single root did not settle)
  * @param warnings numerical remarks (fit quality, unmatched roots)
  * @param assumptions modelling assumptions in words
  * @param refinements every g = 0 crossing of the rational model with its exact-loop refinement

@@ -18,6 +18,8 @@ import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
 import org.flexmargin.loop.CriticalPointSolver;
 import org.flexmargin.loop.Eigenvalues;
+import org.flexmargin.loop.NearestEigenvalue;
+import org.flexmargin.loop.StateSpace;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
@@ -33,8 +35,10 @@ import org.flexmargin.numerics.GreedyAssignment;
  * are Pade approximations of the loop's order. At each grid point all closed-loop eigenvalues are
  * computed; roots are followed from point to point by nearest-neighbour matching, and a sign
  * change of 2 Re(s) - g_level |Im(s)| on a followed root is refined by Brent's method on the path
- * parameter, re-solving at intermediate conditions and taking the root nearest the linear
- * interpolation of the bracket. Roots are labelled with the open-loop root (p-k structural roots,
+ * parameter, taking at intermediate conditions the root nearest the linear interpolation of the
+ * bracket: that one root is tracked on its own by shifted inverse iteration
+ * ({@link NearestEigenvalue}: one complex LU instead of a full eigen-solve), with a full
+ * eigen-solve only where another root is about as near and the iteration does not settle. Roots are labelled with the open-loop root (p-k structural roots,
  * rigid short period) nearest them, else "rigid body + loop" below half the first elastic
  * frequency and "control loop" above.
  *
@@ -198,10 +202,26 @@ public final class ClosedLoopSweep {
     return new OnsetRefinement(x, Optional.of(exact), s.residual(), s.iterations(), "");
   }
 
-  private static Eigenvalues eigenvaluesAt(ConfigurationModel model, Configuration configuration, LoopSpec loop,
-      FlightCondition fc, RationalAerodynamics rational, int[] solves) {
+  /**
+   * The closed-loop root at fc nearest the linear interpolation of the bracket at fraction w, into
+   * out: tracked on its own by shifted inverse iteration ({@link NearestEigenvalue}), or, where
+   * that does not converge (another root about as near), picked from a full eigen-solve (counted
+   * in solves). Both give the same root: the one nearest the interpolated point.
+   */
+  static void rootNear(ConfigurationModel model, Configuration configuration, LoopSpec loop, FlightCondition fc,
+      RationalAerodynamics rational, double reA, double imA, double reB, double imB, double w, double[] out,
+      int[] solves) {
+    double pr = reA + w * (reB - reA);
+    double pi = imA + w * (imB - imA);
+    StateSpace closed = ServoMargins.loopAt(model, configuration, loop, fc).closedLoop(rational);
+    NearestEigenvalue.Estimate e = NearestEigenvalue.near(closed.a(), pr, pi);
+    if (e.converged()) {
+      out[0] = e.real();
+      out[1] = e.imag();
+      return;
+    }
     solves[0]++;
-    return ServoMargins.loopAt(model, configuration, loop, fc).closedLoop(rational).eigenvalues();
+    nearest(closed.eigenvalues(), pr, pi, out);
   }
 
   private static double crossing(double re, double im, double level) {
@@ -271,8 +291,7 @@ public final class ClosedLoopSweep {
     int evaluations;
     try {
       t = solver.solve(BRENT_MAX_EVALUATIONS, tt -> {
-        nearest(eigenvaluesAt(model, configuration, loop, path.at(tt), rational, solves), reA, imA, reB, imB,
-            tt - p, at);
+        rootNear(model, configuration, loop, path.at(tt), rational, reA, imA, reB, imB, tt - p, at, solves);
         return crossing(at[0], at[1], level);
       }, p, p + 1);
       evaluations = solver.getEvaluations();
@@ -280,16 +299,14 @@ public final class ClosedLoopSweep {
       t = p + 0.5;
       evaluations = BRENT_MAX_EVALUATIONS;
     }
-    nearest(eigenvaluesAt(model, configuration, loop, path.at(t), rational, solves), reA, imA, reB, imB, t - p, at);
+    rootNear(model, configuration, loop, path.at(t), rational, reA, imA, reB, imB, t - p, at, solves);
     CrossingKind kind = CrossingKind.of(level, rising);
     return new FlutterCrossing(branch, name, kind, t, path.at(t), Math.abs(at[1]) / (2 * Math.PI), level,
         evaluations, abs);
   }
 
-  /** The eigenvalue nearest the linear interpolation of the bracket at fraction w. */
-  private static void nearest(Eigenvalues e, double reA, double imA, double reB, double imB, double w, double[] out) {
-    double pr = reA + w * (reB - reA);
-    double pi = imA + w * (imB - imA);
+  /** The eigenvalue nearest (pr, pi). */
+  static void nearest(Eigenvalues e, double pr, double pi, double[] out) {
     double best = Double.MAX_VALUE;
     for (int i = 0; i < e.real().length; i++) {
       double d = Math.hypot(e.real()[i] - pr, e.imag()[i] - pi);

@@ -80,4 +80,26 @@ class MarginDiagnosticsTest {
     assertEquals(Math.PI, LoopMargins.wrap(Math.PI), 0.0);
     assertEquals(-Math.PI / 2, LoopMargins.wrap(1.5 * Math.PI), 1e-15);
   }
+
+  /**
+   * Every sampled grid point is evaluated once: the gain-peak and disk-margin searches take their
+   * grid values from the samples already taken, so a frequency is evaluated again only where
+   * Brent's maximiser starts at a grid point (at most 8 maxima for each of the two quantities).
+   * The evaluation count of the diagnostics is the number of calls made.
+   */
+  @Test
+  void gridPointsAreEvaluatedOnceAndEveryCallIsCounted() {
+    java.util.Map<Double, Integer> calls = new java.util.HashMap<>();
+    SisoFrequencyFunction counted = (w, v) -> {
+      calls.merge(w, 1, Integer::sum);
+      LAG.response(w, v);
+    };
+    MarginDiagnostics d = new LoopMargins(options(0.3)).analyse(counted, 1, Math.pow(10, 3.51),
+        Eigenvalues.none()).diagnostics();
+    int total = calls.values().stream().mapToInt(Integer::intValue).sum();
+    long repeated = calls.values().stream().filter(c -> c > 1).count();
+    assertEquals(total, d.functionEvaluations());
+    org.junit.jupiter.api.Assertions.assertTrue(repeated <= 16, "frequencies evaluated more than once: " + repeated);
+    org.junit.jupiter.api.Assertions.assertTrue(d.gridPoints() >= 142);
+  }
 }

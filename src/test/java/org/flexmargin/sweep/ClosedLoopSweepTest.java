@@ -97,7 +97,7 @@ class ClosedLoopSweepTest {
     assertFalse(r.assumptions().isEmpty());
   }
 
-  private static double fitRange(ConfigurationModel m, PlannedPath path) {
+  static double fitRange(ConfigurationModel m, PlannedPath path) {
     double fmax = m.modes().modes().stream().mapToDouble(x -> x.frequencyHz()).max().orElseThrow();
     double vmin = path.at(0).speedTasMps();
     return Math.min(m.system().aero().maxReducedFrequency(),
