@@ -48,11 +48,13 @@ import picocli.CommandLine.Spec;
 @Command(name = "bench", mixinStandardHelpOptions = true,
     description = {"Print timing figures: the demo (sweep and report; CPU, wall and peak memory; "
         + "threads 1, 2, 4; 55 and 550 sweep points), p-k sweep (8 to 64 modes, 200 speeds), closed-loop "
-        + "eigenvalues (about 150 and 300 states, 200 speeds), broken-loop frequency response "
+        + "eigenvalues (about 150 and 300 states, 200 speeds; one root tracked from the previous speed against the "
+        + "full solve), broken-loop frequency response "
         + "(2000 frequencies x 200 speeds, 20 and 40 modes: direct, Hessenberg, dense), doublet-lattice "
-        + "influence matrix and LU (1,000 boxes)."},
+        + "influence matrix and LU (1,000 boxes); on request, the CPU per sample of a demo-sized campaign."},
     footer = {"", "Examples:", "  flexmargin bench", "  flexmargin bench pk --modes 10,30",
-        "  flexmargin bench demo", "  flexmargin bench closed-loop", "  flexmargin bench loop-response --speeds 50"})
+        "  flexmargin bench demo", "  flexmargin bench closed-loop", "  flexmargin bench loop-response --speeds 50",
+        "  flexmargin bench campaign"})
 final class BenchCommand implements Callable<Integer> {
   @Parameters(index = "0", arity = "0..1", defaultValue = "all",
       description = "Which benchmark: demo, pk, closed-loop, loop-response, lattice or all (default); "
