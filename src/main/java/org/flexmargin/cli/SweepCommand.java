@@ -43,7 +43,8 @@ import picocli.CommandLine.Spec;
     description = {"Sweep airspeed: divergence speed and every open-loop flutter onset; with a loop, the loop "
         + "margins at every speed and the closed-loop onsets; with a requirements table, pass/fail and the "
         + "speed at which each requirement is first lost. Onsets are refined between grid points. Writes "
-        + "report.html, charts, JSON and CSV under reports/<case>/ (exit 3 when a requirement is violated)."},
+        + "report.html, charts, JSON and CSV under reports/<case>/ (exit 3 when a requirement is violated). With "
+        + "an envelope section in the case, the matched-point envelope is computed too and shown in the report."},
     footer = {"", "Examples:", "  flexmargin sweep mode-tables/demo/demo-case.json",
         "  flexmargin sweep mode-tables/validation/goland-wing.json --out /tmp/goland --quiet"})
 final class SweepCommand implements Callable<Integer> {

@@ -10,8 +10,8 @@ import org.flexmargin.aero.ControlSurfaceForces;
 import org.flexmargin.aero.TabulatedAero;
 import org.flexmargin.model.AeroSpec;
 import org.flexmargin.model.LatticeSpec;
-import org.flexmargin.model.MachGafTable;
 import org.flexmargin.model.MachForceTable;
+import org.flexmargin.model.MachGafTable;
 import org.flexmargin.model.ModeTable;
 
 /**
@@ -42,7 +42,7 @@ public final class AeroSourceFactory {
    * lifting surfaces (forces computed once, interpolated in their Mach table) and tables at several
    * Mach numbers give the forces at any Mach number.
    *
-   * @param spec aerodynamic data of a configuration
+   * @param spec aerodynamic data of a configuration (null for a built-in structure's own strips)
    * @param modes the configuration's mode table
    * @return the forces over Mach with their range; empty for data that do not depend on the Mach
    *     number (strip theory, a table at one Mach number)

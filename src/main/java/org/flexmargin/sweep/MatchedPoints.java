@@ -110,8 +110,7 @@ public final class MatchedPoints {
     List<String> warnings = new ArrayList<>();
     DoubleFunction<AeroSource> aero;
     double lo, hi, start;
-    Optional<AeroSourceFactory.MachForces> overMach = c.aero() == null ? Optional.empty()
-        : AeroSourceFactory.overMach(c.aero(), model.modes());
+    Optional<AeroSourceFactory.MachForces> overMach = AeroSourceFactory.overMach(c.aero(), model.modes());
     if (overMach.isPresent()) {
       aero = overMach.get().atMach();
       lo = overMach.get().lowestMach();

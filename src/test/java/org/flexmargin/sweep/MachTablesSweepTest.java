@@ -96,8 +96,10 @@ class MachTablesSweepTest {
     assertEquals(QD0 * Math.sqrt(0.75), r.divergence().dynamicPressurePa(), 1e-12 * QD0);
     // sea level, 20 to 150 m/s: Mach 0.059 to 0.441, which leaves 0.5 +- 0.05 (the tolerance of
     // the tables' Mach number, as for a table at one Mach number)
+    // (Mach = EAS / 340.29 m/s at sea level, U.S. Standard Atmosphere 1976: 0.0588 and 0.4408)
     assertTrue(r.flutter().warnings().stream().anyMatch(w -> w.startsWith("aerodynamics outside their range: the "
-        + "force tables are interpolated to Mach 0.500")), r.flutter().warnings().toString());
+        + "force tables are interpolated to Mach 0.500 (accepted within +-0.05), but the sweep runs from Mach 0.059 "
+        + "to 0.441 (first outside at 20.00 m/s EAS)")), r.flutter().warnings().toString());
     assertTrue(r.aeroDescription().contains("Mach 0.500 (tables at Mach 0.300 to 0.700"), r.aeroDescription());
   }
 
@@ -152,5 +154,11 @@ class MachTablesSweepTest {
     assertEquals(0.1822, exact, 1e-4);
     assertTrue(e.warnings().stream().anyMatch(w -> w.startsWith("aerodynamics outside their range: divergence at "
         + "altitude at 0 m, Mach 0.182") && w.contains("Mach range 0.300 to 0.700")), e.warnings().toString());
+    // so is the one at 3000 m (Mach sqrt(2 q_D0 sqrt(0.91) / (rho a^2)) = 0.22 there, derived), and
+    // no other point: the points along Mach 0.5 lie inside the tables
+    assertEquals(2, e.warnings().stream().filter(w -> w.contains("outside their range")).count(), e.warnings()
+        .toString());
+    assertTrue(e.warnings().stream().anyMatch(w -> w.contains("divergence at altitude at 3000 m, Mach 0.2")),
+        e.warnings().toString());
   }
 }
