@@ -4,6 +4,7 @@ import java.util.List;
 import org.flexmargin.model.AeroSpec;
 import org.flexmargin.model.GafTable;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.MachGafTable;
 import org.flexmargin.model.ModeTable;
 import org.flexmargin.model.StripTheorySpec;
 
@@ -19,6 +20,8 @@ public final class AeroSources {
    *       of {@code modes}, in order.
    *   <li>{@link GafTable} gives a {@link TabulatedAero}; the table's row and column names must
    *       equal the mode table's names in the same order.
+   *   <li>{@link MachGafTable} gives a {@link TabulatedAero} of the tables interpolated to their
+   *       sweep Mach number; the same rule for the names.
    * </ul>
    *
    * @param spec the aerodynamic data of the configuration
@@ -39,16 +42,22 @@ public final class AeroSources {
       return new StripTheoryAero(strips, modes);
     }
     if (spec instanceof GafTable table) {
-      List<String> expected = modes.modeNames();
-      if (!table.modeNames().equals(expected)) {
-        throw new InvalidInputException(
-            "aero.modes",
-            "the mode table's names in the same order " + expected,
-            table.modeNames().toString());
-      }
+      checkNames(table.modeNames(), modes);
       return new TabulatedAero(table);
+    }
+    if (spec instanceof MachGafTable tables) {
+      checkNames(tables.modeNames(), modes);
+      return new TabulatedAero(tables);
     }
     throw new InvalidInputException(
         "aero", "strip theory or a force table", spec.getClass().getSimpleName());
+  }
+
+  private static void checkNames(List<String> names, ModeTable modes) {
+    List<String> expected = modes.modeNames();
+    if (!names.equals(expected)) {
+      throw new InvalidInputException(
+          "aero.modes", "the mode table's names in the same order " + expected, names.toString());
+    }
   }
 }

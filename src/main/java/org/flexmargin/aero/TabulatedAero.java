@@ -8,6 +8,7 @@ import org.apache.commons.math3.linear.DecompositionSolver;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.model.GafTable;
+import org.flexmargin.model.MachGafTable;
 
 /**
  * Generalized aerodynamic forces interpolated in reduced frequency from a user table of Q(ik).
@@ -38,12 +39,15 @@ import org.flexmargin.model.GafTable;
  * number by Horner's rule, allocating nothing.
  *
  * <p>Instances are immutable and thread-safe. The Mach number of the table is reported in {@link
- * #description()} only.
+ * #description()} only; a table interpolated from tables at several Mach numbers ({@link
+ * MachGafTable}) says so there too.
  */
 public final class TabulatedAero implements AeroSource {
   private final int n;
   private final double referenceSemichordM;
   private final double machNumber;
+  /** Words after the Mach number in the description ("" for a table at one Mach number). */
+  private final String machNote;
   /** Tabulated reduced frequencies (knots), strictly increasing. */
   private final double[] knots;
   /**
@@ -59,6 +63,22 @@ public final class TabulatedAero implements AeroSource {
    * @param table the tabulated forces; validated by its own constructor
    */
   public TabulatedAero(GafTable table) {
+    this(table, "");
+  }
+
+  /**
+   * The forces of tables at several Mach numbers, interpolated to their sweep Mach number ({@link
+   * MachGafTable#table()}).
+   *
+   * @param tables the tables; validated by their own constructor
+   */
+  public TabulatedAero(MachGafTable tables) {
+    this(tables.table(), String.format(Locale.ROOT, " (tables at Mach %.3f to %.3f, beta Q interpolated)",
+        tables.forces().lowestMach(), tables.forces().highestMach()));
+  }
+
+  private TabulatedAero(GafTable table, String machNote) {
+    this.machNote = machNote;
     this.n = table.modeNames().size();
     this.referenceSemichordM = table.referenceSemichordM();
     this.machNumber = table.machNumber();
@@ -213,10 +233,11 @@ public final class TabulatedAero implements AeroSource {
   public String description() {
     return String.format(
         Locale.ROOT,
-        "tabulated forces, %d reduced frequencies %.4g to %.4g, Mach %.3f, not-a-knot cubic spline",
+        "tabulated forces, %d reduced frequencies %.4g to %.4g, Mach %.3f%s, not-a-knot cubic spline",
         knots.length,
         knots[0],
         knots[knots.length - 1],
-        machNumber);
+        machNumber,
+        machNote);
   }
 }

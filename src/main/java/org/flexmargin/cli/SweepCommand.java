@@ -8,8 +8,11 @@ import java.util.concurrent.Callable;
 import org.flexmargin.clearance.Severity;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
+import org.flexmargin.io.EnvelopeReader;
 import org.flexmargin.io.RequirementsOverride;
 import org.flexmargin.model.AnalysisCase;
+import org.flexmargin.model.EnvelopeSpec;
+import org.flexmargin.report.EnvelopeReport;
 import org.flexmargin.report.ReportFolder;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.notch.ExistingNotches;
@@ -25,6 +28,7 @@ import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Finding;
 import org.flexmargin.sweep.Findings;
 import org.flexmargin.sweep.Instability;
+import org.flexmargin.sweep.MatchedPoints;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.SweepResult;
@@ -39,7 +43,8 @@ import picocli.CommandLine.Spec;
     description = {"Sweep airspeed: divergence speed and every open-loop flutter onset; with a loop, the loop "
         + "margins at every speed and the closed-loop onsets; with a requirements table, pass/fail and the "
         + "speed at which each requirement is first lost. Onsets are refined between grid points. Writes "
-        + "report.html, charts, JSON and CSV under reports/<case>/ (exit 3 when a requirement is violated)."},
+        + "report.html, charts, JSON and CSV under reports/<case>/ (exit 3 when a requirement is violated). With "
+        + "an envelope section in the case, the matched-point envelope is computed too and shown in the report."},
     footer = {"", "Examples:", "  flexmargin sweep mode-tables/demo/demo-case.json",
         "  flexmargin sweep mode-tables/validation/goland-wing.json --out /tmp/goland --quiet"})
 final class SweepCommand implements Callable<Integer> {
@@ -79,7 +84,8 @@ final class SweepCommand implements Callable<Integer> {
     if (requirementsFile != null) {
       c = RequirementsOverride.apply(c, requirementsFile);
     }
-    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work, designNotches, timeDomainCheck);
+    return run(spec, c, out != null ? out : defaultFolder(c), common, style, work, designNotches, timeDomainCheck,
+        EnvelopeReader.readIfPresent(caseFile).orElse(null));
   }
 
   /** @return reports/&lt;case name&gt; */
@@ -102,6 +108,15 @@ final class SweepCommand implements Callable<Integer> {
    */
   static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
       ReportStyleOptions style, WorkOptions work, boolean designNotches, boolean timeDomain) {
+    return run(spec, c, target, common, style, work, designNotches, timeDomain, null);
+  }
+
+  /**
+   * As above; with an {@code envelope} section the matched-point envelope of every configuration
+   * is computed after the sweep and shown in the report.
+   */
+  static int run(picocli.CommandLine.Model.CommandSpec spec, AnalysisCase c, Path target, CommonOptions common,
+      ReportStyleOptions style, WorkOptions work, boolean designNotches, boolean timeDomain, EnvelopeSpec envelope) {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
     ReportFolder.checkTarget(target);
@@ -129,13 +144,14 @@ final class SweepCommand implements Callable<Integer> {
     SweepResult result = sweep.run(c, bar);
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
+    ReportOptions shown = envelope == null ? reportOptions : reportOptions.withEnvelope(envelope(c, envelope));
     if (terminal) {
       err.println("writing the report to " + target.toAbsolutePath().normalize() + " ...");
       err.flush();
     }
     Path written = sweep.inPool(() -> ReportFolder.writeAtomically(target, folder -> {
       ResultFiles.write(folder, result, findings, Version.get());
-      ReportWriter.write(folder, result, findings, Version.get(), reportOptions);
+      ReportWriter.write(folder, result, findings, Version.get(), shown);
     }));
     if (!common.quiet) {
       out.println("case " + c.name() + ": " + result.pathDescription());
@@ -169,6 +185,12 @@ final class SweepCommand implements Callable<Integer> {
         .anyMatch(r -> r.clearance() != null && !r.clearance().passed());
     boolean unreliable = result.configurations().stream().anyMatch(r -> r.trackingTrustedUpToEasMps().isPresent());
     return failed ? FlexMargin.EXIT_REQUIREMENTS_VIOLATED : unreliable ? FlexMargin.EXIT_UNRELIABLE : FlexMargin.EXIT_OK;
+  }
+
+  /** The matched-point envelope of every configuration, for the report. */
+  private static EnvelopeReport.Data envelope(AnalysisCase c, EnvelopeSpec spec) {
+    return new EnvelopeReport.Data(spec, c.configurations().stream()
+        .map(cfg -> MatchedPoints.of(cfg, spec, c.options())).toList());
   }
 
   /** A notch design with the defaults of {@code notch-design}, for the report. */

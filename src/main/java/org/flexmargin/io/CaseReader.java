@@ -27,6 +27,8 @@ import org.flexmargin.model.FeedbackPath;
 import org.flexmargin.model.FilterSpec;
 import org.flexmargin.model.FlutterMethodKind;
 import org.flexmargin.model.GafTable;
+import org.flexmargin.model.MachForceTable;
+import org.flexmargin.model.MachGafTable;
 import org.flexmargin.model.GainSchedule;
 import org.flexmargin.model.InertiaAxis;
 import org.flexmargin.model.InputFile;
@@ -121,7 +123,7 @@ public final class CaseReader {
       "name", "frequency_hz", "damping_ratio", "structural_damping_g", "generalized_mass_kg", "shapes");
   private static final List<String> SHAPE_KEYS = List.of("displacement_m", "rotation_rad");
   private static final List<String> FORCE_KEYS = List.of("format", "description", "reference_semichord_m",
-      "mach", "modes", "reduced_frequencies", "real", "imag");
+      "mach", "mach_numbers", "modes", "reduced_frequencies", "real", "imag");
   private static final Pattern CASE_NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]*");
 
   /**
@@ -190,12 +192,13 @@ public final class CaseReader {
    * mode table; {@link #read} does that).
    *
    * @param file a {@code .json} force table
-   * @return the validated table
+   * @return the validated table: a {@link GafTable} at one Mach number, or a {@link MachGafTable}
+   *     when the file lists {@code mach_numbers}
    * @throws InputFileException on any unreadable, malformed or invalid input
    */
-  public static GafTable readForceTable(Path file) {
+  public static AeroSpec readForceTable(Path file) {
     ReadLog log = new ReadLog();
-    GafTable t = parseForceTable(SourceFile.read(file, file.toString()), null, log);
+    AeroSpec t = parseForceTable(SourceFile.read(file, file.toString()), null, log);
     log.validatePending();
     return t;
   }
@@ -927,7 +930,7 @@ public final class CaseReader {
     return dot > 0 ? f.substring(0, dot) : f;
   }
 
-  private static GafTable parseForceTable(SourceFile src, ModeTable table, ReadLog log) {
+  private static AeroSpec parseForceTable(SourceFile src, ModeTable table, ReadLog log) {
     JsonInput doc = JsonInput.parse(src, log);
     log.validateLater(Schemas.Kind.FORCE_TABLE, doc);
     JsonField root = doc.root().object("a force table");
@@ -951,9 +954,26 @@ public final class CaseReader {
     }
     double[] k = root.required("reduced_frequencies", "the list of reduced frequencies")
         .quantities("a list of reduced frequencies", PlausibleRange.REDUCED_FREQUENCY);
+    JsonField machList = root.optional("mach_numbers");
+    if (machList != null) {
+      double[] machs = machList.quantities("a list of Mach numbers", PlausibleRange.FORCE_TABLE_MACH);
+      double[][][][] re = hypercube(root.required("real", "the real parts as [mach][k][row][column]"));
+      double[][][][] im = hypercube(root.required("imag", "the imaginary parts as [mach][k][row][column]"));
+      return root.build(() -> new MachGafTable(mach, new MachForceTable(bRef, machs, k, names, names, re, im)));
+    }
     double[][][] re = cube(root.required("real", "the real parts as [k][row][column]"));
     double[][][] im = cube(root.required("imag", "the imaginary parts as [k][row][column]"));
     return root.build(() -> new GafTable(bRef, mach, names, k, re, im));
+  }
+
+  /** Real or imaginary parts of tables at several Mach numbers: one [k][row][column] cube per Mach number. */
+  private static double[][][][] hypercube(JsonField f) {
+    List<JsonField> ms = f.list("a list with one [k][row][column] table per Mach number");
+    double[][][][] out = new double[ms.size()][][][];
+    for (int i = 0; i < out.length; i++) {
+      out[i] = cube(ms.get(i));
+    }
+    return out;
   }
 
   private static double[][][] cube(JsonField f) {

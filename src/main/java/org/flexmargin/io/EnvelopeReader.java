@@ -2,6 +2,7 @@ package org.flexmargin.io;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import org.flexmargin.model.EnvelopeSpec;
 
 /**
@@ -18,12 +19,30 @@ public final class EnvelopeReader {
    * @throws InputFileException when the file has no valid {@code envelope} section
    */
   public static EnvelopeSpec read(Path caseFile) {
-    JsonField root = JsonInput.parse(SourceFile.read(caseFile, caseFile.toString())).root().object("a case file");
+    JsonField root = root(caseFile);
     JsonField e = root.optional("envelope");
     if (e == null) {
       throw root.fail("an envelope section (altitudes_m, from_tas_mps, to_tas_mps, dive_speed_eas_mps; "
           + "see docs/lifting-surfaces.md)", "none");
     }
+    return section(e);
+  }
+
+  /**
+   * @param caseFile the case file (read in full by {@link CaseReader#read} as well)
+   * @return the envelope section, empty when the file has none
+   * @throws InputFileException when the file's {@code envelope} section is invalid
+   */
+  public static Optional<EnvelopeSpec> readIfPresent(Path caseFile) {
+    JsonField e = root(caseFile).optional("envelope");
+    return e == null ? Optional.empty() : Optional.of(section(e));
+  }
+
+  private static JsonField root(Path caseFile) {
+    return JsonInput.parse(SourceFile.read(caseFile, caseFile.toString())).root().object("a case file");
+  }
+
+  private static EnvelopeSpec section(JsonField e) {
     e.object("an envelope section");
     e.allowOnly(List.of("altitudes_m", "mach_numbers", "from_tas_mps", "to_tas_mps", "points",
         "dive_speed_eas_mps", "dive_mach"));

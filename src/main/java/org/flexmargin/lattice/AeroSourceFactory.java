@@ -2,6 +2,7 @@ package org.flexmargin.lattice;
 
 import java.util.Locale;
 import java.util.Optional;
+import java.util.function.DoubleFunction;
 import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
 import org.flexmargin.aero.AeroSources;
@@ -10,13 +11,14 @@ import org.flexmargin.aero.TabulatedAero;
 import org.flexmargin.model.AeroSpec;
 import org.flexmargin.model.LatticeSpec;
 import org.flexmargin.model.MachForceTable;
+import org.flexmargin.model.MachGafTable;
 import org.flexmargin.model.ModeTable;
 
 /**
  * Picks the {@link AeroSource} of any aerodynamic specification. It sits above {@code aero} and
  * {@code lattice} so that neither imports the other's callers: lifting surfaces give a {@link
- * LatticeForces} table interpolated like a user table (at the lattice's reference Mach number,
- * with its elevator column if it names one); strips and user tables go to {@link AeroSources}.
+ * LatticeForces} table interpolated like a user table (at the lattice's sweep Mach number, with
+ * its elevator column if it names one); strips and user tables go to {@link AeroSources}.
  */
 public final class AeroSourceFactory {
   private AeroSourceFactory() {}
@@ -34,6 +36,40 @@ public final class AeroSourceFactory {
     }
     return AeroSources.of(spec, modes);
   }
+
+  /**
+   * The forces of a configuration as a function of the Mach number, for matched-point envelopes:
+   * lifting surfaces (forces computed once, interpolated in their Mach table) and tables at several
+   * Mach numbers give the forces at any Mach number.
+   *
+   * @param spec aerodynamic data of a configuration (null for a built-in structure's own strips)
+   * @param modes the configuration's mode table
+   * @return the forces over Mach with their range; empty for data that do not depend on the Mach
+   *     number (strip theory, a table at one Mach number)
+   */
+  public static Optional<MachForces> overMach(AeroSpec spec, ModeTable modes) {
+    if (spec instanceof LatticeSpec lattice) {
+      LatticeTable table = forces(lattice, modes);
+      return Optional.of(new MachForces(m -> atMach(lattice, modes, table, m), lattice.mach(),
+          table.forces().lowestMach(), table.forces().highestMach()));
+    }
+    if (spec instanceof MachGafTable tables) {
+      return Optional.of(new MachForces(m -> AeroSources.of(tables.atMach(m), modes), tables.machNumber(),
+          tables.forces().lowestMach(), tables.forces().highestMach()));
+    }
+    return Optional.empty();
+  }
+
+  /**
+   * The forces of a configuration over Mach numbers.
+   *
+   * @param atMach the source at a Mach number (clamped into the tabulated range)
+   * @param sweepMach Mach number (dimensionless) of the forces of sweeps not at one Mach number
+   * @param lowestMach lowest tabulated Mach number (dimensionless)
+   * @param highestMach highest tabulated Mach number (dimensionless)
+   */
+  public record MachForces(DoubleFunction<AeroSource> atMach, double sweepMach, double lowestMach,
+      double highestMach) {}
 
   /**
    * The lattice's forces over its Mach numbers: those attached to the spec (read from the cache

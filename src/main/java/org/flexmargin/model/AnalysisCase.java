@@ -10,7 +10,10 @@ import java.util.Set;
  * @param format case-file format version
  * @param name case name; also the default report folder name
  * @param description free text
- * @param configurations at least one configuration, names unique
+ * @param configurations at least one configuration, names unique. With a sweep at one Mach number
+ *     ({@link MachSweep}) every configuration's forces are taken at that Mach number ({@link
+ *     Configuration#atMach}): lifting surfaces and tables at several Mach numbers are interpolated
+ *     to it, so every consumer of the case (sweep, loop, notch design, report) uses the same forces
  * @param sweep flight points to analyse
  * @param options numerical options
  * @param inputs provenance of every file read (case file first)
@@ -39,6 +42,9 @@ public record AnalysisCase(
     Checks.name("name", name);
     description = description == null ? "" : description;
     configurations = Checks.nonEmpty("configurations", configurations);
+    if (sweep instanceof MachSweep m) {
+      configurations = configurations.stream().map(c -> c.atMach(m.machNumber())).toList();
+    }
     Set<String> seen = new HashSet<>();
     for (int i = 0; i < configurations.size(); i++) {
       if (!seen.add(configurations.get(i).name())) {

@@ -34,6 +34,14 @@ public record Configuration(String name, StructureSpec structure, AeroSpec aero,
     }
   }
 
+  /**
+   * @param mach Mach number (dimensionless)
+   * @return this configuration with its forces taken at {@code mach} ({@link AeroSpec#atMach})
+   */
+  public Configuration atMach(double mach) {
+    return aero == null ? this : new Configuration(name, structure, aero.atMach(mach), rigidBody);
+  }
+
   /** Open-loop configuration without rigid-body data. */
   public Configuration(String name, StructureSpec structure, AeroSpec aero) {
     this(name, structure, aero, null);

@@ -189,6 +189,18 @@ public record LatticeSpec(
         machNumbers, controlSurfaces, elevatorControl, forceCacheFile, forces);
   }
 
+  /**
+   * @param sweepMach a Mach number (dimensionless)
+   * @return the same lattice with its forces taken at {@code sweepMach}, clamped into the range of
+   *     {@link #machNumbers()}
+   */
+  @Override
+  public LatticeSpec atMach(double sweepMach) {
+    double m = Math.min(Math.max(sweepMach, machNumbers[0]), machNumbers[machNumbers.length - 1]);
+    return new LatticeSpec(referenceSemichordM, m, symmetry, surfaces, splines, reducedFrequencies,
+        machNumbers, controlSurfaces, elevatorControl, forceCacheFile, precomputed);
+  }
+
   /** @return a copy of the reduced frequencies */
   @Override
   public double[] reducedFrequencies() {

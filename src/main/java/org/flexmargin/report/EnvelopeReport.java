@@ -32,6 +32,22 @@ public final class EnvelopeReport {
   private EnvelopeReport() {}
 
   /**
+   * A computed envelope to show in the HTML report.
+   *
+   * @param spec the envelope's lines and dive speed
+   * @param envelopes one per configuration, in case order
+   */
+  public record Data(EnvelopeSpec spec, List<Envelope> envelopes) {
+    /** Validates and copies. */
+    public Data {
+      if (spec == null || envelopes == null || envelopes.isEmpty()) {
+        throw new IllegalArgumentException("an envelope needs its section and at least one configuration");
+      }
+      envelopes = List.copyOf(envelopes);
+    }
+  }
+
+  /**
    * Writes the three files.
    *
    * @param folder an existing folder
@@ -43,7 +59,7 @@ public final class EnvelopeReport {
   public static void write(Path folder, String caseName, EnvelopeSpec spec, List<Envelope> envelopes)
       throws IOException {
     Files.writeString(folder.resolve("envelope.csv"), csv(envelopes), StandardCharsets.UTF_8);
-    ReportChart chart = chart(caseName, spec, envelopes);
+    ReportChart chart = chart(caseName, spec, envelopes, SpeedAxisUnit.METRES_PER_SECOND);
     chart.writeTo(folder, chart.png(), false);
     Files.writeString(folder.resolve("envelope.txt"), text(caseName, spec, envelopes), StandardCharsets.UTF_8);
   }
@@ -70,19 +86,32 @@ public final class EnvelopeReport {
     return Double.isNaN(v) ? "" : String.format(Locale.ROOT, "%.6g", v);
   }
 
-  /** @return the chart: altitude (m) against EAS (m/s) */
-  static ReportChart chart(String caseName, EnvelopeSpec spec, List<Envelope> envelopes) {
+  /**
+   * The design dive line at an altitude: V_D, or with M_D the lower of V_D and the EAS of M_D.
+   *
+   * @param spec the envelope's dive speed and Mach number
+   * @param altitudeM geometric altitude (m)
+   * @return the dive line's equivalent airspeed (m/s)
+   */
+  static double diveEasMps(EnvelopeSpec spec, double altitudeM) {
+    double v = spec.diveSpeedEasMps();
+    return Double.isNaN(spec.diveMach()) ? v
+        : Math.min(v, StandardAtmosphere.atMach(altitudeM, spec.diveMach()).speedEasMps());
+  }
+
+  /** @return the chart: altitude (m) against EAS in {@code unit} */
+  static ReportChart chart(String caseName, EnvelopeSpec spec, List<Envelope> envelopes, SpeedAxisUnit unit) {
     XYChart chart = ChartSeries.chart(caseName + ": matched-point flutter and divergence boundary",
-        "equivalent airspeed (m/s)", "altitude (m)");
+        unit.axisTitle(), "altitude (m)");
     Set<String> used = new HashSet<>();
     List<String> notes = new ArrayList<>();
     int index = 0;
     for (Envelope e : envelopes) {
       String suffix = envelopes.size() > 1 ? " (" + e.configuration() + ")" : "";
       series(chart, used, e, Kind.FLUTTER_AT_ALTITUDE, Kind.FLUTTER_AT_MACH, "flutter" + suffix,
-          ReportStyle.seriesColor(index), true);
+          ReportStyle.seriesColor(index), true, unit);
       series(chart, used, e, Kind.DIVERGENCE_AT_ALTITUDE, Kind.DIVERGENCE_AT_MACH, "divergence" + suffix,
-          ReportStyle.seriesColor(index), false);
+          ReportStyle.seriesColor(index), false, unit);
       index++;
     }
     double[] alts = spec.altitudesM();
@@ -92,17 +121,36 @@ public final class EnvelopeReport {
     double[] margin = new double[n];
     for (int i = 0; i < n; i++) {
       h[i] = alts[0] + (alts[alts.length - 1] - alts[0]) * i / (n - 1.0);
-      double v = spec.diveSpeedEasMps();
-      if (!Double.isNaN(spec.diveMach())) {
-        v = Math.min(v, StandardAtmosphere.atMach(h[i], spec.diveMach()).speedEasMps());
-      }
-      vd[i] = v;
-      margin[i] = MARGIN_FACTOR * v;
+      double v = diveEasMps(spec, h[i]);
+      vd[i] = unit.fromMps(v);
+      margin[i] = unit.fromMps(MARGIN_FACTOR * v);
     }
     String dive = Double.isNaN(spec.diveMach()) ? "V_D" : "V_D / M_D";
-    ChartSeries.line(chart, used, dive, vd, h, ReportStyle.REGIME_LINE, ReportStyle.referenceStroke(2f, null));
+    ChartSeries.line(chart, used, dive, vd, h, ReportStyle.ZERO_LINE,
+        ReportStyle.referenceStroke(2.2f, new float[] {12f, 4f, 3f, 4f}));
     ChartSeries.line(chart, used, String.format(Locale.ROOT, "%.2f x %s (margin, common practice)", MARGIN_FACTOR, dive),
         margin, h, ReportStyle.REQUIREMENT, ReportStyle.referenceStroke(1.5f, new float[] {6f, 4f}));
+    // every point and line inside the frame, markers not cut by it: 10 % below the lowest speed,
+    // 5 % above the highest, 4 % of the altitude span (at least 1000 m) beyond the extreme points
+    double lo = Double.POSITIVE_INFINITY, hi = 0, bottom = alts[0], top = alts[alts.length - 1];
+    for (double v : vd) {
+      lo = Math.min(lo, v);
+    }
+    for (double v : margin) {
+      hi = Math.max(hi, v);
+    }
+    for (Envelope e : envelopes) {
+      for (Point p : e.points()) {
+        if (p.found()) {
+          lo = Math.min(lo, unit.fromMps(p.condition().speedEasMps()));
+          hi = Math.max(hi, unit.fromMps(p.condition().speedEasMps()));
+          bottom = Math.min(bottom, p.condition().altitudeM());
+          top = Math.max(top, p.condition().altitudeM());
+        }
+      }
+    }
+    double pad = 0.04 * Math.max(top - bottom, 1000);
+    chart.getStyler().setXAxisMin(0.9 * lo).setXAxisMax(1.05 * hi).setYAxisMin(bottom - pad).setYAxisMax(top + pad);
     notes.add("Lines: points matched at each listed altitude (Mach number of the forces iterated to the point's); "
         + "markers: points along each listed Mach number. Missing points had no onset in the swept range.");
     return new ReportChart("envelope", "Matched-point flutter and divergence boundary against the design dive line.",
@@ -110,14 +158,14 @@ public final class EnvelopeReport {
   }
 
   private static void series(XYChart chart, Set<String> used, Envelope e, Kind atAltitude, Kind atMach, String name,
-      java.awt.Color color, boolean flutter) {
+      java.awt.Color color, boolean flutter, SpeedAxisUnit unit) {
     List<double[]> line = new ArrayList<>();
     List<double[]> marks = new ArrayList<>();
     for (Point p : e.points()) {
       if (p.found() && p.kind() == atAltitude) {
-        line.add(new double[] {p.condition().speedEasMps(), p.condition().altitudeM()});
+        line.add(new double[] {unit.fromMps(p.condition().speedEasMps()), p.condition().altitudeM()});
       } else if (p.found() && p.kind() == atMach) {
-        marks.add(new double[] {p.condition().speedEasMps(), p.condition().altitudeM()});
+        marks.add(new double[] {unit.fromMps(p.condition().speedEasMps()), p.condition().altitudeM()});
       }
     }
     if (!line.isEmpty()) {

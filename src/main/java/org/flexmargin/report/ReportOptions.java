@@ -10,9 +10,10 @@ import org.flexmargin.simulate.LoopComparison;
  * @param vectorCharts whether to write an SVG copy of every chart beside the PNG
  * @param proposedNotches a notch design to show beside the case's own filters, or null
  * @param timeDomainCheck a doublet-and-gust simulation at V0max to show, or null
+ * @param envelope a matched-point envelope to show, or null
  */
 public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, ProposedNotches proposedNotches,
-    LoopComparison timeDomainCheck) {
+    LoopComparison timeDomainCheck, EnvelopeReport.Data envelope) {
   /** Validates. */
   public ReportOptions {
     if (chartSpeedUnit == null) {
@@ -27,7 +28,7 @@ public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, 
    * @param vectorCharts whether to write SVG copies
    */
   public ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts) {
-    this(chartSpeedUnit, vectorCharts, null, null);
+    this(chartSpeedUnit, vectorCharts, null, null, null);
   }
 
   /**
@@ -35,7 +36,7 @@ public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, 
    * @return these options with the design
    */
   public ReportOptions withProposedNotches(ProposedNotches notches) {
-    return new ReportOptions(chartSpeedUnit, vectorCharts, notches, timeDomainCheck);
+    return new ReportOptions(chartSpeedUnit, vectorCharts, notches, timeDomainCheck, envelope);
   }
 
   /**
@@ -43,7 +44,15 @@ public record ReportOptions(SpeedAxisUnit chartSpeedUnit, boolean vectorCharts, 
    * @return these options with the time-domain check
    */
   public ReportOptions withTimeDomainCheck(LoopComparison check) {
-    return new ReportOptions(chartSpeedUnit, vectorCharts, proposedNotches, check);
+    return new ReportOptions(chartSpeedUnit, vectorCharts, proposedNotches, check, envelope);
+  }
+
+  /**
+   * @param data the envelope to show
+   * @return these options with the envelope
+   */
+  public ReportOptions withEnvelope(EnvelopeReport.Data data) {
+    return new ReportOptions(chartSpeedUnit, vectorCharts, proposedNotches, timeDomainCheck, data);
   }
 
   /** @return EAS in m/s, SVG copies written */

@@ -17,8 +17,9 @@ import org.flexmargin.sweep.SweepResult;
 /**
  * Writes the human-readable part of a report folder: {@code charts/} (V-g and V-f diagrams of
  * every configuration and, with a loop, closed-loop V-g and V-f, margins against airspeed, root
- * locus, Bode, Nichols and notch charts; PNG and optionally SVG) and {@code report.html}
- * (self-contained, charts embedded, clearance verdicts in the findings summary). The data files ({@link ResultFiles}) are written separately into the same folder.
+ * locus, Bode, Nichols and notch charts; with an envelope the matched-point boundary; PNG and
+ * optionally SVG) and {@code report.html} (self-contained, charts embedded, clearance verdicts in
+ * the findings summary). The data files ({@link ResultFiles}) are written separately into the same folder.
  *
  * <p>Drawing needs no display: if {@code java.awt.headless} is not set, it is set to true.
  */
@@ -91,6 +92,11 @@ public final class ReportWriter {
       // loop and clearance sections go after the configurations, before diagnostics and provenance
       int at = sections.size() - 2;
       sections.addAll(at, ClearanceSections.of(result, loopCharts, unit));
+    }
+    if (options.envelope() != null) {
+      EnvelopeReport.Data e = options.envelope();
+      sections.add(sections.size() - 2, new EnvelopeSection(e, unit, embed(List.of(EnvelopeReport.chart(
+          result.analysisCase().name(), e.spec(), e.envelopes(), unit)), chartDir, options).get(0)));
     }
     if (options.timeDomainCheck() != null) {
       sections.add(sections.size() - 2, new SimulationSection(options.timeDomainCheck(),

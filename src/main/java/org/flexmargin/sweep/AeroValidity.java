@@ -7,6 +7,7 @@ import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.GafTable;
 import org.flexmargin.model.LatticeSpec;
+import org.flexmargin.model.MachGafTable;
 
 /**
  * Warnings when a sweep leaves the range in which the chosen aerodynamics hold (docs/verdict.md):
@@ -17,7 +18,10 @@ import org.flexmargin.model.LatticeSpec;
  *       1.048 (derived) says compressibility raises the lift slope by about 5 %;
  *   <li>a force table holds at its own Mach number; we accept sweep points within
  *       +-{@value #TABLE_MACH_TOLERANCE} of it (our choice: the Prandtl-Glauert factor changes by
- *       under 1 % over that span below Mach 0.3, and by about 4 % at Mach 0.6).
+ *       under 1 % over that span below Mach 0.3, and by about 4 % at Mach 0.6). Lifting surfaces
+ *       and tables at several Mach numbers are used at their sweep Mach number (a constant-Mach
+ *       sweep's own, clamped into the tabulated range, {@link
+ *       org.flexmargin.model.AnalysisCase}), with the same tolerance.
  * </ul>
  *
  * The reduced-frequency range of a table is checked by the flutter solvers themselves.
@@ -38,6 +42,9 @@ final class AeroValidity {
   static List<String> warnings(Configuration c, PlannedPath path) {
     if (c.aero() instanceof LatticeSpec l) {
       return warnings(l.mach(), path, "the lifting-surface forces are used at the lattice's Mach number");
+    }
+    if (c.aero() instanceof MachGafTable t) {
+      return warnings(t.machNumber(), path, "the force tables are interpolated to Mach");
     }
     return warnings(c.aero() instanceof GafTable t ? t.machNumber() : Double.NaN, path);
   }

@@ -18,7 +18,6 @@ import org.flexmargin.lattice.AeroSourceFactory;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.GafTable;
-import org.flexmargin.model.LatticeSpec;
 import org.flexmargin.model.Altitudes;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.EnvelopeSpec;
@@ -97,9 +96,9 @@ public final class MatchedPoints {
   private MatchedPoints() {}
 
   /**
-   * The matched-point boundary of a configuration. Lifting surfaces give forces at every Mach
-   * number (interpolated in their Mach table); strip theory and a force table do not depend on
-   * Mach, which the warnings state.
+   * The matched-point boundary of a configuration. Lifting surfaces and force tables at several
+   * Mach numbers give forces at every Mach number (interpolated in their Mach table); strip theory
+   * and a force table at one Mach number do not depend on Mach, which the warnings state.
    *
    * @param c the configuration
    * @param spec the envelope's lines
@@ -111,12 +110,12 @@ public final class MatchedPoints {
     List<String> warnings = new ArrayList<>();
     DoubleFunction<AeroSource> aero;
     double lo, hi, start;
-    if (c.aero() instanceof LatticeSpec l) {
-      AeroSourceFactory.LatticeTable table = AeroSourceFactory.forces(l, model.modes());
-      aero = m -> AeroSourceFactory.atMach(l, model.modes(), table, m);
-      lo = table.forces().lowestMach();
-      hi = table.forces().highestMach();
-      start = l.mach();
+    Optional<AeroSourceFactory.MachForces> overMach = AeroSourceFactory.overMach(c.aero(), model.modes());
+    if (overMach.isPresent()) {
+      aero = overMach.get().atMach();
+      lo = overMach.get().lowestMach();
+      hi = overMach.get().highestMach();
+      start = overMach.get().sweepMach();
     } else {
       AeroSource fixed = model.system().aero();
       aero = m -> fixed;
