@@ -7,6 +7,7 @@ import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
 import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.flexmargin.model.FitWeighting;
 import org.flexmargin.model.InvalidInputException;
 
 /**
@@ -47,7 +48,7 @@ public final class MinimumStateApproximation {
    *
    * @param source the data
    * @param maxReducedFrequency k<sub>max</sub> &gt; 0
-   * @param lagCount nL from 1 to 12
+   * @param lagCount nL from 1 to 24
    * @return the fit
    */
   public static RationalFit fit(AeroSource source, double maxReducedFrequency, int lagCount) {
@@ -69,6 +70,25 @@ public final class MinimumStateApproximation {
    */
   public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
       double errorThreshold) {
+    return fit(source, reducedFrequencies, lagRoots, errorThreshold, FitWeighting.UNIFORM);
+  }
+
+  /**
+   * Fits the minimum-state form with a weighting of the fitted frequencies: with {@link
+   * FitWeighting#INVERSE_MAGNITUDE} each equation's element weight is multiplied by the frequency
+   * weight of {@link RogerApproximation#frequencyWeights} (1 to 20, larger where the element is
+   * small), with {@link FitWeighting#UNIFORM} this is {@link #fit(AeroSource, double[], double[],
+   * double)}.
+   *
+   * @param source the data to fit
+   * @param reducedFrequencies k values as for the unweighted fit
+   * @param lagRoots &beta;<sub>l</sub> as for the unweighted fit
+   * @param errorThreshold relative element error above which the fit is flagged
+   * @param weighting how the frequencies are weighted
+   * @return the fit, its errors and warnings
+   */
+  public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
+      double errorThreshold, FitWeighting weighting) {
     if (source == null) {
       throw new InvalidInputException("rfa.source", "aerodynamic data", "none");
     }
@@ -95,7 +115,7 @@ public final class MinimumStateApproximation {
     List<String> warnings = RogerApproximation.rangeWarnings(source, ks);
     double[][] a0 = RogerApproximation.steadyForces(source);
     double[][] data = RogerApproximation.sampled(source, ks);
-    Problem pr = new Problem(n, ks, lags, a0, data);
+    Problem pr = new Problem(n, ks, lags, a0, data, RogerApproximation.frequencyWeights(data, a0, weighting));
     double[][] d = pr.initialD(source, errorThreshold, lags);
     double[][] e = new double[nl][n];
     double[][] a1 = new double[n][n];
@@ -139,8 +159,11 @@ public final class MinimumStateApproximation {
     private final double[][][] targetRe;
     private final double[][][] targetIm;
     private final double[][] weight;
+    /** frequency weight at k r of element (i, j), or null when every one is 1. */
+    private final double[][][] frequencyWeight;
 
-    Problem(int n, double[] ks, double[] lags, double[][] a0, double[][] data) {
+    Problem(int n, double[] ks, double[] lags, double[][] a0, double[][] data, double[][][] frequencyWeight) {
+      this.frequencyWeight = frequencyWeight;
       this.n = n;
       this.nk = ks.length;
       this.nl = lags.length;
@@ -183,6 +206,11 @@ public final class MinimumStateApproximation {
           weight[i][j] = size > 0 ? 1 / size : 1.0;
         }
       }
+    }
+
+    /** @return the weight of the equations of element (i, j) at k r */
+    private double weight(int r, int i, int j) {
+      return frequencyWeight == null ? weight[i][j] : weight[i][j] * frequencyWeight[r][i][j];
     }
 
     /**
@@ -231,7 +259,7 @@ public final class MinimumStateApproximation {
         for (int r = 0; r < nk; r++) {
           double k = ks[r];
           for (int i = 0; i < n; i++) {
-            double w = weight[i][j];
+            double w = weight(r, i, j);
             int re = 2 * (r * n + i);
             a.set(re, n + i, -k * k * w); // A2[i][j]
             a.set(re + 1, i, k * w); // A1[i][j]
@@ -269,7 +297,7 @@ public final class MinimumStateApproximation {
         for (int r = 0; r < nk; r++) {
           double k = ks[r];
           for (int j = 0; j < n; j++) {
-            double w = weight[i][j];
+            double w = weight(r, i, j);
             int re = 2 * (r * n + j);
             a.set(re, n + j, -k * k * w);
             a.set(re + 1, j, k * w);
