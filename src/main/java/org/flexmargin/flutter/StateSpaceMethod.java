@@ -12,20 +12,26 @@ import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.flexmargin.aero.AeroSource;
 import org.flexmargin.aero.RationalFit;
+import org.flexmargin.aero.RationalFits;
 import org.flexmargin.aero.RogerApproximation;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.flutter.FlutterWorkspace.Root;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.FlutterMethodKind;
+import org.flexmargin.model.FitWeighting;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.RationalFitForm;
+import org.flexmargin.model.RationalFitSettings;
 import org.flexmargin.numerics.ComplexEigen;
 import org.flexmargin.numerics.ComplexEigenResult;
 
 /**
  * Flutter from the eigenvalues of a first-order state-space model of the aeroelastic equations,
- * with the aerodynamics replaced by a rational function approximation in Roger's form (K. L.
+ * with the aerodynamics replaced by a rational function approximation held in Roger's form (K. L.
  * Roger, AGARD-CP-228, 1977; Tiffany &amp; Adams, NASA TP-2776, 1988; see {@link
- * RogerApproximation}). Unlike the p-k method this model is exact for every complex s, not only
+ * RogerApproximation}), fitted as the analysis options' rational-fit settings ask ({@link
+ * RationalFits}: Roger's form or Karpel's minimum-state form, whose rank-one lag matrices are
+ * realised here like Roger's). Unlike the p-k method this model is exact for every complex s, not only
  * on the imaginary axis, so its damping is consistent away from g = 0 and a divergence shows as a
  * real root crossing zero; the price is the fit error of the aerodynamics.
  *
@@ -125,31 +131,47 @@ public final class StateSpaceMethod implements FlutterMethod {
   private static final int BRENT_MAX_EVALUATIONS = 100;
 
   private final RationalFit fit;
-  private final int lagCount;
-  private final double maxReducedFrequency;
+  /** Fit settings of this method, or null to take those of the options given to {@link #solve}. */
+  private final RationalFitSettings settings;
 
   /**
    * Uses the system's aerodynamics as they are if they are a {@link RationalFit}, else fits them
-   * with {@value #DEFAULT_LAG_COUNT} default lag roots over k in [0, {@value
-   * #DEFAULT_MAX_REDUCED_FREQUENCY}].
+   * as the options given to {@link #solve} ask ({@link AnalysisOptions#rationalFit()}), over k in
+   * [0, {@value #DEFAULT_MAX_REDUCED_FREQUENCY}] unless they give the range; with the default
+   * settings, {@value #DEFAULT_LAG_COUNT} default lag roots in Roger's form.
    */
   public StateSpaceMethod() {
-    this(DEFAULT_LAG_COUNT, DEFAULT_MAX_REDUCED_FREQUENCY);
+    this.fit = null;
+    this.settings = null;
   }
 
   /**
    * Uses the system's aerodynamics as they are if they are a {@link RationalFit}, else fits them
-   * by {@link RogerApproximation#fit(AeroSource, double, int)}.
+   * by {@link RogerApproximation#fit(AeroSource, double, int)}, whatever the options say.
    *
-   * @param lagCount number of lag roots nL, 0 to 12
+   * @param lagCount number of lag roots nL, 0 to {@value RationalFitSettings#MAX_LAG_COUNT}
    * @param maxReducedFrequency upper end of the fitted range, &gt; 0
    * @throws InvalidInputException {@code rfa.lag_count} or {@code rfa.max_reduced_frequency}
    */
   public StateSpaceMethod(int lagCount, double maxReducedFrequency) {
     RogerApproximation.defaultLagRoots(maxReducedFrequency, lagCount); // validates both
     this.fit = null;
-    this.lagCount = lagCount;
-    this.maxReducedFrequency = maxReducedFrequency;
+    this.settings = new RationalFitSettings(RationalFitForm.ROGER, lagCount, null, 0.0, maxReducedFrequency,
+        RationalFitSettings.DEFAULT_POINTS, FitWeighting.UNIFORM);
+  }
+
+  /**
+   * Uses the system's aerodynamics as they are if they are a {@link RationalFit}, else fits them
+   * with the given settings, whatever the options say.
+   *
+   * @param settings how to fit; an automatic range ends at {@value #DEFAULT_MAX_REDUCED_FREQUENCY}
+   */
+  public StateSpaceMethod(RationalFitSettings settings) {
+    if (settings == null) {
+      throw new InvalidInputException("rational_fit", "rational-fit settings", "none");
+    }
+    this.fit = null;
+    this.settings = settings;
   }
 
   /**
@@ -162,20 +184,32 @@ public final class StateSpaceMethod implements FlutterMethod {
       throw new InvalidInputException("rfa", "a rational fit", "none");
     }
     this.fit = fit;
-    this.lagCount = fit.lagCount();
-    this.maxReducedFrequency = fit.maxReducedFrequency();
+    this.settings = null;
+  }
+
+  /**
+   * The fit this method uses for a system with the default options.
+   *
+   * @param system the aeroelastic system
+   * @return the rational fit
+   * @see #fitFor(AeroelasticSystem, AnalysisOptions)
+   */
+  public RationalFit fitFor(AeroelasticSystem system) {
+    return fitFor(system, AnalysisOptions.defaults());
   }
 
   /**
    * The fit this method uses for a system: the one given to the constructor, else the system's
-   * own aerodynamics if they are a fit, else a new least-squares fit of them.
+   * own aerodynamics if they are a fit, else a new fit of them with this method's settings or, if
+   * it has none, the options' ({@link RationalFits}).
    *
    * @param system the aeroelastic system
+   * @param options the analysis options (their rational-fit settings)
    * @return the rational fit
    * @throws IllegalArgumentException if a given fit does not match the system's size or reference
    *     semichord
    */
-  public RationalFit fitFor(AeroelasticSystem system) {
+  public RationalFit fitFor(AeroelasticSystem system, AnalysisOptions options) {
     AeroSource aero = system.aero();
     RationalFit f;
     if (fit != null) {
@@ -183,7 +217,7 @@ public final class StateSpaceMethod implements FlutterMethod {
     } else if (aero instanceof RationalFit own) {
       f = own;
     } else {
-      f = RogerApproximation.fit(aero, maxReducedFrequency, lagCount);
+      f = RationalFits.fit(aero, settings != null ? settings : options.rationalFit(), DEFAULT_MAX_REDUCED_FREQUENCY);
     }
     if (f.size() != system.size()) {
       throw new IllegalArgumentException(
@@ -322,7 +356,7 @@ public final class StateSpaceMethod implements FlutterMethod {
 
   @Override
   public FlutterSolution solve(AeroelasticSystem system, FlightPath path, AnalysisOptions options) {
-    RationalFit f = fitFor(system);
+    RationalFit f = fitFor(system, options);
     Tracker tr = new Tracker(system, f, path);
     List<String> warnings = tr.warnings;
     warnings.add(String.format(Locale.ROOT,
