@@ -111,7 +111,8 @@ public final class RogerApproximation {
 
   /**
    * Fits Roger's form with a weighting of the fitted frequencies. With {@link FitWeighting#UNIFORM}
-   * this is {@link #fit(AeroSource, double[], double[], double)}; with {@link
+   * or {@link FitWeighting#ELEMENT} (the same here: each element is a problem of its own) this is
+   * {@link #fit(AeroSource, double[], double[], double)}; with {@link
    * FitWeighting#INVERSE_MAGNITUDE} the two equations of element (i, j) at k are divided by
    * max(|Q<sub>ij</sub>(ik)|, 5 % of its largest modulus) ({@link #frequencyWeights}), and each
    * element is solved on its own.
@@ -227,10 +228,10 @@ public final class RogerApproximation {
    * @param data Q(ik) at each fitted k, interleaved
    * @param a0 steady forces
    * @param weighting the weighting
-   * @return w[r][i][j], or {@code null} for {@link FitWeighting#UNIFORM} (every weight 1)
+   * @return w[r][i][j], or {@code null} for the other weightings (every weight 1)
    */
   static double[][][] frequencyWeights(double[][] data, double[][] a0, FitWeighting weighting) {
-    if (weighting == FitWeighting.UNIFORM) {
+    if (weighting != FitWeighting.INVERSE_MAGNITUDE) {
       return null;
     }
     int n = a0.length;

@@ -16,7 +16,7 @@ final class RationalFitSectionReader {
   private static final List<String> KEYS =
       List.of("method", "lag_count", "lag_roots", "reduced_frequency_range", "points", "weighting");
   private static final List<String> METHODS = List.of("roger", "minimum_state");
-  private static final List<String> WEIGHTINGS = List.of("uniform", "inverse_magnitude");
+  private static final List<String> WEIGHTINGS = List.of("uniform", "element", "inverse_magnitude");
 
   private RationalFitSectionReader() {}
 
@@ -53,11 +53,16 @@ final class RationalFitSectionReader {
       kMax = k[1];
     }
     int points = f.has("points") ? f.optional("points").integer() : d.points();
-    FitWeighting weighting = f.has("weighting")
-        && f.optional("weighting").choice(WEIGHTINGS).equals("inverse_magnitude")
-        ? FitWeighting.INVERSE_MAGNITUDE : d.weighting();
+    FitWeighting weighting = d.weighting();
+    if (f.has("weighting")) {
+      String w = f.optional("weighting").choice(WEIGHTINGS);
+      for (FitWeighting candidate : FitWeighting.values()) {
+        weighting = candidate.word().equals(w) ? candidate : weighting;
+      }
+    }
+    FitWeighting chosen = weighting;
     double lo = kMin;
     double hi = kMax;
-    return root.build(() -> new RationalFitSettings(form, lagCount, lagRoots, lo, hi, points, weighting));
+    return root.build(() -> new RationalFitSettings(form, lagCount, lagRoots, lo, hi, points, chosen));
   }
 }

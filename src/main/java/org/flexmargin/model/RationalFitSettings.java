@@ -57,7 +57,8 @@ public record RationalFitSettings(
       throw new InvalidInputException("rational_fit.method", "\"roger\" or \"minimum_state\"", "nothing");
     }
     if (weighting == null) {
-      throw new InvalidInputException("rational_fit.weighting", "\"uniform\" or \"inverse_magnitude\"", "nothing");
+      throw new InvalidInputException("rational_fit.weighting", "\"uniform\", \"element\" or \"inverse_magnitude\"",
+          "nothing");
     }
     int least = form == RationalFitForm.MINIMUM_STATE ? 1 : 0;
     if (lagCount != AUTOMATIC && (lagCount < least || lagCount > MAX_LAG_COUNT)) {

@@ -118,7 +118,7 @@ class RationalFitSectionTest {
         {"{\"reduced_frequency_range\": [1.0]}", "rational_fit.reduced_frequency_range",
             "two reduced frequencies [lowest, highest]", "1 values"},
         {"{\"points\": 2}", "rational_fit.points", "an integer from 3 to 400", "2"},
-        {"{\"weighting\": \"relative\"}", "rational_fit.weighting", "\"uniform\" or \"inverse_magnitude\"",
+        {"{\"weighting\": \"relative\"}", "rational_fit.weighting", "\"uniform\", \"element\" or \"inverse_magnitude\"",
             "the text \"relative\""},
     };
     for (int i = 0; i < cases.length; i++) {
