@@ -30,8 +30,8 @@ import org.flexmargin.numerics.ComplexEigenResult;
  * with the aerodynamics replaced by a rational function approximation held in Roger's form (K. L.
  * Roger, AGARD-CP-228, 1977; Tiffany &amp; Adams, NASA TP-2776, 1988; see {@link
  * RogerApproximation}), fitted as the analysis options' rational-fit settings ask ({@link
- * RationalFits}: Roger's form or Karpel's minimum-state form, whose rank-one lag matrices are
- * realised here like Roger's). Unlike the p-k method this model is exact for every complex s, not only
+ * RationalFits}: Roger's form, or Karpel's minimum-state form, whose rank-one lag matrices need
+ * one lag state per lag root instead of n; see {@link #stateMatrix}). Unlike the p-k method this model is exact for every complex s, not only
  * on the imaginary axis, so its damping is consistent away from g = 0 and a divergence shows as a
  * real root crossing zero; the price is the fit error of the aerodynamics.
  *
@@ -239,7 +239,9 @@ public final class StateSpaceMethod implements FlutterMethod {
    * @param densityKgPerM3 air density rho &ge; 0 (kg/m^3); 0 gives the in-vacuo structure plus
    *     the uncoupled lag roots
    * @param speedTasMps true airspeed V &ge; 0 (m/s)
-   * @return the n (2 + nL) square state matrix (units 1/s and 1/s^2 by block)
+   * @return the square state matrix (units 1/s and 1/s^2 by block): n (2 + nL) for Roger's form,
+   *     2 n + nL for the minimum-state form, whose lag state z_l = e_l^T r_l follows z_l' = e_l^T
+   *     xi' - (V/b) beta_l z_l with A_{l+2} = d_l e_l^T ({@link RationalFit#rankOneLag})
    * @throws IllegalArgumentException for negative or non-finite density or speed, or sizes that
    *     differ
    * @throws ArithmeticException if Mbar = M - (rho b^2 / 2) A2 is singular
@@ -256,7 +258,8 @@ public final class StateSpaceMethod implements FlutterMethod {
       throw new IllegalArgumentException("rational fit has " + fit.size() + " coordinates, system " + n);
     }
     int nl = fit.lagCount();
-    int size = n * (2 + nl);
+    boolean minimumState = RationalFit.MINIMUM_STATE.equals(fit.form());
+    int size = 2 * n + nl * lagStatesPerRoot(fit, n);
     double b = fit.referenceSemichordM();
     double q = 0.5 * densityKgPerM3 * speedTasMps * speedTasMps;
     double qbv = 0.5 * densityKgPerM3 * speedTasMps * b; // q b / V
@@ -264,19 +267,26 @@ public final class StateSpaceMethod implements FlutterMethod {
     double[] mm = system.massFlat();
     double[] cc = system.dampingFlat();
     double[] kk = system.stiffnessFlat();
+    double[][][] factors = new double[nl][][];
+    for (int l = 0; l < nl && minimumState; l++) {
+      factors[l] = fit.rankOneLag(l);
+    }
     DMatrixRMaj mbar = new DMatrixRMaj(n, n);
-    DMatrixRMaj rhs = new DMatrixRMaj(n, n * (2 + nl));
+    DMatrixRMaj rhs = new DMatrixRMaj(n, size);
     for (int i = 0; i < n; i++) {
       for (int j = 0; j < n; j++) {
         mbar.set(i, j, mm[i * n + j] - qbv2 * fit.coefficient(2, i, j));
         rhs.set(i, j, -(kk[i * n + j] - q * fit.coefficient(0, i, j)));
         rhs.set(i, n + j, -(cc[i * n + j] - qbv * fit.coefficient(1, i, j)));
-        for (int l = 0; l < nl; l++) {
+        for (int l = 0; l < nl && !minimumState; l++) {
           rhs.set(i, (2 + l) * n + j, q * fit.coefficient(l + 3, i, j));
         }
       }
+      for (int l = 0; l < nl && minimumState; l++) {
+        rhs.set(i, 2 * n + l, q * factors[l][0][i]);
+      }
     }
-    DMatrixRMaj x = new DMatrixRMaj(n, n * (2 + nl));
+    DMatrixRMaj x = new DMatrixRMaj(n, size);
     if (!CommonOps_DDRM.solve(mbar, rhs, x) || !finite(x)) {
       throw new ArithmeticException(String.format(Locale.ROOT,
           "mass matrix with aerodynamic apparent mass M - (rho b^2/2) A2 is singular at rho = %g kg/m^3",
@@ -285,16 +295,33 @@ public final class StateSpaceMethod implements FlutterMethod {
     DMatrixRMaj a = new DMatrixRMaj(size, size);
     for (int i = 0; i < n; i++) {
       a.set(i, n + i, 1.0);
-      for (int c = 0; c < n * (2 + nl); c++) {
+      for (int c = 0; c < size; c++) {
         a.set(n + i, c, x.get(i, c));
       }
-      for (int l = 0; l < nl; l++) {
+      for (int l = 0; l < nl && !minimumState; l++) {
         int row = (2 + l) * n + i;
         a.set(row, n + i, 1.0);
         a.set(row, row, -speedTasMps / b * fit.lagRoot(l));
       }
     }
+    for (int l = 0; l < nl && minimumState; l++) {
+      int row = 2 * n + l;
+      for (int j = 0; j < n; j++) {
+        a.set(row, n + j, factors[l][1][j]);
+      }
+      a.set(row, row, -speedTasMps / b * fit.lagRoot(l));
+    }
     return a;
+  }
+
+  /**
+   * @param fit a rational fit
+   * @param n number of coordinates
+   * @return lag states per lag root of the realisation: 1 for a minimum-state fit (its lag matrices
+   *     have rank one), n for Roger's form
+   */
+  static int lagStatesPerRoot(RationalFit fit, int n) {
+    return RationalFit.MINIMUM_STATE.equals(fit.form()) ? 1 : n;
   }
 
   /** Fit error at a flutter onset's reduced frequency above which the results say so (1 %). */
@@ -454,6 +481,8 @@ public final class StateSpaceMethod implements FlutterMethod {
     final FlightPath path;
     final int n;
     final int nl;
+    /** Lag states per lag root: n (Roger's form) or 1 (minimum state). */
+    final int perLag;
     final List<String> names;
     final double[] omegaFloor;
     final double[] inVacuo;
@@ -472,6 +501,7 @@ public final class StateSpaceMethod implements FlutterMethod {
       this.path = path;
       this.n = sys.size();
       this.nl = fit.lagCount();
+      this.perLag = lagStatesPerRoot(fit, n);
       this.names = sys.coordinateNames();
       this.inVacuo = new double[n];
       double minPositive = Double.POSITIVE_INFINITY;
@@ -518,8 +548,8 @@ public final class StateSpaceMethod implements FlutterMethod {
         double worstLag = 0;
         for (int l = 0; l < nl; l++) {
           double rn = 0;
-          for (int i = 0; i < n; i++) {
-            int row = (2 + l) * n + i;
+          for (int i = 0; i < perLag; i++) {
+            int row = 2 * n + l * perLag + i;
             rn += vec.getReal(row, c) * vec.getReal(row, c) + vec.getImag(row, c) * vec.getImag(row, c);
           }
           worstLag = Math.max(worstLag, rn);
