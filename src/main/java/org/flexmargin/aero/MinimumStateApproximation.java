@@ -7,6 +7,7 @@ import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
 import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.flexmargin.model.FitWeighting;
 import org.flexmargin.model.InvalidInputException;
 
 /**
@@ -26,9 +27,10 @@ import org.flexmargin.model.InvalidInputException;
  * <p>Fit: A<sub>0</sub> = Re Q(0) imposed (exact steady forces, as in {@link RogerApproximation});
  * then alternating least squares (Karpel; Tiffany &amp; Adams): with D fixed the problem is linear in
  * (A<sub>1</sub>, A<sub>2</sub>, E) and splits by column; with E fixed it is linear in
- * (A<sub>1</sub>, A<sub>2</sub>, D) and splits by row. Each equation of element (i, j) is weighted
- * by 1 / max<sub>k</sub> |Q<sub>ij</sub>| (at least 1e-3 of the largest element), so that small
- * elements are fitted to the same relative accuracy as large ones. D starts from the dominant singular
+ * (A<sub>1</sub>, A<sub>2</sub>, D) and splits by row. By default ({@link FitWeighting#ELEMENT})
+ * each equation of element (i, j) is weighted by 1 / max<sub>k</sub> |Q<sub>ij</sub>| (at least
+ * 1e-3 of the largest element), so that small elements are fitted to the same relative accuracy as
+ * large ones; the weighted fit offers the others. D starts from the dominant singular
  * pairs of a Roger fit with the same lag roots (one unit entry per lag root where that fit is ill-posed). Each half-step cannot increase the weighted residual; iterations stop when it falls by less
  * than 1e-12 relative, or after {@value #MAX_ITERATIONS}.
  */
@@ -47,7 +49,7 @@ public final class MinimumStateApproximation {
    *
    * @param source the data
    * @param maxReducedFrequency k<sub>max</sub> &gt; 0
-   * @param lagCount nL from 1 to 12
+   * @param lagCount nL from 1 to 24
    * @return the fit
    */
   public static RationalFit fit(AeroSource source, double maxReducedFrequency, int lagCount) {
@@ -69,6 +71,26 @@ public final class MinimumStateApproximation {
    */
   public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
       double errorThreshold) {
+    return fit(source, reducedFrequencies, lagRoots, errorThreshold, FitWeighting.ELEMENT);
+  }
+
+  /**
+   * Fits the minimum-state form with a weighting of its equations: {@link FitWeighting#ELEMENT}
+   * (the element weights of the class description; this is {@link #fit(AeroSource, double[],
+   * double[], double)}), {@link FitWeighting#UNIFORM} (every weight 1: the absolute error, which
+   * favours the large elements) or {@link FitWeighting#INVERSE_MAGNITUDE} (the element weight times
+   * the frequency weight of {@link RogerApproximation#frequencyWeights}, 1 to 20, larger where the
+   * element is small).
+   *
+   * @param source the data to fit
+   * @param reducedFrequencies k values as for the unweighted fit
+   * @param lagRoots &beta;<sub>l</sub> as for the unweighted fit
+   * @param errorThreshold relative element error above which the fit is flagged
+   * @param weighting how the frequencies are weighted
+   * @return the fit, its errors and warnings
+   */
+  public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
+      double errorThreshold, FitWeighting weighting) {
     if (source == null) {
       throw new InvalidInputException("rfa.source", "aerodynamic data", "none");
     }
@@ -95,7 +117,8 @@ public final class MinimumStateApproximation {
     List<String> warnings = RogerApproximation.rangeWarnings(source, ks);
     double[][] a0 = RogerApproximation.steadyForces(source);
     double[][] data = RogerApproximation.sampled(source, ks);
-    Problem pr = new Problem(n, ks, lags, a0, data);
+    Problem pr = new Problem(n, ks, lags, a0, data, weighting == FitWeighting.UNIFORM,
+        RogerApproximation.frequencyWeights(data, a0, weighting));
     double[][] d = pr.initialD(source, errorThreshold, lags);
     double[][] e = new double[nl][n];
     double[][] a1 = new double[n][n];
@@ -104,7 +127,7 @@ public final class MinimumStateApproximation {
     for (int it = 0; it < MAX_ITERATIONS; it++) {
       pr.solveColumns(d, a1, a2, e);
       double r = pr.solveRows(e, a1, a2, d);
-      if (last - r <= STOP_RELATIVE_CHANGE * last) {
+      if (Double.isFinite(last) && last - r <= STOP_RELATIVE_CHANGE * last) {
         break;
       }
       last = r;
@@ -139,8 +162,12 @@ public final class MinimumStateApproximation {
     private final double[][][] targetRe;
     private final double[][][] targetIm;
     private final double[][] weight;
+    /** frequency weight at k r of element (i, j), or null when every one is 1. */
+    private final double[][][] frequencyWeight;
 
-    Problem(int n, double[] ks, double[] lags, double[][] a0, double[][] data) {
+    Problem(int n, double[] ks, double[] lags, double[][] a0, double[][] data, boolean uniform,
+        double[][][] frequencyWeight) {
+      this.frequencyWeight = frequencyWeight;
       this.n = n;
       this.nk = ks.length;
       this.nl = lags.length;
@@ -180,9 +207,14 @@ public final class MinimumStateApproximation {
       for (int i = 0; i < n; i++) {
         for (int j = 0; j < n; j++) {
           double size = Math.max(weight[i][j], WEIGHT_FLOOR * largest);
-          weight[i][j] = size > 0 ? 1 / size : 1.0;
+          weight[i][j] = size > 0 && !uniform ? 1 / size : 1.0;
         }
       }
+    }
+
+    /** @return the weight of the equations of element (i, j) at k r */
+    private double weight(int r, int i, int j) {
+      return frequencyWeight == null ? weight[i][j] : weight[i][j] * frequencyWeight[r][i][j];
     }
 
     /**
@@ -231,7 +263,7 @@ public final class MinimumStateApproximation {
         for (int r = 0; r < nk; r++) {
           double k = ks[r];
           for (int i = 0; i < n; i++) {
-            double w = weight[i][j];
+            double w = weight(r, i, j);
             int re = 2 * (r * n + i);
             a.set(re, n + i, -k * k * w); // A2[i][j]
             a.set(re + 1, i, k * w); // A1[i][j]
@@ -269,7 +301,7 @@ public final class MinimumStateApproximation {
         for (int r = 0; r < nk; r++) {
           double k = ks[r];
           for (int j = 0; j < n; j++) {
-            double w = weight[i][j];
+            double w = weight(r, i, j);
             int re = 2 * (r * n + j);
             a.set(re, n + j, -k * k * w);
             a.set(re + 1, j, k * w);

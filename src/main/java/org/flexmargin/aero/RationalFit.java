@@ -157,6 +157,43 @@ public record RationalFit(
   }
 
   /**
+   * Rank-one factors d e<sup>T</sup> of a lag matrix, exact when it has rank one (as every lag
+   * matrix of a {@link #MINIMUM_STATE} fit): e is its largest row scaled to unit length, d = A e.
+   *
+   * @param l lag index, 0-based
+   * @return {d, e}, two vectors of length n (d in units of Q, e dimensionless); both zero for a
+   *     zero matrix
+   */
+  public double[][] rankOneLag(int l) {
+    double[][] a = coefficients[l + 3];
+    int n = a.length;
+    int best = 0;
+    double bestNorm = 0;
+    for (int i = 0; i < n; i++) {
+      double norm = 0;
+      for (double v : a[i]) {
+        norm += v * v;
+      }
+      if (norm > bestNorm) {
+        bestNorm = norm;
+        best = i;
+      }
+    }
+    double[] e = new double[n];
+    double[] d = new double[n];
+    double scale = Math.sqrt(bestNorm);
+    for (int j = 0; j < n && scale > 0; j++) {
+      e[j] = a[best][j] / scale;
+    }
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        d[i] += a[i][j] * e[j];
+      }
+    }
+    return new double[][] {d, e};
+  }
+
+  /**
    * @param m 0 for A<sub>0</sub>, 1 for A<sub>1</sub>, 2 for A<sub>2</sub>, l + 3 for the
    *     matrix of lag root l (0-based)
    * @return a copy of coefficient matrix A<sub>m</sub> (units of Q)

@@ -7,7 +7,9 @@ import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.flexmargin.model.FitWeighting;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.RationalFitSettings;
 
 /**
  * Least-squares rational function approximation of generalized aerodynamic forces in Roger's form
@@ -104,6 +106,27 @@ public final class RogerApproximation {
    */
   public static RationalFit fit(
       AeroSource source, double[] reducedFrequencies, double[] lagRoots, double errorThreshold) {
+    return fit(source, reducedFrequencies, lagRoots, errorThreshold, FitWeighting.UNIFORM);
+  }
+
+  /**
+   * Fits Roger's form with a weighting of the fitted frequencies. With {@link FitWeighting#UNIFORM}
+   * or {@link FitWeighting#ELEMENT} (the same here: each element is a problem of its own) this is
+   * {@link #fit(AeroSource, double[], double[], double)}; with {@link
+   * FitWeighting#INVERSE_MAGNITUDE} the two equations of element (i, j) at k are divided by
+   * max(|Q<sub>ij</sub>(ik)|, 5 % of its largest modulus) ({@link #frequencyWeights}), and each
+   * element is solved on its own.
+   *
+   * @param source the data to fit
+   * @param reducedFrequencies k values as for the unweighted fit
+   * @param lagRoots &beta;<sub>l</sub> as for the unweighted fit
+   * @param errorThreshold relative element error above which the fit is flagged, &gt; 0
+   * @param weighting how the frequencies are weighted
+   * @return the fit, its errors and warnings
+   * @throws InvalidInputException as the unweighted fit
+   */
+  public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
+      double errorThreshold, FitWeighting weighting) {
     if (source == null) {
       throw new InvalidInputException("rfa.source", "aerodynamic data", "none");
     }
@@ -151,14 +174,28 @@ public final class RogerApproximation {
         rhs.set(2 * r + 1, e, data[r][2 * e + 1]);
       }
     }
-    LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.leastSquares(2 * nk, unknowns);
-    if (!solver.setA(design.copy()) || !(solver.quality() > MIN_QUALITY)) {
-      throw new InvalidInputException("rfa.lag_roots",
-          "lag roots far enough apart for the fitted reduced frequencies (well-posed least squares)",
-          String.format(Locale.ROOT, "a rank-deficient problem (quality %.3g)", solver.quality()));
-    }
     DMatrixRMaj x = new DMatrixRMaj(unknowns, nn);
-    solver.solve(rhs, x);
+    double[][][] w = frequencyWeights(data, coefficients[0], weighting);
+    if (w == null) {
+      solveWellPosed(design, rhs, x);
+    } else {
+      DMatrixRMaj a = new DMatrixRMaj(2 * nk, unknowns);
+      DMatrixRMaj b = new DMatrixRMaj(2 * nk, 1);
+      DMatrixRMaj xe = new DMatrixRMaj(unknowns, 1);
+      for (int e = 0; e < nn; e++) {
+        for (int row = 0; row < 2 * nk; row++) {
+          double we = w[row / 2][e / n][e % n];
+          for (int u = 0; u < unknowns; u++) {
+            a.set(row, u, we * design.get(row, u));
+          }
+          b.set(row, 0, we * rhs.get(row, e));
+        }
+        solveWellPosed(a, b, xe);
+        for (int u = 0; u < unknowns; u++) {
+          x.set(u, e, xe.get(u));
+        }
+      }
+    }
     for (int u = 0; u < unknowns; u++) {
       for (int e = 0; e < nn; e++) {
         coefficients[u + 1][e / n][e % n] = x.get(u, e);
@@ -166,6 +203,58 @@ public final class RogerApproximation {
     }
 
     return measured(source, lags, coefficients, ks, data, errorThreshold, warnings, RationalFit.ROGER);
+  }
+
+  /** Solves the least-squares problem a x = b, refusing a rank-deficient a. */
+  private static void solveWellPosed(DMatrixRMaj a, DMatrixRMaj b, DMatrixRMaj x) {
+    LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.leastSquares(a.numRows, a.numCols);
+    if (!solver.setA(a.copy()) || !(solver.quality() > MIN_QUALITY)) {
+      throw new InvalidInputException("rfa.lag_roots",
+          "lag roots far enough apart for the fitted reduced frequencies (well-posed least squares)",
+          String.format(Locale.ROOT, "a rank-deficient problem (quality %.3g)", solver.quality()));
+    }
+    solver.solve(b, x);
+  }
+
+  /** Smallest modulus an equation is divided by, as a fraction of its element's largest modulus. */
+  static final double MAGNITUDE_WEIGHT_FLOOR = 0.05;
+
+  /**
+   * Frequency weights of the fitted equations, relative to their element's size: for {@link
+   * FitWeighting#INVERSE_MAGNITUDE}, w<sub>ij</sub>(k) = s<sub>ij</sub> / max(|Q<sub>ij</sub>(ik)|,
+   * 0.05 s<sub>ij</sub>) with s<sub>ij</sub> the largest of |Q<sub>ij</sub>| over the fitted k
+   * and |A0<sub>ij</sub>| (so 1 &le; w &le; 20; 1 for an element that is zero everywhere).
+   *
+   * @param data Q(ik) at each fitted k, interleaved
+   * @param a0 steady forces
+   * @param weighting the weighting
+   * @return w[r][i][j], or {@code null} for the other weightings (every weight 1)
+   */
+  static double[][][] frequencyWeights(double[][] data, double[][] a0, FitWeighting weighting) {
+    if (weighting != FitWeighting.INVERSE_MAGNITUDE) {
+      return null;
+    }
+    int n = a0.length;
+    double[][] scale = new double[n][n];
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        scale[i][j] = Math.abs(a0[i][j]);
+        for (double[] q : data) {
+          scale[i][j] = Math.max(scale[i][j], Math.hypot(q[2 * (i * n + j)], q[2 * (i * n + j) + 1]));
+        }
+      }
+    }
+    double[][][] w = new double[data.length][n][n];
+    for (int r = 0; r < data.length; r++) {
+      for (int i = 0; i < n; i++) {
+        for (int j = 0; j < n; j++) {
+          int idx = 2 * (i * n + j);
+          double m = Math.max(Math.hypot(data[r][idx], data[r][idx + 1]), MAGNITUDE_WEIGHT_FLOOR * scale[i][j]);
+          w[r][i][j] = m > 0 ? scale[i][j] / m : 1.0;
+        }
+      }
+    }
+    return w;
   }
 
   /** @return remarks on the data's range against the fitted frequencies */
@@ -270,14 +359,34 @@ public final class RogerApproximation {
    * @throws InvalidInputException {@code rfa.max_reduced_frequency} or {@code rfa.points}
    */
   public static double[] defaultReducedFrequencies(double maxReducedFrequency, int count) {
+    return reducedFrequencies(0.0, maxReducedFrequency, count);
+  }
+
+  /**
+   * Reduced frequencies from k<sub>min</sub> to k<sub>max</sub>: k<sub>i</sub> = k<sub>min</sub>
+   * + (k<sub>max</sub> - k<sub>min</sub>) (i / (count - 1))<sup>2</sup>, clustered toward
+   * k<sub>min</sub> ({@link #defaultReducedFrequencies} for k<sub>min</sub> = 0).
+   *
+   * @param minReducedFrequency k<sub>min</sub> &ge; 0, finite
+   * @param maxReducedFrequency k<sub>max</sub> &gt; k<sub>min</sub>, finite
+   * @param count number of values, &ge; 3
+   * @return the grid, increasing
+   * @throws InvalidInputException {@code rfa.min_reduced_frequency}, {@code
+   *     rfa.max_reduced_frequency} or {@code rfa.points}
+   */
+  public static double[] reducedFrequencies(double minReducedFrequency, double maxReducedFrequency, int count) {
     checkMaxK(maxReducedFrequency);
+    if (!(minReducedFrequency >= 0) || !(minReducedFrequency < maxReducedFrequency)) {
+      throw new InvalidInputException("rfa.min_reduced_frequency",
+          "a value >= 0 below k_max = " + maxReducedFrequency, String.valueOf(minReducedFrequency));
+    }
     if (count < 3) {
       throw new InvalidInputException("rfa.points", "at least 3", String.valueOf(count));
     }
     double[] k = new double[count];
     for (int i = 0; i < count; i++) {
       double u = (double) i / (count - 1);
-      k[i] = maxReducedFrequency * u * u;
+      k[i] = minReducedFrequency + (maxReducedFrequency - minReducedFrequency) * u * u;
     }
     k[count - 1] = maxReducedFrequency;
     return k;
@@ -299,14 +408,15 @@ public final class RogerApproximation {
    * better; the fit error says so.
    *
    * @param maxReducedFrequency k<sub>max</sub> &gt; 0, finite
-   * @param lagCount nL from 0 to 12
+   * @param lagCount nL from 0 to {@value RationalFitSettings#MAX_LAG_COUNT}
    * @return nL lag roots, increasing (dimensionless)
    * @throws InvalidInputException {@code rfa.max_reduced_frequency} or {@code rfa.lag_count}
    */
   public static double[] defaultLagRoots(double maxReducedFrequency, int lagCount) {
     checkMaxK(maxReducedFrequency);
-    if (lagCount < 0 || lagCount > 12) {
-      throw new InvalidInputException("rfa.lag_count", "0 to 12", String.valueOf(lagCount));
+    if (lagCount < 0 || lagCount > RationalFitSettings.MAX_LAG_COUNT) {
+      throw new InvalidInputException("rfa.lag_count", "0 to " + RationalFitSettings.MAX_LAG_COUNT,
+          String.valueOf(lagCount));
     }
     double[] b = new double[lagCount];
     if (lagCount == 1) {

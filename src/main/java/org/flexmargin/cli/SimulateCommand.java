@@ -194,7 +194,7 @@ final class SimulateCommand implements Callable<Integer> {
     gusts.warnings().forEach(w -> spec.commandLine().getErr().println("flexmargin: warning: " + w.message()));
     SimulationScenario scenario = scenario(c.loop(), gusts);
     SimulationPoint point = SimulationPoint.of(ConfigurationModel.of(conf), conf, c.loop(),
-        StandardAtmosphere.atEquivalentSpeed(alt, eas));
+        StandardAtmosphere.atEquivalentSpeed(alt, eas), c.options().rationalFit());
     SimulationResult r = AircraftSimulation.run(point, scenario);
     List<String> summary = summary(c.name(), r);
     Path target = out != null ? out : Path.of("reports", ResultFiles.fileSafe(c.name()), "simulate");

@@ -12,20 +12,26 @@ import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.flexmargin.aero.AeroSource;
 import org.flexmargin.aero.RationalFit;
+import org.flexmargin.aero.RationalFits;
 import org.flexmargin.aero.RogerApproximation;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.flutter.FlutterWorkspace.Root;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.FlutterMethodKind;
+import org.flexmargin.model.FitWeighting;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.RationalFitForm;
+import org.flexmargin.model.RationalFitSettings;
 import org.flexmargin.numerics.ComplexEigen;
 import org.flexmargin.numerics.ComplexEigenResult;
 
 /**
  * Flutter from the eigenvalues of a first-order state-space model of the aeroelastic equations,
- * with the aerodynamics replaced by a rational function approximation in Roger's form (K. L.
+ * with the aerodynamics replaced by a rational function approximation held in Roger's form (K. L.
  * Roger, AGARD-CP-228, 1977; Tiffany &amp; Adams, NASA TP-2776, 1988; see {@link
- * RogerApproximation}). Unlike the p-k method this model is exact for every complex s, not only
+ * RogerApproximation}), fitted as the analysis options' rational-fit settings ask ({@link
+ * RationalFits}: Roger's form, or Karpel's minimum-state form, whose rank-one lag matrices need
+ * one lag state per lag root instead of n; see {@link #stateMatrix}). Unlike the p-k method this model is exact for every complex s, not only
  * on the imaginary axis, so its damping is consistent away from g = 0 and a divergence shows as a
  * real root crossing zero; the price is the fit error of the aerodynamics.
  *
@@ -125,31 +131,47 @@ public final class StateSpaceMethod implements FlutterMethod {
   private static final int BRENT_MAX_EVALUATIONS = 100;
 
   private final RationalFit fit;
-  private final int lagCount;
-  private final double maxReducedFrequency;
+  /** Fit settings of this method, or null to take those of the options given to {@link #solve}. */
+  private final RationalFitSettings settings;
 
   /**
    * Uses the system's aerodynamics as they are if they are a {@link RationalFit}, else fits them
-   * with {@value #DEFAULT_LAG_COUNT} default lag roots over k in [0, {@value
-   * #DEFAULT_MAX_REDUCED_FREQUENCY}].
+   * as the options given to {@link #solve} ask ({@link AnalysisOptions#rationalFit()}), over k in
+   * [0, {@value #DEFAULT_MAX_REDUCED_FREQUENCY}] unless they give the range; with the default
+   * settings, {@value #DEFAULT_LAG_COUNT} default lag roots in Roger's form.
    */
   public StateSpaceMethod() {
-    this(DEFAULT_LAG_COUNT, DEFAULT_MAX_REDUCED_FREQUENCY);
+    this.fit = null;
+    this.settings = null;
   }
 
   /**
    * Uses the system's aerodynamics as they are if they are a {@link RationalFit}, else fits them
-   * by {@link RogerApproximation#fit(AeroSource, double, int)}.
+   * by {@link RogerApproximation#fit(AeroSource, double, int)}, whatever the options say.
    *
-   * @param lagCount number of lag roots nL, 0 to 12
+   * @param lagCount number of lag roots nL, 0 to {@value RationalFitSettings#MAX_LAG_COUNT}
    * @param maxReducedFrequency upper end of the fitted range, &gt; 0
    * @throws InvalidInputException {@code rfa.lag_count} or {@code rfa.max_reduced_frequency}
    */
   public StateSpaceMethod(int lagCount, double maxReducedFrequency) {
     RogerApproximation.defaultLagRoots(maxReducedFrequency, lagCount); // validates both
     this.fit = null;
-    this.lagCount = lagCount;
-    this.maxReducedFrequency = maxReducedFrequency;
+    this.settings = new RationalFitSettings(RationalFitForm.ROGER, lagCount, null, 0.0, maxReducedFrequency,
+        RationalFitSettings.DEFAULT_POINTS, FitWeighting.UNIFORM);
+  }
+
+  /**
+   * Uses the system's aerodynamics as they are if they are a {@link RationalFit}, else fits them
+   * with the given settings, whatever the options say.
+   *
+   * @param settings how to fit; an automatic range ends at {@value #DEFAULT_MAX_REDUCED_FREQUENCY}
+   */
+  public StateSpaceMethod(RationalFitSettings settings) {
+    if (settings == null) {
+      throw new InvalidInputException("rational_fit", "rational-fit settings", "none");
+    }
+    this.fit = null;
+    this.settings = settings;
   }
 
   /**
@@ -162,20 +184,32 @@ public final class StateSpaceMethod implements FlutterMethod {
       throw new InvalidInputException("rfa", "a rational fit", "none");
     }
     this.fit = fit;
-    this.lagCount = fit.lagCount();
-    this.maxReducedFrequency = fit.maxReducedFrequency();
+    this.settings = null;
+  }
+
+  /**
+   * The fit this method uses for a system with the default options.
+   *
+   * @param system the aeroelastic system
+   * @return the rational fit
+   * @see #fitFor(AeroelasticSystem, AnalysisOptions)
+   */
+  public RationalFit fitFor(AeroelasticSystem system) {
+    return fitFor(system, AnalysisOptions.defaults());
   }
 
   /**
    * The fit this method uses for a system: the one given to the constructor, else the system's
-   * own aerodynamics if they are a fit, else a new least-squares fit of them.
+   * own aerodynamics if they are a fit, else a new fit of them with this method's settings or, if
+   * it has none, the options' ({@link RationalFits}).
    *
    * @param system the aeroelastic system
+   * @param options the analysis options (their rational-fit settings)
    * @return the rational fit
    * @throws IllegalArgumentException if a given fit does not match the system's size or reference
    *     semichord
    */
-  public RationalFit fitFor(AeroelasticSystem system) {
+  public RationalFit fitFor(AeroelasticSystem system, AnalysisOptions options) {
     AeroSource aero = system.aero();
     RationalFit f;
     if (fit != null) {
@@ -183,7 +217,7 @@ public final class StateSpaceMethod implements FlutterMethod {
     } else if (aero instanceof RationalFit own) {
       f = own;
     } else {
-      f = RogerApproximation.fit(aero, maxReducedFrequency, lagCount);
+      f = RationalFits.fit(aero, settings != null ? settings : options.rationalFit(), DEFAULT_MAX_REDUCED_FREQUENCY);
     }
     if (f.size() != system.size()) {
       throw new IllegalArgumentException(
@@ -205,7 +239,9 @@ public final class StateSpaceMethod implements FlutterMethod {
    * @param densityKgPerM3 air density rho &ge; 0 (kg/m^3); 0 gives the in-vacuo structure plus
    *     the uncoupled lag roots
    * @param speedTasMps true airspeed V &ge; 0 (m/s)
-   * @return the n (2 + nL) square state matrix (units 1/s and 1/s^2 by block)
+   * @return the square state matrix (units 1/s and 1/s^2 by block): n (2 + nL) for Roger's form,
+   *     2 n + nL for the minimum-state form, whose lag state z_l = e_l^T r_l follows z_l' = e_l^T
+   *     xi' - (V/b) beta_l z_l with A_{l+2} = d_l e_l^T ({@link RationalFit#rankOneLag})
    * @throws IllegalArgumentException for negative or non-finite density or speed, or sizes that
    *     differ
    * @throws ArithmeticException if Mbar = M - (rho b^2 / 2) A2 is singular
@@ -222,7 +258,8 @@ public final class StateSpaceMethod implements FlutterMethod {
       throw new IllegalArgumentException("rational fit has " + fit.size() + " coordinates, system " + n);
     }
     int nl = fit.lagCount();
-    int size = n * (2 + nl);
+    boolean minimumState = RationalFit.MINIMUM_STATE.equals(fit.form());
+    int size = 2 * n + nl * lagStatesPerRoot(fit, n);
     double b = fit.referenceSemichordM();
     double q = 0.5 * densityKgPerM3 * speedTasMps * speedTasMps;
     double qbv = 0.5 * densityKgPerM3 * speedTasMps * b; // q b / V
@@ -230,19 +267,26 @@ public final class StateSpaceMethod implements FlutterMethod {
     double[] mm = system.massFlat();
     double[] cc = system.dampingFlat();
     double[] kk = system.stiffnessFlat();
+    double[][][] factors = new double[nl][][];
+    for (int l = 0; l < nl && minimumState; l++) {
+      factors[l] = fit.rankOneLag(l);
+    }
     DMatrixRMaj mbar = new DMatrixRMaj(n, n);
-    DMatrixRMaj rhs = new DMatrixRMaj(n, n * (2 + nl));
+    DMatrixRMaj rhs = new DMatrixRMaj(n, size);
     for (int i = 0; i < n; i++) {
       for (int j = 0; j < n; j++) {
         mbar.set(i, j, mm[i * n + j] - qbv2 * fit.coefficient(2, i, j));
         rhs.set(i, j, -(kk[i * n + j] - q * fit.coefficient(0, i, j)));
         rhs.set(i, n + j, -(cc[i * n + j] - qbv * fit.coefficient(1, i, j)));
-        for (int l = 0; l < nl; l++) {
+        for (int l = 0; l < nl && !minimumState; l++) {
           rhs.set(i, (2 + l) * n + j, q * fit.coefficient(l + 3, i, j));
         }
       }
+      for (int l = 0; l < nl && minimumState; l++) {
+        rhs.set(i, 2 * n + l, q * factors[l][0][i]);
+      }
     }
-    DMatrixRMaj x = new DMatrixRMaj(n, n * (2 + nl));
+    DMatrixRMaj x = new DMatrixRMaj(n, size);
     if (!CommonOps_DDRM.solve(mbar, rhs, x) || !finite(x)) {
       throw new ArithmeticException(String.format(Locale.ROOT,
           "mass matrix with aerodynamic apparent mass M - (rho b^2/2) A2 is singular at rho = %g kg/m^3",
@@ -251,16 +295,33 @@ public final class StateSpaceMethod implements FlutterMethod {
     DMatrixRMaj a = new DMatrixRMaj(size, size);
     for (int i = 0; i < n; i++) {
       a.set(i, n + i, 1.0);
-      for (int c = 0; c < n * (2 + nl); c++) {
+      for (int c = 0; c < size; c++) {
         a.set(n + i, c, x.get(i, c));
       }
-      for (int l = 0; l < nl; l++) {
+      for (int l = 0; l < nl && !minimumState; l++) {
         int row = (2 + l) * n + i;
         a.set(row, n + i, 1.0);
         a.set(row, row, -speedTasMps / b * fit.lagRoot(l));
       }
     }
+    for (int l = 0; l < nl && minimumState; l++) {
+      int row = 2 * n + l;
+      for (int j = 0; j < n; j++) {
+        a.set(row, n + j, factors[l][1][j]);
+      }
+      a.set(row, row, -speedTasMps / b * fit.lagRoot(l));
+    }
     return a;
+  }
+
+  /**
+   * @param fit a rational fit
+   * @param n number of coordinates
+   * @return lag states per lag root of the realisation: 1 for a minimum-state fit (its lag matrices
+   *     have rank one), n for Roger's form
+   */
+  static int lagStatesPerRoot(RationalFit fit, int n) {
+    return RationalFit.MINIMUM_STATE.equals(fit.form()) ? 1 : n;
   }
 
   /** Fit error at a flutter onset's reduced frequency above which the results say so (1 %). */
@@ -322,7 +383,7 @@ public final class StateSpaceMethod implements FlutterMethod {
 
   @Override
   public FlutterSolution solve(AeroelasticSystem system, FlightPath path, AnalysisOptions options) {
-    RationalFit f = fitFor(system);
+    RationalFit f = fitFor(system, options);
     Tracker tr = new Tracker(system, f, path);
     List<String> warnings = tr.warnings;
     warnings.add(String.format(Locale.ROOT,
@@ -420,6 +481,8 @@ public final class StateSpaceMethod implements FlutterMethod {
     final FlightPath path;
     final int n;
     final int nl;
+    /** Lag states per lag root: n (Roger's form) or 1 (minimum state). */
+    final int perLag;
     final List<String> names;
     final double[] omegaFloor;
     final double[] inVacuo;
@@ -438,6 +501,7 @@ public final class StateSpaceMethod implements FlutterMethod {
       this.path = path;
       this.n = sys.size();
       this.nl = fit.lagCount();
+      this.perLag = lagStatesPerRoot(fit, n);
       this.names = sys.coordinateNames();
       this.inVacuo = new double[n];
       double minPositive = Double.POSITIVE_INFINITY;
@@ -484,8 +548,8 @@ public final class StateSpaceMethod implements FlutterMethod {
         double worstLag = 0;
         for (int l = 0; l < nl; l++) {
           double rn = 0;
-          for (int i = 0; i < n; i++) {
-            int row = (2 + l) * n + i;
+          for (int i = 0; i < perLag; i++) {
+            int row = 2 * n + l * perLag + i;
             rn += vec.getReal(row, c) * vec.getReal(row, c) + vec.getImag(row, c) * vec.getImag(row, c);
           }
           worstLag = Math.max(worstLag, rn);

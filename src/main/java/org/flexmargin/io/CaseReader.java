@@ -98,7 +98,7 @@ public final class CaseReader {
   private static final List<String> CASE_KEYS =
       List.of("format", "name", "description", "plausibility_overrides", "configurations", "sweep", "options",
           "envelope",
-          "loop", "gusts", "requirements");
+          "loop", "gusts", "rational_fit", "requirements");
   private static final List<String> CONFIG_KEYS =
       List.of("name", "mode_table", "uniform_wing", "typical_section", "aero", "rigid_body");
   private static final List<String> RIGID_BODY_KEYS = List.of("mass_kg", "pitch_inertia_kg_m2",
@@ -160,7 +160,8 @@ public final class CaseReader {
     }
     SweepPlan sweep = readSweep(root.required("sweep", "a sweep section").object("a sweep section"));
     JsonField opts = root.optional("options");
-    AnalysisOptions options = opts == null ? AnalysisOptions.defaults() : readOptions(opts.object("options"));
+    AnalysisOptions options = (opts == null ? AnalysisOptions.defaults() : readOptions(opts.object("options")))
+        .withRationalFit(RationalFitSectionReader.read(root));
     JsonField loopField = root.optional("loop");
     LoopSpec loop = loopField == null ? null : readLoop(loopField.object("a loop section"), configs, configurations, ctx);
     GustSectionReader.read(root.optional("gusts"), ctx.log);

@@ -13,6 +13,9 @@ package org.flexmargin.model;
  * @param kMethodMinReducedFrequency lowest reduced frequency of the k-method grid
  * @param kMethodMaxReducedFrequency highest reduced frequency of the k-method grid
  * @param kMethodPoints number of k-method grid points (log-spaced)
+ * @param rationalFit how the aerodynamic forces are approximated wherever a state-space model needs
+ *     them (the case file's {@code rational_fit} section; {@link RationalFitSettings#defaults()}
+ *     without one)
  */
 public record AnalysisOptions(
     FlutterMethodKind method,
@@ -22,7 +25,8 @@ public record AnalysisOptions(
     double onsetSpeedToleranceMps,
     double kMethodMinReducedFrequency,
     double kMethodMaxReducedFrequency,
-    int kMethodPoints) {
+    int kMethodPoints,
+    RationalFitSettings rationalFit) {
   /** Validates. */
   public AnalysisOptions {
     if (method == null) {
@@ -40,6 +44,17 @@ public record AnalysisOptions(
           String.valueOf(kMethodMaxReducedFrequency));
     }
     Checks.atLeast("k_method_points", kMethodPoints, 10);
+    if (rationalFit == null) {
+      throw new InvalidInputException("rational_fit", "rational-fit settings", "nothing");
+    }
+  }
+
+  /** Options with the default rational-fit settings. */
+  public AnalysisOptions(FlutterMethodKind method, double dampingLimitG, double convergenceTolerance,
+      int maxIterations, double onsetSpeedToleranceMps, double kMethodMinReducedFrequency,
+      double kMethodMaxReducedFrequency, int kMethodPoints) {
+    this(method, dampingLimitG, convergenceTolerance, maxIterations, onsetSpeedToleranceMps,
+        kMethodMinReducedFrequency, kMethodMaxReducedFrequency, kMethodPoints, RationalFitSettings.defaults());
   }
 
   /** @return the defaults: p-k, g limit 0.03, tolerance 1e-9, 60 iterations, 0.01 m/s */
@@ -51,6 +66,13 @@ public record AnalysisOptions(
   public AnalysisOptions withMethod(FlutterMethodKind m) {
     return new AnalysisOptions(
         m, dampingLimitG, convergenceTolerance, maxIterations, onsetSpeedToleranceMps,
-        kMethodMinReducedFrequency, kMethodMaxReducedFrequency, kMethodPoints);
+        kMethodMinReducedFrequency, kMethodMaxReducedFrequency, kMethodPoints, rationalFit);
+  }
+
+  /** @return a copy with other rational-fit settings */
+  public AnalysisOptions withRationalFit(RationalFitSettings settings) {
+    return new AnalysisOptions(
+        method, dampingLimitG, convergenceTolerance, maxIterations, onsetSpeedToleranceMps,
+        kMethodMinReducedFrequency, kMethodMaxReducedFrequency, kMethodPoints, settings);
   }
 }

@@ -50,6 +50,8 @@ public enum PlausibleRange {
       "tabulated forces are usually computed for subsonic flow"),
   REDUCED_FREQUENCY("force_table.reduced_frequency", "", 0, 100, 0, 10, true,
       "flutter reduced frequencies are below about 2"),
+  RATIONAL_FIT_REDUCED_FREQUENCY("rational_fit.reduced_frequency", "", 0, 100, 0, 10, true,
+      "rational fits span the reduced frequencies of flutter and the elastic modes, below about 10"),
   // rigid body
   RIGID_MASS("rigid_body.mass_kg", "kg", 0, 1e7, 0.05, 1e6, true,
       "no aircraft has a mass above about 600 t"),

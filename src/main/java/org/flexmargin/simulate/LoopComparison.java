@@ -71,10 +71,10 @@ public record LoopComparison(String configurationName, FlightCondition condition
         new InputSignal.Doublet(DOUBLET_RAD, 0.1, PULSE_S), GUST_MPS, GRADIENTS_M, null, null, limits, DURATION_S, STEP_S,
         1.0, 1, null, false);
     List<Variant> variants = new ArrayList<>();
-    variants.add(new Variant("case loop", AircraftSimulation.run(SimulationPoint.of(model, conf, c.loop(), fc),
+    variants.add(new Variant("case loop", AircraftSimulation.run(SimulationPoint.of(model, conf, c.loop(), fc, c.options().rationalFit()),
         scenario)));
     if (proposed != null) {
-      variants.add(new Variant(proposedLabel, AircraftSimulation.run(SimulationPoint.of(model, conf, proposed, fc),
+      variants.add(new Variant(proposedLabel, AircraftSimulation.run(SimulationPoint.of(model, conf, proposed, fc, c.options().rationalFit()),
           scenario)));
     }
     String text = String.format(Locale.ROOT, "%s at V0max = %.1f m/s EAS (%.1f m/s TAS, %.0f m): %.0f deg doublet "

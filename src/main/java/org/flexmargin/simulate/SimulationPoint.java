@@ -1,9 +1,8 @@
 package org.flexmargin.simulate;
 
 import java.util.List;
-import java.util.Locale;
 import org.flexmargin.aero.RationalFit;
-import org.flexmargin.aero.RogerApproximation;
+import org.flexmargin.aero.RationalFits;
 import org.flexmargin.ase.RationalAerodynamics;
 import org.flexmargin.ase.ServoLoop;
 import org.flexmargin.atmosphere.FlightCondition;
@@ -11,15 +10,16 @@ import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.model.LoopSpec;
-import org.flexmargin.sweep.ClosedLoopSweep;
+import org.flexmargin.model.RationalFitSettings;
 import org.flexmargin.sweep.ConfigurationModel;
 import org.flexmargin.sweep.ServoMargins;
 
 /**
  * One configuration at one flight condition, ready to simulate: the same plant and law as the
- * sweep ({@link ServoMargins#loopAt}) and a Roger approximation of the elastic forces with the
- * sweep's number of lag roots, fitted up to 1.5 times the reduced frequency of the highest mode at
- * this speed (at least 0.5, at most the aerodynamic data's range). Immutable.
+ * sweep ({@link ServoMargins#loopAt}) and the rational approximation of the elastic forces the
+ * sweep's closed loop uses (the case's rational-fit settings; by default Roger's form with four lag
+ * roots), fitted up to 1.5 times the reduced frequency of the highest mode at this speed (at least
+ * 0.5, at most the aerodynamic data's range) unless the settings give the range. Immutable.
  *
  * @param configurationName configuration name
  * @param condition flight condition
@@ -51,14 +51,25 @@ public record SimulationPoint(String configurationName, FlightCondition conditio
    */
   public static SimulationPoint of(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       FlightCondition condition) {
+    return of(model, configuration, loop, condition, RationalFitSettings.defaults());
+  }
+
+  /**
+   * @param model the configuration's aeroelastic model
+   * @param configuration the configuration
+   * @param loop the loop
+   * @param condition the flight condition
+   * @param fitSettings how the elastic forces are approximated (the case's {@code rational_fit})
+   * @return the point
+   */
+  public static SimulationPoint of(ConfigurationModel model, Configuration configuration, LoopSpec loop,
+      FlightCondition condition, RationalFitSettings fitSettings) {
     double fmax = model.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).max().orElse(1);
     double b = model.system().aero().referenceSemichordM();
     double kMax = Math.min(model.system().aero().maxReducedFrequency(),
         Math.max(0.5, 1.5 * 2 * Math.PI * fmax * b / condition.speedTasMps()));
-    RationalFit fit = RogerApproximation.fit(model.system().aero(), kMax, ClosedLoopSweep.LAG_COUNT);
-    String text = String.format(Locale.ROOT,
-        "Roger approximation, %d lag roots, k from 0 to %.3f, worst element error %.2f %%", fit.lagCount(), kMax,
-        100 * fit.error().worstRelativeError());
+    RationalFit fit = RationalFits.fit(model.system().aero(), fitSettings, kMax);
+    String text = RationalFits.summary(fit);
     return new SimulationPoint(configuration.name(), condition,
         ServoMargins.loopAt(model, configuration, loop, condition), RationalAerodynamics.of(fit), text,
         fit.warnings(), configuration.rigidBody().referenceChordM());

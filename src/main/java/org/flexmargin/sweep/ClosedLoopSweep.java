@@ -8,7 +8,7 @@ import java.util.Optional;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.flexmargin.aero.RationalFit;
-import org.flexmargin.aero.RogerApproximation;
+import org.flexmargin.aero.RationalFits;
 import org.flexmargin.ase.RationalAerodynamics;
 import org.flexmargin.ase.ServoLoop;
 import org.flexmargin.atmosphere.FlightCondition;
@@ -16,6 +16,7 @@ import org.flexmargin.flutter.BranchCurve;
 import org.flexmargin.flutter.CrossingKind;
 import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.flutter.StateSpaceMethod;
 import org.flexmargin.loop.CriticalPointSolver;
 import org.flexmargin.loop.Eigenvalues;
 import org.flexmargin.loop.NearestEigenvalue;
@@ -30,8 +31,10 @@ import org.flexmargin.numerics.GreedyAssignment;
  * Closed-loop (aeroservoelastic) eigenvalues along the sweep, and the speeds at which a
  * closed-loop root crosses g = 0 or the damping limit, refined as roots.
  *
- * <p>The elastic aerodynamics are approximated once per configuration in Roger's form (four lag
- * roots over the reduced-frequency range the sweep needs; the fit error is reported); delays
+ * <p>The elastic aerodynamics are approximated once per configuration as the case's rational-fit
+ * settings ask ({@link RationalFits}; by default Roger's form with four lag roots over the
+ * reduced-frequency range the sweep needs; the fit error is reported, and a warning names every
+ * g = 0 onset where it exceeds 1 % at the onset's reduced frequency); delays
  * are Pade approximations of the loop's order. At each grid point all closed-loop eigenvalues are
  * computed; roots are followed from point to point by nearest-neighbour matching, and a sign
  * change of 2 Re(s) - g_level |Im(s)| on a followed root is refined by Brent's method on the path
@@ -49,7 +52,7 @@ import org.flexmargin.numerics.GreedyAssignment;
  * difference are kept in {@link ClosedLoopResult#refinements()}. Stateless and thread-safe.
  */
 public final class ClosedLoopSweep {
-  /** Lag roots of the rational approximation. */
+  /** Lag roots of the rational approximation with the default settings. */
   public static final int LAG_COUNT = 4;
 
   private static final int BRENT_MAX_EVALUATIONS = 60;
@@ -81,7 +84,7 @@ public final class ClosedLoopSweep {
     double b = model.system().aero().referenceSemichordM();
     double kMax = Math.min(model.system().aero().maxReducedFrequency(),
         Math.max(0.5, 1.5 * 2 * Math.PI * fmax * b / vmin));
-    RationalFit fit = RogerApproximation.fit(model.system().aero(), kMax, LAG_COUNT);
+    RationalFit fit = RationalFits.fit(model.system().aero(), options.rationalFit(), kMax);
     RationalAerodynamics rational = RationalAerodynamics.of(fit);
     List<String> warnings = new ArrayList<>(fit.warnings());
     int np = path.gridPoints();
@@ -148,6 +151,7 @@ public final class ClosedLoopSweep {
         onsets.add(x);
         continue;
       }
+      flagFitError(model, fit, x, warnings);
       OnsetRefinement r = onExactLoop(model, configuration, loop, path, x);
       refinements.add(r);
       onsets.add(r.onset());
@@ -158,9 +162,7 @@ public final class ClosedLoopSweep {
       }
     }
     onsets.sort(Comparator.comparingDouble(FlutterCrossing::pathParameter));
-    String fitText = String.format(Locale.ROOT,
-        "Roger approximation, %d lag roots, k from 0 to %.3f, worst element error %.2f %%",
-        fit.lagCount(), kMax, 100 * fit.error().worstRelativeError());
+    String fitText = RationalFits.summary(fit);
     ServoLoop first = ServoMargins.loopAt(model, configuration, loop, path.at(0));
     List<String> assumptions = new ArrayList<>(first.plant().assumptions());
     assumptions.add("closed-loop eigenvalues use the rational approximation of the elastic forces, the Pade "
@@ -168,6 +170,26 @@ public final class ClosedLoopSweep {
         + "same order (keeping its sinc droop); each g = 0 onset is then refined on the exact frequency-domain "
         + "loop (where L(jw) passes through -1) and reported beside the rational one");
     return new ClosedLoopResult(points, onsets, fitText, solves[0], warnings, assumptions, refinements);
+  }
+
+  /**
+   * Adds a warning when the fit's error at the reduced frequency of a rational g = 0 crossing
+   * exceeds {@link StateSpaceMethod#ONSET_FIT_ERROR_LIMIT}.
+   */
+  private static void flagFitError(ConfigurationModel model, RationalFit fit, FlutterCrossing x, List<String> warnings) {
+    if (!(x.frequencyHz() > 0)) {
+      return;
+    }
+    double k = 2 * Math.PI * x.frequencyHz() * fit.referenceSemichordM() / x.condition().speedTasMps();
+    double error = StateSpaceMethod.fitErrorAt(model.system().aero(), fit, k);
+    if (error > StateSpaceMethod.ONSET_FIT_ERROR_LIMIT) {
+      warnings.add(String.format(Locale.ROOT,
+          "rational fit error %.3g %% at the reduced frequency k = %.4g of the closed-loop %s of %s at %.2f m/s "
+              + "EAS exceeds %.3g %%: the rational onset may be off (the exact-loop refinement is not); add lag "
+              + "roots or refit around it",
+          100 * error, k, x.kind().name().toLowerCase(Locale.ROOT).replace('_', ' '), x.branchName(),
+          x.condition().speedEasMps(), 100 * StateSpaceMethod.ONSET_FIT_ERROR_LIMIT));
+    }
   }
 
   /**

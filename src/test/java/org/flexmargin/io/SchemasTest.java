@@ -94,7 +94,7 @@ class SchemasTest {
       "sweep", "#/definitions/sweep", "uniform_wing", "#/definitions/uniform_wing",
       "typical_section", "#/definitions/typical_section", "rigid_body", "#/definitions/rigid_body",
       "loop", "#/definitions/loop", "plausibility_overrides", "#/properties/plausibility_overrides",
-      "gusts", "#/definitions/gusts");
+      "gusts", "#/definitions/gusts", "rational_fit", "#/definitions/rational_fit");
 
   @Test
   void everyExampleInTheDocumentationConformsToItsSchema() throws IOException {
