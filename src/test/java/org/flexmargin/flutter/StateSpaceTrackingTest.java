@@ -53,7 +53,7 @@ class StateSpaceTrackingTest {
 
   @Test
   void aSmoothSweepBelowFlutterCountsOneEigenSolveAndOneRootPerBranchAndPoint() {
-    // 20 to 60 m/s: both modes stable (onsets at 82 and 233 m/s, docs/validation.md 5.6)
+    // 20 to 60 m/s: both modes stable (onsets at 82 and 152 m/s, docs/validation.md 5.6)
     FlutterSolution sol = new StateSpaceMethod().solve(system(), tas(20, 60, 5), noLimit());
     assertTrue(sol.crossings().isEmpty(), sol.crossings().toString());
     SolverDiagnostics d = sol.diagnostics();
