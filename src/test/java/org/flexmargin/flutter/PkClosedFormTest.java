@@ -216,6 +216,21 @@ class PkClosedFormTest {
   }
 
   @Test
+  void modesWithinTheCollisionToleranceAreFlaggedAsCoinciding() {
+    // 1e-7 relative apart in frequency: the closed-form roots differ by about 1e-7 of |s|, below
+    // the 1e-6 relative collision tolerance, so the branches cannot be told apart at start-up
+    AeroelasticSystem sys = system(new double[] {2.0, 2.0 * (1 + 1e-7)}, new double[] {Q0[0], Q0[0]},
+        new double[] {D[0], D[0]}, 0.005, 2.0);
+    double[] r1 = root(2.0, Q0[0], D[0], 20);
+    double[] r2 = root(2.0 * (1 + 1e-7), Q0[0], D[0], 20);
+    double gap = Math.hypot(r2[0] - r1[0], r2[1] - r1[1]) / Math.hypot(r1[0], r1[1]);
+    assertTrue(gap > 1e-8 && gap < 1e-6, "premise: relative gap " + gap);
+    FlutterSolution sol = new PkMethod().solve(sys, PATH, AnalysisOptions.defaults());
+    assertTrue(sol.warnings().stream().anyMatch(w -> w.contains("at the first sweep point the roots of mode_1 and "
+        + "mode_2 coincide")), sol.warnings().toString());
+  }
+
+  @Test
   void distinctModesAreNotFlaggedAsCoinciding() {
     // the same two modes 1e-3 apart in frequency: distinct closed-form roots, no ambiguity
     AeroelasticSystem sys = system(new double[] {2.0, 2.002}, new double[] {Q0[0], Q0[0]},

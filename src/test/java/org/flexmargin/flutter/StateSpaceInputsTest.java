@@ -179,6 +179,9 @@ class StateSpaceInputsTest {
     assertThrows(IllegalArgumentException.class, () -> new StateSpaceMethod(one).fitFor(system(PLAIN)));
     RationalFit otherChord = fit(B * (1 + 1e-9), A, new double[] {BETA});
     assertThrows(IllegalArgumentException.class, () -> new StateSpaceMethod(otherChord).fitFor(system(PLAIN)));
+    // the tolerance is 1e-12 relative: one and a half times that is another semichord
+    RationalFit justOther = fit(B * (1 + 1.5e-12), A, new double[] {BETA});
+    assertThrows(IllegalArgumentException.class, () -> new StateSpaceMethod(justOther).fitFor(system(PLAIN)));
     // a difference of 1e-14 relative is round-off of the same semichord and is accepted
     RationalFit sameChord = fit(B * (1 + 1e-14), A, new double[] {BETA});
     assertSame(sameChord, new StateSpaceMethod(sameChord).fitFor(system(PLAIN)));
