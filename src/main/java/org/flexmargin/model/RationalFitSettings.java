@@ -136,6 +136,29 @@ public record RationalFitSettings(
     return automaticRange() ? analysisMax : maxReducedFrequency;
   }
 
+  /**
+   * @return the settings in words for a report, e.g. "Roger form, 4 lag roots (automatic), k from
+   *     0 to the analysis's choice, 31 points, uniform weighting"
+   */
+  public String words() {
+    String lags;
+    if (lagRoots != null) {
+      StringBuilder b = new StringBuilder(lagRoots.length + " lag roots (");
+      for (int l = 0; l < lagRoots.length; l++) {
+        b.append(l == 0 ? "" : ", ").append(lagRoots[l]);
+      }
+      lags = b.append(')').toString();
+    } else if (lagCount == AUTOMATIC) {
+      lags = form == RationalFitForm.ROGER ? ROGER_LAG_COUNT + " lag roots (automatic)"
+          : "2 lag roots per coordinate (automatic)";
+    } else {
+      lags = lagCount + " lag roots";
+    }
+    String top = automaticRange() ? "the analysis's choice" : String.valueOf(maxReducedFrequency);
+    return (form == RationalFitForm.ROGER ? "Roger" : "minimum-state (Karpel)") + " form, " + lags + ", k from " + minReducedFrequency + " to " + top + ", "
+        + points + " points, " + weighting.word().replace('_', ' ') + " weighting";
+  }
+
   @Override
   public boolean equals(Object o) {
     return o instanceof RationalFitSettings s && form == s.form && lagCount == s.lagCount

@@ -385,6 +385,7 @@ public final class OpenLoopSections {
       pair(w, "convergence tolerance", sci(o.convergenceTolerance()));
       pair(w, "iteration budget per root", Integer.toString(o.maxIterations()));
       pair(w, "onset speed tolerance (m/s)", sci(o.onsetSpeedToleranceMps()));
+      pair(w, "rational fit (state-space models)", o.rationalFit().words());
       pair(w, "tool", "flexmargin " + toolVersion);
       pair(w, "generated (UTC)", generated.truncatedTo(ChronoUnit.SECONDS).toString());
       w.close("tbody");
