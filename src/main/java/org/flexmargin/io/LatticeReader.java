@@ -12,6 +12,7 @@ import org.flexmargin.model.FlowSymmetry;
 import org.flexmargin.model.LatticeSpec;
 import org.flexmargin.model.LiftingSurface;
 import org.flexmargin.model.ModeTable;
+import org.flexmargin.model.PlausibleRange;
 import org.flexmargin.model.SplineGroup;
 import org.flexmargin.model.SplineKind;
 import org.flexmargin.model.SplinePoint;
@@ -39,7 +40,9 @@ final class LatticeReader {
     f.object("lifting-surface data");
     f.allowOnly(List.of("reference_semichord_m", "mach", "mach_numbers", "flow_symmetry", "reduced_frequencies",
         "surfaces", "splines", "control_surfaces", "elevator_control", "force_cache_file"));
-    double bRef = f.required("reference_semichord_m", "the reference semichord (m)").positive();
+    JsonField bRefField = f.required("reference_semichord_m", "the reference semichord (m)");
+    double bRef = bRefField.positive();
+    bRefField.quantity(PlausibleRange.SEMICHORD);
     double mach = f.required("mach", "the Mach number of the forces, 0 to 0.95").finite();
     double[] machs = f.has("mach_numbers")
         ? f.optional("mach_numbers").numbers("a list of Mach numbers, increasing, 0 to 0.95") : null;
@@ -116,9 +119,9 @@ final class LatticeReader {
         "tip_chord_m", "chordwise_boxes", "spanwise_boxes"));
     String name = s.required("name", "the surface name").text();
     SurfacePoint root = point(s.required("root_leading_edge_m", "the root leading edge [x, y, z] (m)"));
-    double cr = s.required("root_chord_m", "the root chord (m)").number();
+    double cr = s.required("root_chord_m", "the root chord (m)").quantity(PlausibleRange.SURFACE_CHORD);
     SurfacePoint tip = point(s.required("tip_leading_edge_m", "the tip leading edge [x, y, z] (m)"));
-    double ct = s.required("tip_chord_m", "the tip chord (m)").number();
+    double ct = s.required("tip_chord_m", "the tip chord (m)").quantity(PlausibleRange.SURFACE_CHORD);
     int nc = s.required("chordwise_boxes", "the number of chordwise boxes").integer();
     int ns = s.required("spanwise_boxes", "the number of spanwise boxes").integer();
     return s.build(() -> new LiftingSurface(name, root, cr, tip, ct, nc, ns));

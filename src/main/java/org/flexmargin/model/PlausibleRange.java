@@ -44,6 +44,8 @@ public enum PlausibleRange {
       "a strip is a slice of one lifting surface"),
   STRIP_POSITION("strip.elastic_axis_aft_of_cg_m", "m", -500, 500, -100, 100, true,
       "a strip lies on the aircraft, within its length of the centre of mass"),
+  SURFACE_CHORD("lifting_surface.chord_m", "m", 0, 60, 0.01, 30, true,
+      "root and tip chords of aircraft lifting surfaces lie between centimetres and some tens of metres"),
   LIFT_SLOPE("aero.lift_slope_per_rad", "1/rad", 0, 20, 0.5, 8, true,
       "2 pi per radian is the thin-aerofoil value"),
   FORCE_TABLE_MACH("force_table.mach", "", 0, 5, 0, 0.95, false,

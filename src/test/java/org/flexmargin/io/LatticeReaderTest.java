@@ -70,6 +70,23 @@ class LatticeReaderTest {
         "\"chordwise_boxes\": 200, \"spanwise_boxes\": 500")), "case.json", "surfaces", "100000 boxes");
   }
 
+  /** Chords and the reference semichord are checked against their plausible ranges, with the range's name. */
+  @Test
+  void chordsOutsideThePlausibleRangeNameTheRangeAndTheOverride(@TempDir Path tmp) throws IOException {
+    Files.copy(DIR.resolve("wing-modes.json"), tmp.resolve("wing-modes.json"));
+    String base = Files.readString(DIR.resolve("lattice-case.json"));
+    assertHas(failsWith(tmp, base.replace("\"root_chord_m\": 1.0", "\"root_chord_m\": 80")),
+        "surfaces[0].root_chord_m", "[0, 60] m", "lifting_surface.chord_m", "plausibility_overrides");
+    assertHas(failsWith(tmp, base.replace("\"reference_semichord_m\": 0.4", "\"reference_semichord_m\": 150")),
+        "reference_semichord_m", "aero.semichord_m");
+    // listed in plausibility_overrides, an 80 m chord is read (with a warning)
+    Path file = tmp.resolve("lifted.json");
+    Files.writeString(file, base.replace("\"root_chord_m\": 1.0", "\"root_chord_m\": 80")
+        .replaceFirst("\\{", "{\"plausibility_overrides\": [\"lifting_surface.chord_m\"], "));
+    LatticeSpec s = assertInstanceOf(LatticeSpec.class, CaseReader.read(file).configurations().get(0).aero());
+    assertEquals(80, s.surfaces().get(0).rootChordM());
+  }
+
   /** Control surfaces, Mach numbers and the cache file, and their errors. */
   @Test
   void readsControlSurfacesMachNumbersAndTheCacheFile(@TempDir Path tmp) throws IOException {
