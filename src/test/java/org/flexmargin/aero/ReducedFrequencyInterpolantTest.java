@@ -20,38 +20,8 @@ class ReducedFrequencyInterpolantTest {
 
   /** A 1 x 1 source Q(ik) = f(k) (real), valid for every k. */
   private static AeroSource scalar(DoubleUnaryOperator f) {
-    return new AeroSource() {
-      @Override
-      public int size() {
-        return 1;
-      }
-
-      @Override
-      public double referenceSemichordM() {
-        return 1.0;
-      }
-
-      @Override
-      public double minReducedFrequency() {
-        return 0.0;
-      }
-
-      @Override
-      public double maxReducedFrequency() {
-        return Double.POSITIVE_INFINITY;
-      }
-
-      @Override
-      public void forces(double k, ZMatrixRMaj out) {
-        out.reshape(1, 1);
-        out.set(0, 0, f.applyAsDouble(k), 0.0);
-      }
-
-      @Override
-      public String description() {
-        return "test";
-      }
-    };
+    return new FunctionForces(1, 1.0, 0.0, Double.POSITIVE_INFINITY,
+        (k, out) -> out.set(0, 0, f.applyAsDouble(k), 0.0), "test");
   }
 
   private static double at(AeroSource s, double k) {

@@ -6,8 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.structure.StructuralModel;
 import org.junit.jupiter.api.Test;
@@ -25,41 +25,11 @@ class AeroelasticSystemTest {
 
   /** Quasi-steady forces Q = q0 (1 + i k), size n. */
   private static AeroSource forces(int n, double q0) {
-    return new AeroSource() {
-      @Override
-      public int size() {
-        return n;
+    return new FunctionForces(n, 0.5, 0, 2, (k, out) -> {
+      for (int i = 0; i < n; i++) {
+        out.set(i, i, q0, q0 * k);
       }
-
-      @Override
-      public double referenceSemichordM() {
-        return 0.5;
-      }
-
-      @Override
-      public double minReducedFrequency() {
-        return 0;
-      }
-
-      @Override
-      public double maxReducedFrequency() {
-        return 2;
-      }
-
-      @Override
-      public void forces(double k, ZMatrixRMaj out) {
-        out.reshape(n, n);
-        out.zero();
-        for (int i = 0; i < n; i++) {
-          out.set(i, i, q0, q0 * k);
-        }
-      }
-
-      @Override
-      public String description() {
-        return "diagonal test forces";
-      }
-    };
+    }, "diagonal test forces");
   }
 
   @Test

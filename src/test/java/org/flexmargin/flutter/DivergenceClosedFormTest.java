@@ -6,8 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.OptionalDouble;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.structure.StructuralModel;
@@ -28,42 +28,13 @@ class DivergenceClosedFormTest {
 
   private static AeroelasticSystem system(double[][] q0, double kMin) {
     double[][] m = {{1.0, 0.0}, {0.0, 1.0}};
-    AeroSource aero = new AeroSource() {
-      @Override
-      public int size() {
-        return 2;
-      }
-
-      @Override
-      public double referenceSemichordM() {
-        return 0.5;
-      }
-
-      @Override
-      public double minReducedFrequency() {
-        return kMin;
-      }
-
-      @Override
-      public double maxReducedFrequency() {
-        return 2.0;
-      }
-
-      @Override
-      public void forces(double k, ZMatrixRMaj out) {
-        out.reshape(2, 2);
-        for (int i = 0; i < 2; i++) {
-          for (int j = 0; j < 2; j++) {
-            out.set(i, j, (1 + k) * q0[i][j], 0.1 * k);
-          }
+    AeroSource aero = new FunctionForces(2, 0.5, kMin, 2.0, (k, out) -> {
+      for (int i = 0; i < 2; i++) {
+        for (int j = 0; j < 2; j++) {
+          out.set(i, j, (1 + k) * q0[i][j], 0.1 * k);
         }
       }
-
-      @Override
-      public String description() {
-        return "static test forces";
-      }
-    };
+    }, "static test forces");
     return new AeroelasticSystem(new StructuralModel(List.of("bend", "twist"), m, new double[2][2], K), aero);
   }
 

@@ -5,8 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 
 import java.util.List;
 import java.util.OptionalDouble;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.structure.StructuralModel;
@@ -23,42 +23,13 @@ class DivergenceSweepTest {
   private static final double K0 = 200.0;
 
   private static AeroelasticSystem system(double[][] stiffness, double[][] q0) {
-    AeroSource aero = new AeroSource() {
-      @Override
-      public int size() {
-        return 2;
-      }
-
-      @Override
-      public double referenceSemichordM() {
-        return 0.5;
-      }
-
-      @Override
-      public double minReducedFrequency() {
-        return 0.0;
-      }
-
-      @Override
-      public double maxReducedFrequency() {
-        return 2.0;
-      }
-
-      @Override
-      public void forces(double k, ZMatrixRMaj out) {
-        out.reshape(2, 2);
-        for (int i = 0; i < 2; i++) {
-          for (int j = 0; j < 2; j++) {
-            out.set(i, j, q0[i][j], 0.0);
-          }
+    AeroSource aero = new FunctionForces(2, 0.5, 0.0, 2.0, (k, out) -> {
+      for (int i = 0; i < 2; i++) {
+        for (int j = 0; j < 2; j++) {
+          out.set(i, j, q0[i][j], 0.0);
         }
       }
-
-      @Override
-      public String description() {
-        return "static test forces";
-      }
-    };
+    }, "static test forces");
     return new AeroelasticSystem(new StructuralModel(List.of("a", "b"),
         new double[][] {{1.0, 0.0}, {0.0, 1.0}}, new double[2][2], stiffness), aero);
   }

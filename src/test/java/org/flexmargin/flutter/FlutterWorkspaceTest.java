@@ -11,8 +11,8 @@ import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.MatrixUtils;
 import org.apache.commons.math3.linear.RealMatrix;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.numerics.ComplexEigenResult;
 import org.flexmargin.structure.StructuralModel;
@@ -37,42 +37,13 @@ class FlutterWorkspaceTest {
   private static final double B = 0.4;
   private static final FlightCondition FC = PkClosedFormTest.PATH.at(5);
 
-  private static final AeroSource FULL = new AeroSource() {
-    @Override
-    public int size() {
-      return 2;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return B;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return 0;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return Double.POSITIVE_INFINITY;
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
-      out.reshape(2, 2);
-      for (int i = 0; i < 2; i++) {
-        for (int j = 0; j < 2; j++) {
-          out.set(i, j, Q0[i][j], k * D[i][j]);
-        }
+  private static final AeroSource FULL = new FunctionForces(2, B, 0, Double.POSITIVE_INFINITY, (k, out) -> {
+    for (int i = 0; i < 2; i++) {
+      for (int j = 0; j < 2; j++) {
+        out.set(i, j, Q0[i][j], k * D[i][j]);
       }
     }
-
-    @Override
-    public String description() {
-      return "full test forces";
-    }
-  };
+  }, "full test forces");
 
   private static FlutterWorkspace workspace() {
     AeroelasticSystem sys = new AeroelasticSystem(new StructuralModel(List.of("a", "b"), M, C, K), FULL);

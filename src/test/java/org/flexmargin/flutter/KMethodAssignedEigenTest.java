@@ -8,8 +8,8 @@ import org.apache.commons.math3.complex.Complex;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.MatrixUtils;
 import org.apache.commons.math3.linear.RealMatrix;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.FlutterMethodKind;
 import org.flexmargin.structure.StructuralModel;
@@ -72,50 +72,21 @@ class KMethodAssignedEigenTest {
     return new Complex(1, g(j, k)).divide(w * w);
   }
 
-  private static final AeroSource ASSIGNED = new AeroSource() {
-    @Override
-    public int size() {
-      return 3;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return B;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return 0.0;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return 5.0;
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
-      out.reshape(3, 3);
-      double f = 2 * k * k / (RHO * B * B);
-      for (int r = 0; r < 3; r++) {
-        for (int c = 0; c < 3; c++) {
-          Complex a = Complex.ZERO;
-          for (int j = 0; j < 3; j++) {
-            a = a.add(lambda(j, k).multiply(V[r][j] * V_INV.getEntry(j, c)));
-          }
-          if (r == c) {
-            a = a.subtract(1.0);
-          }
-          out.set(r, c, f * a.getReal(), f * a.getImaginary());
+  private static final AeroSource ASSIGNED = new FunctionForces(3, B, 0.0, 5.0, (k, out) -> {
+    double f = 2 * k * k / (RHO * B * B);
+    for (int r = 0; r < 3; r++) {
+      for (int c = 0; c < 3; c++) {
+        Complex a = Complex.ZERO;
+        for (int j = 0; j < 3; j++) {
+          a = a.add(lambda(j, k).multiply(V[r][j] * V_INV.getEntry(j, c)));
         }
+        if (r == c) {
+          a = a.subtract(1.0);
+        }
+        out.set(r, c, f * a.getReal(), f * a.getImaginary());
       }
     }
-
-    @Override
-    public String description() {
-      return "forces with assigned k-method eigenvalues";
-    }
-  };
+  }, "forces with assigned k-method eigenvalues");
 
   private static FlutterSolution solve() {
     double[][] identity = {{1, 0, 0}, {0, 1, 0}, {0, 0, 1}};

@@ -7,8 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.complex.Complex;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.structure.StructuralModel;
 import org.junit.jupiter.api.Test;
@@ -39,42 +39,13 @@ class NewtonIterationTest {
   private static final double B = 0.6;
   private static final FlightCondition FC = PkClosedFormTest.PATH.at(8);
 
-  private static final AeroSource FORCES = new AeroSource() {
-    @Override
-    public int size() {
-      return 2;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return B;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return 0;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return Double.POSITIVE_INFINITY;
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
-      out.reshape(2, 2);
-      for (int i = 0; i < 2; i++) {
-        for (int j = 0; j < 2; j++) {
-          out.set(i, j, Q0[i][j] + k * k * E[i][j], k * D[i][j]);
-        }
+  private static final AeroSource FORCES = new FunctionForces(2, B, 0, Double.POSITIVE_INFINITY, (k, out) -> {
+    for (int i = 0; i < 2; i++) {
+      for (int j = 0; j < 2; j++) {
+        out.set(i, j, Q0[i][j] + k * k * E[i][j], k * D[i][j]);
       }
     }
-
-    @Override
-    public String description() {
-      return "coupled test forces";
-    }
-  };
+  }, "coupled test forces");
 
   private static FlutterWorkspace workspace(SolveCounters counters) {
     AeroelasticSystem sys = new AeroelasticSystem(new StructuralModel(List.of("a", "b"), M, C, K), FORCES);
@@ -227,38 +198,7 @@ class NewtonIterationTest {
   void aStartExactlyOnAnEigenvalueIsAcceptedAsIs() {
     // undamped, uncoupled, no air: F(2i) = diag(-4 + 4, -4 + 9) is exactly singular in floating
     // point, so the linear solve overflows; the start is the root (omega_1 = sqrt(4) = 2 rad/s)
-    AeroSource still = new AeroSource() {
-      @Override
-      public int size() {
-        return 2;
-      }
-
-      @Override
-      public double referenceSemichordM() {
-        return B;
-      }
-
-      @Override
-      public double minReducedFrequency() {
-        return 0;
-      }
-
-      @Override
-      public double maxReducedFrequency() {
-        return Double.POSITIVE_INFINITY;
-      }
-
-      @Override
-      public void forces(double k, ZMatrixRMaj out) {
-        out.reshape(2, 2);
-        out.zero();
-      }
-
-      @Override
-      public String description() {
-        return "no forces";
-      }
-    };
+    AeroSource still = new FunctionForces(2, B, 0, Double.POSITIVE_INFINITY, FunctionForces.NONE, "no forces");
     double[][] zero = new double[2][2];
     AeroelasticSystem sys = new AeroelasticSystem(new StructuralModel(List.of("a", "b"),
         new double[][] {{1, 0}, {0, 1}}, zero, new double[][] {{4, 0}, {0, 9}}), still);

@@ -6,8 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.SpeedSweep;
@@ -40,40 +40,12 @@ class PkClosedFormTest {
   static final double RHO = PATH.at(0).densityKgPerM3();
 
   /** Diagonal Q(ik) = q0 + i k d; valid reduced frequencies [kMin, kMax]. */
-  private record Diagonal(double[] q0, double[] d, double kMin, double kMax) implements AeroSource {
-    @Override
-    public int size() {
-      return q0.length;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return B;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return kMin;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return kMax;
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
-      out.reshape(q0.length, q0.length);
-      out.zero();
+  private static AeroSource diagonal(double[] q0, double[] d, double kMin, double kMax) {
+    return new FunctionForces(q0.length, B, kMin, kMax, (k, out) -> {
       for (int i = 0; i < q0.length; i++) {
         out.set(i, i, q0[i], k * d[i]);
       }
-    }
-
-    @Override
-    public String description() {
-      return "diagonal test forces";
-    }
+    }, "diagonal test forces");
   }
 
   static AeroelasticSystem system(double[] fHz, double[] q0, double[] d, double kMin, double kMax) {
@@ -89,7 +61,7 @@ class PkClosedFormTest {
       k[i][i] = w * w;
       names[i] = "mode_" + (i + 1);
     }
-    return new AeroelasticSystem(new StructuralModel(List.of(names), m, c, k), new Diagonal(q0, d, kMin, kMax));
+    return new AeroelasticSystem(new StructuralModel(List.of(names), m, c, k), diagonal(q0, d, kMin, kMax));
   }
 
   /** Closed-form root {sigma, omega} of mode i at true airspeed v (m/s). */

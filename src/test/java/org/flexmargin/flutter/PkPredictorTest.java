@@ -4,8 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.SpeedSweep;
@@ -47,41 +47,12 @@ class PkPredictorTest {
     return SIGMA0 + BETA * v;
   }
 
-  private static final AeroSource LINEAR_ROOT = new AeroSource() {
-    @Override
-    public int size() {
-      return 1;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return B;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return 0.0;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return Double.POSITIVE_INFINITY;
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
-      out.reshape(1, 1);
-      double v = OMEGA0 * B / k;
-      double q = 0.5 * RHO * v * v;
-      double s = sigma(v);
-      out.set(0, 0, (s * s + C * s) / q, OMEGA0 * (2 * s + C) / q);
-    }
-
-    @Override
-    public String description() {
-      return "forces placing the root on a line";
-    }
-  };
+  private static final AeroSource LINEAR_ROOT = new FunctionForces(1, B, 0.0, Double.POSITIVE_INFINITY, (k, out) -> {
+    double v = OMEGA0 * B / k;
+    double q = 0.5 * RHO * v * v;
+    double s = sigma(v);
+    out.set(0, 0, (s * s + C * s) / q, OMEGA0 * (2 * s + C) / q);
+  }, "forces placing the root on a line");
 
   private static final AeroelasticSystem SYSTEM = new AeroelasticSystem(new StructuralModel(List.of("mode"),
       new double[][] {{1.0}}, new double[][] {{C}}, new double[][] {{OMEGA0 * OMEGA0}}), LINEAR_ROOT);

@@ -8,8 +8,8 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.SpeedSweep;
@@ -66,40 +66,12 @@ class PkTrackingTest {
   }
 
   /** Q_ii = q0_i + i k d_i down to kBad; below it the data are not a number. */
-  private record Holed(double[] q0, double[] d, double kBad) implements AeroSource {
-    @Override
-    public int size() {
-      return q0.length;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return B;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return 0;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return 5;
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
-      out.reshape(q0.length, q0.length);
-      out.zero();
+  private static AeroSource holed(double[] q0, double[] d, double kBad) {
+    return new FunctionForces(q0.length, B, 0, 5, (k, out) -> {
       for (int i = 0; i < q0.length; i++) {
         out.set(i, i, k < kBad ? Double.NaN : q0[i], k * d[i]);
       }
-    }
-
-    @Override
-    public String description() {
-      return "forces with a hole at low k";
-    }
+    }, "forces with a hole at low k");
   }
 
   @Test
@@ -119,7 +91,7 @@ class PkTrackingTest {
       k[i][i] = w * w;
     }
     AeroelasticSystem sys = new AeroelasticSystem(new StructuralModel(List.of("mode_1", "mode_2"), m, c, k),
-        new Holed(q0, d, kBad));
+        holed(q0, d, kBad));
     FlutterSolution sol = new PkMethod().solve(sys, PkClosedFormTest.PATH, AnalysisOptions.defaults());
     int firstGap = -1;
     int gaps = 0;

@@ -9,8 +9,8 @@ import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.MatrixUtils;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.aero.FitError;
 import org.flexmargin.aero.RationalFit;
 import org.flexmargin.model.InvalidInputException;
@@ -46,42 +46,13 @@ class StateSpaceInputsTest {
   private static final RationalFit FIT = fit(B, A, new double[] {BETA});
 
   /** A source that is not a fit: Q = A0 + i k A1, semichord B. */
-  private static final AeroSource PLAIN = new AeroSource() {
-    @Override
-    public int size() {
-      return 2;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return B;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return 0;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return 2.0;
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
-      out.reshape(2, 2);
-      for (int i = 0; i < 2; i++) {
-        for (int j = 0; j < 2; j++) {
-          out.set(i, j, A[0][i][j], k * A[1][i][j]);
-        }
+  private static final AeroSource PLAIN = new FunctionForces(2, B, 0, 2.0, (k, out) -> {
+    for (int i = 0; i < 2; i++) {
+      for (int j = 0; j < 2; j++) {
+        out.set(i, j, A[0][i][j], k * A[1][i][j]);
       }
     }
-
-    @Override
-    public String description() {
-      return "plain test forces";
-    }
-  };
+  }, "plain test forces");
 
   private static AeroelasticSystem system(AeroSource aero) {
     return new AeroelasticSystem(new StructuralModel(List.of("a", "b"), M, C, K), aero);
@@ -212,38 +183,7 @@ class StateSpaceInputsTest {
 
   @Test
   void fitErrorAgainstVanishingDataIsZeroOrInfinite() {
-    AeroSource zero = new AeroSource() {
-      @Override
-      public int size() {
-        return 1;
-      }
-
-      @Override
-      public double referenceSemichordM() {
-        return B;
-      }
-
-      @Override
-      public double minReducedFrequency() {
-        return 0;
-      }
-
-      @Override
-      public double maxReducedFrequency() {
-        return 2;
-      }
-
-      @Override
-      public void forces(double k, ZMatrixRMaj out) {
-        out.reshape(1, 1);
-        out.zero();
-      }
-
-      @Override
-      public String description() {
-        return "no forces";
-      }
-    };
+    AeroSource zero = new FunctionForces(1, B, 0, 2, FunctionForces.NONE, "no forces");
     RationalFit nothing = fit(B, new double[][][] {{{0}}, {{0}}, {{0}}}, new double[0]);
     RationalFit something = fit(B, new double[][][] {{{0.1}}, {{0}}, {{0}}}, new double[0]);
     assertEquals(0.0, StateSpaceMethod.fitErrorAt(zero, nothing, 0.3), 0.0);

@@ -15,6 +15,7 @@ import org.apache.commons.math3.linear.MatrixUtils;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.aero.RationalFit;
 import org.flexmargin.aero.RogerApproximation;
 import org.flexmargin.aero.Theodorsen;
@@ -90,34 +91,18 @@ class StateSpaceMethodTest {
    * org.flexmargin.aero.StripTheoryAero} Javadoc, re-implemented here) with any lift-deficiency
    * function, projected on the modes of the built typical section: Q = Phi^T Q_section Phi.
    */
-  private static final class SectionForces implements AeroSource {
-    interface Deficiency {
-      Complex at(double k);
+  private static AeroSource sectionForces(TypicalSection s, ModeTable modes, Deficiency c) {
+    double b = s.semichordM();
+    double a = s.elasticAxisA();
+    double a0 = s.liftSlopePerRad();
+    double span = s.spanM();
+    double[][] phi = new double[modes.size()][]; // [mode][w, theta]
+    for (int i = 0; i < modes.size(); i++) {
+      ElasticMode m = modes.modes().get(i);
+      ShapeValue v = m.shapes().get(BuiltInStructures.SECTION_STATION);
+      phi[i] = new double[] {v.displacementM(), v.rotationRad()};
     }
-
-    final double b;
-    final double a;
-    final double a0;
-    final double span;
-    final double[][] phi; // [mode][w, theta]
-    final Deficiency c;
-
-    SectionForces(TypicalSection s, ModeTable modes, Deficiency c) {
-      this.b = s.semichordM();
-      this.a = s.elasticAxisA();
-      this.a0 = s.liftSlopePerRad();
-      this.span = s.spanM();
-      this.c = c;
-      phi = new double[modes.size()][];
-      for (int i = 0; i < modes.size(); i++) {
-        ElasticMode m = modes.modes().get(i);
-        ShapeValue v = m.shapes().get(BuiltInStructures.SECTION_STATION);
-        phi[i] = new double[] {v.displacementM(), v.rotationRad()};
-      }
-    }
-
-    @Override
-    public void forces(double k, ZMatrixRMaj out) {
+    return new FunctionForces(phi.length, b, 0, Double.POSITIVE_INFINITY, (k, out) -> {
       Complex ik = new Complex(0, k);
       Complex cc = c.at(k);
       double twoPi = 2 * Math.PI;
@@ -130,44 +115,23 @@ class StateSpaceMethodTest {
           .add(cc.multiply(steady).multiply(2 * a0 * b * b * (a + 0.5)));
       Complex[][] qs = {{lw, lt}, {mw, mt}};
       int n = phi.length;
-      out.reshape(n, n);
       for (int i = 0; i < n; i++) {
         for (int j = 0; j < n; j++) {
           Complex sum = Complex.ZERO;
           for (int r = 0; r < 2; r++) {
-            for (int s = 0; s < 2; s++) {
-              sum = sum.add(qs[r][s].multiply(phi[i][r] * phi[j][s]));
+            for (int q = 0; q < 2; q++) {
+              sum = sum.add(qs[r][q].multiply(phi[i][r] * phi[j][q]));
             }
           }
           out.set(i, j, span * sum.getReal(), span * sum.getImaginary());
         }
       }
-    }
+    }, "typical-section forces (test)");
+  }
 
-    @Override
-    public int size() {
-      return phi.length;
-    }
-
-    @Override
-    public double referenceSemichordM() {
-      return b;
-    }
-
-    @Override
-    public double minReducedFrequency() {
-      return 0;
-    }
-
-    @Override
-    public double maxReducedFrequency() {
-      return Double.POSITIVE_INFINITY;
-    }
-
-    @Override
-    public String description() {
-      return "typical-section forces (test)";
-    }
+  /** A lift-deficiency function C(k) (dimensionless, complex). */
+  private interface Deficiency {
+    Complex at(double k);
   }
 
   @Test
@@ -176,7 +140,7 @@ class StateSpaceMethodTest {
     ConfigurationModel model = ConfigurationModel.of(new Configuration("lpw", section, null));
     // 1. The test's own section forces with the exact C(k) equal the project's strip theory
     //    (1e-12 of the largest entry: same formulas, independent code).
-    SectionForces exact = new SectionForces(section, model.modes(), k -> {
+    AeroSource exact = sectionForces(section, model.modes(), k -> {
       double[] fg = new double[2];
       Theodorsen.evaluate(k, fg);
       return new Complex(fg[0], fg[1]);
@@ -194,7 +158,7 @@ class StateSpaceMethodTest {
     // 2. With Jones's C the forces are exactly of Roger's form with lag roots 0.0455 and 0.3
     //    (p C(p) = p/2 + 0.165 * 0.0455 p/(p + 0.0455) + 0.335 * 0.3 p/(p + 0.3)), so the fit is
     //    exact (to rounding) and the state space is the classical Jones-Wagner model.
-    SectionForces jones = new SectionForces(section, model.modes(), k -> {
+    AeroSource jones = sectionForces(section, model.modes(), k -> {
       Complex ik = new Complex(0, k);
       return Complex.ONE.subtract(ik.divide(ik.add(0.0455)).multiply(0.165))
           .subtract(ik.divide(ik.add(0.3)).multiply(0.335));

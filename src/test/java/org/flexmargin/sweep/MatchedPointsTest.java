@@ -4,9 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.function.DoubleFunction;
-import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_ZDRM;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.FunctionForces;
 import org.flexmargin.atmosphere.StandardAtmosphere;
 import org.flexmargin.flutter.AeroelasticSystem;
 import org.flexmargin.flutter.DivergenceSolver;
@@ -35,33 +35,13 @@ class MatchedPointsTest {
 
   /** The incompressible forces times the Prandtl-Glauert factor 1 / sqrt(1 - M^2). */
   static DoubleFunction<AeroSource> prandtlGlauert() {
-    return mach -> new AeroSource() {
-      final double scale = 1 / Math.sqrt(1 - mach * mach);
-
-      @Override public int size() {
-        return INCOMPRESSIBLE.size();
-      }
-
-      @Override public double referenceSemichordM() {
-        return INCOMPRESSIBLE.referenceSemichordM();
-      }
-
-      @Override public double minReducedFrequency() {
-        return INCOMPRESSIBLE.minReducedFrequency();
-      }
-
-      @Override public double maxReducedFrequency() {
-        return INCOMPRESSIBLE.maxReducedFrequency();
-      }
-
-      @Override public void forces(double k, ZMatrixRMaj out) {
-        INCOMPRESSIBLE.forces(k, out);
-        CommonOps_ZDRM.elementMultiply(out, scale, 0, out);
-      }
-
-      @Override public String description() {
-        return "Prandtl-Glauert-scaled strip theory";
-      }
+    return mach -> {
+      double scale = 1 / Math.sqrt(1 - mach * mach);
+      return new FunctionForces(INCOMPRESSIBLE.size(), INCOMPRESSIBLE.referenceSemichordM(),
+          INCOMPRESSIBLE.minReducedFrequency(), INCOMPRESSIBLE.maxReducedFrequency(), (k, out) -> {
+            INCOMPRESSIBLE.forces(k, out);
+            CommonOps_ZDRM.elementMultiply(out, scale, 0, out);
+          }, "Prandtl-Glauert-scaled strip theory");
     };
   }
 
