@@ -34,7 +34,8 @@ final class DemoCommand implements Callable<Integer> {
   static final String RESOURCE_FOLDER = "/org/flexmargin/demo/";
   /** The bundled files: the case first, then the mode tables it references. */
   static final List<String> FILES =
-      List.of("demo-case.json", "ridgeline-mc7-full-payload.json", "ridgeline-mc7-empty.csv", "demo-campaign.json");
+      List.of("demo-case.json", "ridgeline-mc7-full-payload.json", "ridgeline-mc7-empty.csv", "demo-campaign.json",
+          "demo-case-notched.json");
   /** Default output folder, relative to the current folder (git-ignored in the repository). */
   static final Path DEFAULT_OUT = Path.of("reports", "demo");
 
