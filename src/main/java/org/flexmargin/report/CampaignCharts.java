@@ -76,7 +76,7 @@ final class CampaignCharts {
   }
 
   private static ReportChart firstProblem(CampaignPlan plan, List<SampleOutcome> outcomes) {
-    XYChart chart = chart("Share of samples with a first problem below each speed", "fraction of samples");
+    XYChart chart = chart("Share of samples with a first problem below each speed", "samples (%)");
     Set<String> used = new HashSet<>();
     List<String> notes = new ArrayList<>();
     for (Cell c : plan.cells()) {
@@ -92,17 +92,19 @@ final class CampaignCharts {
       double[] y = new double[2 * v.length];
       for (int i = 0; i < v.length; i++) {
         x[2 * i] = v[i];
-        y[2 * i] = (double) i / computed;
+        y[2 * i] = 100.0 * i / computed;
         x[2 * i + 1] = v[i];
-        y[2 * i + 1] = (double) (i + 1) / computed;
+        y[2 * i + 1] = 100.0 * (i + 1) / computed;
       }
       ChartSeries.line(chart, used, c.label(), x, y, ReportStyle.seriesColor(c.index()),
           ReportStyle.seriesStroke(c.index()));
     }
-    chart.getStyler().setYAxisMin(0.0).setYAxisMax(1.0);
+    chart.getStyler().setYAxisMin(0.0).setYAxisMax(100.0);
+    chart.getStyler().setYAxisDecimalPattern("0");
+    chart.getStyler().setXAxisDecimalPattern("0.#");
     return new ReportChart("first-problem", "Empirical distribution of each cell's first problem (the lowest of "
         + "divergence, open- and closed-loop flutter onset and the first lost loop margin requirement): the "
-        + "fraction of samples whose first problem lies below each airspeed; samples without a problem in "
+        + "percentage of samples whose first problem lies below each airspeed; samples without a problem in "
         + "the sweep never reach the curve.", chart, notes);
   }
 }
