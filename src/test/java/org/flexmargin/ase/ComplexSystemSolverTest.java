@@ -241,6 +241,29 @@ class ComplexSystemSolverTest {
   }
 
   /**
+   * The same swamping at the second step, with the large candidate purely imaginary: rows
+   * [1, 0, 0, 0], [0, 1e-20, 1, 0], [0, i, 1, 0], [0, 0, 0, 1] and b = (1, 1, 1 + i, 1). Exactly,
+   * x_2 = i / (i - 1e-20) and x_3 = 1 - 1e-20 x_2, both 1 to working precision; without the exchange
+   * x_2 would come out 0. The candidate's size is |Re| + |Im|, so the imaginary part must count.
+   */
+  @Test
+  void rowExchangeAtALaterStepWithAnImaginaryCandidate() {
+    int n = 4;
+    double[] a = new double[2 * n * n];
+    a[0] = 1;
+    a[2 * (n + 1)] = 1e-20;
+    a[2 * (n + 2)] = 1;
+    a[2 * (2 * n + 1) + 1] = 1;
+    a[2 * (2 * n + 2)] = 1;
+    a[2 * (3 * n + 3)] = 1;
+    double[] x = solve(a, new double[] {1, 0, 1, 0, 1, 1, 1, 0});
+    double[] expected = {1, 0, 1, 0, 1, 0, 1, 0};
+    for (int i = 0; i < 2 * n; i++) {
+      assertEquals(expected[i], x[i], 4 * EPS, "entry " + i);
+    }
+  }
+
+  /**
    * Pivots with the larger part real and with the larger part imaginary (the two branches of Smith's
    * division): a 2 x 2 triangular system with exact answers. [[3+4i, 1], [0, 1+2i]] x = [b1, b2] with
    * b2 = (1+2i)(2-i) = 4+3i and b1 = (3+4i)(1+i) + (2-i) = 1+6i gives x = (1+i, 2-i).
@@ -291,8 +314,9 @@ class ComplexSystemSolverTest {
     assertEquals(null, solve(dependent, new double[] {1, 0, 2, 0, 0, 0}));
     // a NaN entry
     assertEquals(null, solve(new double[] {Double.NaN, 0, 0, 0, 0, 0, 1, 0}, new double[] {1, 0, 1, 0}));
-    // finite pivots whose quotient overflows
+    // finite pivots whose quotient overflows, in its real or in its imaginary part
     assertEquals(null, solve(new double[] {1e-300, 0}, new double[] {1e300, 0}));
+    assertEquals(null, solve(new double[] {1e-300, 0}, new double[] {0, 1e300}));
     assertThrows(IllegalArgumentException.class, () -> new ComplexSystemSolver(0));
     assertEquals(3, new ComplexSystemSolver(3).order());
   }
