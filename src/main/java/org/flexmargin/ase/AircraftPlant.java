@@ -5,8 +5,6 @@ import java.util.List;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
-import org.ejml.dense.row.factory.LinearSolverFactory_ZDRM;
-import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.flexmargin.aero.AeroSource;
 import org.flexmargin.aero.ControlSurfaceForces;
 import org.flexmargin.atmosphere.FlightCondition;
@@ -208,17 +206,55 @@ public final class AircraftPlant {
   /**
    * Exact frequency response from elevator to the sensors: at each frequency the (2 + m) complex
    * equations are solved with Q(ik), k = omega b / V, from the configuration's aerodynamic source.
-   * A workspace: not thread-safe.
+   * The frequency-independent entries are assembled once; each frequency copies them, adds the
+   * frequency-dependent ones and solves by complex Gaussian elimination with partial pivoting in a
+   * reused workspace. A workspace: not thread-safe.
    */
   public final class FrequencyEvaluator {
     private final int n = 2 + m;
-    private final ZMatrixRMaj system = new ZMatrixRMaj(n, n);
-    private final ZMatrixRMaj rhs = new ZMatrixRMaj(n, 1);
-    private final ZMatrixRMaj x = new ZMatrixRMaj(n, 1);
     private final ZMatrixRMaj q = new ZMatrixRMaj(m, m);
-    private final LinearSolverDense<ZMatrixRMaj> lu = LinearSolverFactory_ZDRM.lu(n);
+    private final ComplexSystemSolver solver = new ComplexSystemSolver(n);
+    /** The frequency-independent part of the system matrix, re/im interleaved (mixed units). */
+    private final double[] fixedMatrix = new double[2 * n * n];
+    /** The right-hand side per unit elevator, re/im interleaved (mixed units). */
+    private final double[] fixedRhs = new double[2 * n];
+    /** Coefficient of omega in the imaginary part of the q row's alpha entry (s). */
+    private final double alphaDotInPitchRow;
 
-    private FrequencyEvaluator() {}
+    private FrequencyEvaluator() {
+      double qd = condition.dynamicPressurePa();
+      double lf = liftFactor();
+      double mf = momentFactor();
+      double rf = rateFactor();
+      // alpha row: (s + lf CLa) alpha - q + lf CLeta eta = -lf CLd delta
+      setFixed(0, 0, lf * rigid.liftSlopePerRad());
+      setFixed(0, 1, -1);
+      for (int i = 0; i < m; i++) {
+        setFixed(0, 2 + i, lf * liftPerEta[i]);
+      }
+      fixedRhs[0] = -lf * rigid.liftPerElevatorPerRad();
+      // q row: -mf (Cma + Cmad rf s) alpha + (s - mf Cmq rf) q - mf Cmeta eta = mf Cmd delta
+      setFixed(1, 0, -mf * rigid.pitchMomentSlopePerRad());
+      alphaDotInPitchRow = -mf * rigid.alphaDotDampingCmAlphaDot() * rf;
+      setFixed(1, 1, -mf * rigid.pitchDampingCmq() * rf);
+      for (int i = 0; i < m; i++) {
+        setFixed(1, 2 + i, -mf * momentPerEta[i]);
+      }
+      fixedRhs[2] = mf * rigid.pitchMomentPerElevatorPerRad();
+      // elastic rows: -qd Qa alpha - qd Qq rf q + (-w^2 M + i w C + K - qd Q) eta = qd Qd delta
+      for (int i = 0; i < m; i++) {
+        setFixed(2 + i, 0, -qd * forcePerAlpha[i]);
+        setFixed(2 + i, 1, -qd * forcePerPitchRate[i] * rf);
+        for (int j = 0; j < m; j++) {
+          setFixed(2 + i, 2 + j, stiffness[i][j]);
+        }
+        fixedRhs[2 * (2 + i)] = qd * forcePerElevator[i];
+      }
+    }
+
+    private void setFixed(int row, int col, double real) {
+      fixedMatrix[2 * (row * n + col)] = real;
+    }
 
     /**
      * @param omegaRadPerS frequency (rad/s), &gt;= 0
@@ -231,44 +267,33 @@ public final class AircraftPlant {
       double v = condition.speedTasMps();
       double k = w * aero.referenceSemichordM() / v;
       aero.forces(k, q);
-      double lf = liftFactor();
-      double mf = momentFactor();
-      double rf = rateFactor();
-      system.zero();
-      rhs.zero();
-      // alpha row: (s + lf CLa) alpha - q + lf CLeta eta = -lf CLd delta
-      system.set(0, 0, lf * rigid.liftSlopePerRad(), w);
-      system.set(0, 1, -1, 0);
+      double[] sys = solver.matrix();
+      double[] x = solver.rhs();
+      System.arraycopy(fixedMatrix, 0, sys, 0, sys.length);
+      System.arraycopy(fixedRhs, 0, x, 0, x.length);
+      sys[1] = w;
+      sys[2 * n + 1] = alphaDotInPitchRow * w;
+      sys[2 * (n + 1) + 1] = w;
+      double[] qData = q.data;
+      double w2 = -w * w;
       for (int i = 0; i < m; i++) {
-        system.set(0, 2 + i, lf * liftPerEta[i], 0);
-      }
-      rhs.set(0, 0, -lf * rigid.liftPerElevatorPerRad(), 0);
-      // q row: -mf (Cma + Cmad rf s) alpha + (s - mf Cmq rf) q - mf Cmeta eta = mf Cmd delta
-      system.set(1, 0, -mf * rigid.pitchMomentSlopePerRad(), -mf * rigid.alphaDotDampingCmAlphaDot() * rf * w);
-      system.set(1, 1, -mf * rigid.pitchDampingCmq() * rf, w);
-      for (int i = 0; i < m; i++) {
-        system.set(1, 2 + i, -mf * momentPerEta[i], 0);
-      }
-      rhs.set(1, 0, mf * rigid.pitchMomentPerElevatorPerRad(), 0);
-      // elastic rows: -qd Qa alpha - qd Qq rf q + (-w^2 M + i w C + K - qd Q) eta = qd Qd delta
-      for (int i = 0; i < m; i++) {
-        system.set(2 + i, 0, -qd * forcePerAlpha[i], 0);
-        system.set(2 + i, 1, -qd * forcePerPitchRate[i] * rf, 0);
+        double[] massRow = mass[i];
+        double[] dampingRow = damping[i];
+        int base = 2 * ((2 + i) * n + 2);
+        int qBase = 2 * i * m;
         for (int j = 0; j < m; j++) {
-          system.set(2 + i, 2 + j,
-              -w * w * mass[i][j] + stiffness[i][j] - qd * q.getReal(i, j),
-              w * damping[i][j] - qd * q.getImag(i, j));
+          int e = base + 2 * j;
+          sys[e] = sys[e] + w2 * massRow[j] - qd * qData[qBase + 2 * j];
+          sys[e + 1] = w * dampingRow[j] - qd * qData[qBase + 2 * j + 1];
         }
-        rhs.set(2 + i, 0, qd * forcePerElevator[i], 0);
       }
-      if (!lu.setA(system)) {
+      if (!solver.solve()) {
         throw new ArithmeticException("aircraft frequency response: singular system at " + w + " rad/s");
       }
-      lu.solve(rhs, x);
-      double ar = x.getReal(0, 0);
-      double ai = x.getImag(0, 0);
-      double qr = x.getReal(1, 0);
-      double qi = x.getImag(1, 0);
+      double ar = x[0];
+      double ai = x[1];
+      double qr = x[2];
+      double qi = x[3];
       for (int s = 0; s < sensors.size(); s++) {
         SensorSpec sensor = sensors.get(s);
         double yr;
@@ -279,8 +304,8 @@ public final class AircraftPlant {
             yr = qr;
             yi = qi;
             for (int i = 0; i < m; i++) {
-              yr += -w * sensorRotation[s][i] * x.getImag(2 + i, 0);
-              yi += w * sensorRotation[s][i] * x.getReal(2 + i, 0);
+              yr += -w * sensorRotation[s][i] * x[2 * (2 + i) + 1];
+              yi += w * sensorRotation[s][i] * x[2 * (2 + i)];
             }
           }
           case NORMAL_ACCELEROMETER -> {
@@ -289,8 +314,8 @@ public final class AircraftPlant {
             yr = v * (qr + w * ai) + lever * w * qi;
             yi = v * (qi - w * ar) - lever * w * qr;
             for (int i = 0; i < m; i++) {
-              yr += -w * w * sensorDisplacement[s][i] * x.getReal(2 + i, 0);
-              yi += -w * w * sensorDisplacement[s][i] * x.getImag(2 + i, 0);
+              yr += -w * w * sensorDisplacement[s][i] * x[2 * (2 + i)];
+              yi += -w * w * sensorDisplacement[s][i] * x[2 * (2 + i) + 1];
             }
             yr /= STANDARD_GRAVITY_MPS2;
             yi /= STANDARD_GRAVITY_MPS2;
@@ -300,8 +325,8 @@ public final class AircraftPlant {
             yr = ar;
             yi = ai;
             for (int i = 0; i < m; i++) {
-              double er = x.getReal(2 + i, 0);
-              double ei = x.getImag(2 + i, 0);
+              double er = x[2 * (2 + i)];
+              double ei = x[2 * (2 + i) + 1];
               double cr = sensorRotation[s][i];
               double ci = -sensorDisplacement[s][i] * w / v;
               yr += cr * er - ci * ei;
