@@ -1,6 +1,5 @@
 package org.flexmargin.clearance;
 
-import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 
@@ -25,6 +24,6 @@ public record FlutterClearance(double limitSpeedEasMps, double requiredFlutterSp
 
   /** @return the check with the smallest normalised excess, if any */
   public Optional<ClearanceCheck> governing() {
-    return checks.stream().min(Comparator.comparingDouble(ClearanceCheck::normalisedExcess));
+    return checks.stream().min(ClearanceCheck.TIGHTEST_FIRST);
   }
 }

@@ -1,6 +1,5 @@
 package org.flexmargin.clearance;
 
-import java.util.Comparator;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
@@ -43,7 +42,7 @@ public record PointAssessment(double speedEasMps, SpeedRegime regime,
 
   /** @return the check with the smallest normalised excess, if any */
   public Optional<ClearanceCheck> governing() {
-    return checks.stream().min(Comparator.comparingDouble(ClearanceCheck::normalisedExcess));
+    return checks.stream().min(ClearanceCheck.TIGHTEST_FIRST);
   }
 
   /** @return the smallest normalised excess (negative if any check fails), if any check */

@@ -20,12 +20,21 @@ import org.flexmargin.model.InvalidInputException;
  */
 public record RankedFinding(ClearanceCheck check, Severity severity, double speedEasMps) {
 
-  /** Failed first, by severity, then lowest speed; then met, closest to the limit first. */
+  /**
+   * Failed first, by severity, then lowest speed; then met, closest to the limit first. Speeds and
+   * normalised excesses are compared after rounding ({@link ClearanceCheck#rankingKey(double)}), so
+   * that two findings equal but for round-off (two modes whose checks fail by the same amount, say)
+   * are ordered by subject and kind instead of by their last digits: the governing finding does not
+   * change with the order of floating-point operations or the number of threads.
+   */
   public static final Comparator<RankedFinding> ORDER = Comparator
       .comparing((RankedFinding r) -> r.check().passed())
       .thenComparingInt(r -> r.check().passed() ? 0 : r.severity().rank())
-      .thenComparingDouble(r -> r.check().passed() ? r.check().normalisedExcess() : r.speedEasMps())
-      .thenComparingDouble(r -> r.check().normalisedExcess());
+      .thenComparingDouble(r -> ClearanceCheck.rankingKey(r.check().passed() ? r.check().normalisedExcess()
+          : r.speedEasMps()))
+      .thenComparingDouble(r -> ClearanceCheck.rankingKey(r.check().normalisedExcess()))
+      .thenComparing(r -> r.check().subject())
+      .thenComparing(r -> r.check().kind());
 
   /** Validates. */
   public RankedFinding {

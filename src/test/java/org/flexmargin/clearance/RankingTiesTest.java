@@ -52,6 +52,38 @@ class RankingTiesTest {
     assertEquals(List.of(near, far), sorted(RankedFinding.of(far, 80, VL), RankedFinding.of(near, 79, VL)));
   }
 
+  /** A structural peak check on one mode: limit -6 dB, found {@code peakDb}. */
+  private static ClearanceCheck peak(String mode, double peakDb) {
+    return ClearanceCheck.of(CheckKind.STRUCTURAL_MODE, mode, "structural peak", -6, peakDb, CheckUnit.DECIBEL,
+        RequiredSense.AT_MOST, 20.0);
+  }
+
+  @Test
+  void findingsEqualButForRoundOffAreOrderedBySubjectWhateverTheirLastDigits() {
+    // two modes failing by the same 3 dB, one of them a last-bit different: the order must not
+    // depend on which one round-off makes a hair worse
+    double worse = Math.nextUp(-3.0);
+    for (double[] found : new double[][] {{-3.0, worse}, {worse, -3.0}}) {
+      ClearanceCheck tail = peak("tailplane_bending_1", found[0]);
+      ClearanceCheck fuselage = peak("fuselage_bending_2", found[1]);
+      assertEquals(List.of(fuselage, tail), sorted(RankedFinding.of(tail, 80, VL), RankedFinding.of(fuselage, 80, VL)));
+      assertEquals(fuselage, new FlutterClearance(VL, 1.15 * VL, List.of(tail, fuselage)).governing().orElseThrow());
+      assertEquals(fuselage, new FlutterClearance(VL, 1.15 * VL, List.of(fuselage, tail)).governing().orElseThrow());
+    }
+    // a real difference (1e-6 of the excess) still ranks by excess: the tail's peak is higher
+    ClearanceCheck tail = peak("tailplane_bending_1", -3.0 + 3e-6);
+    ClearanceCheck fuselage = peak("fuselage_bending_2", -3.0);
+    assertEquals(List.of(tail, fuselage), sorted(RankedFinding.of(fuselage, 80, VL), RankedFinding.of(tail, 80, VL)));
+  }
+
+  @Test
+  void rankingKeysKeepNineSignificantDigits() {
+    assertEquals(0.123456789, ClearanceCheck.rankingKey(0.1234567891234), 0.0);
+    assertEquals(-123.456789, ClearanceCheck.rankingKey(-123.4567890004), 0.0);
+    assertEquals(0.0, ClearanceCheck.rankingKey(0.0), 0.0);
+    assertEquals(ClearanceCheck.rankingKey(1.0), ClearanceCheck.rankingKey(Math.nextUp(1.0)), 0.0);
+  }
+
   @Test
   void aMetStabilityCheckReadsStable() {
     ClearanceCheck stable = ClearanceCheck.of(CheckKind.CLOSED_LOOP_STABILITY, "", "nominal closed-loop stability",
