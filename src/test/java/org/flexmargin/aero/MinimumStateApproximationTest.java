@@ -11,17 +11,21 @@ import org.junit.jupiter.api.Test;
 /** Karpel's minimum-state fit (docs/validation.md, "Minimum-state rational fit"). */
 class MinimumStateApproximationTest {
 
-  @Test
-  void dataExactlyOfMinimumStateFormAreReproduced() {
-    // Closed form: Q(p) = A0 + A1 p + A2 p^2 + D (pI - R)^-1 E p with the fit's own lag roots is in
-    // the model set, so the fit can reach it exactly. Data evaluated independently (Commons Math
-    // complex arithmetic, RogerApproximationTest.RogerFormData with rank-one lag matrices D[:, l]
-    // E[l, :]). Measured worst element error 3.7e-16 on the fitted k and 8.9e-16 up to k = 3 (the
-    // start from a Roger fit is already exact here); 1e-12 allows for round-off in the least
-    // squares and still tells an exact fit from the ~1e-3 of a fit of the wrong form.
+  /** Lag roots of {@link #minimumStateData(long)}. */
+  static final double[] MINIMUM_STATE_LAG_ROOTS = {0.08, 0.3, 0.9};
+
+  /**
+   * Data exactly of the minimum-state form: 3 coordinates, random A0, A1, A2 and rank-one lag
+   * matrices D[:, l] E[l, :] at {@link #MINIMUM_STATE_LAG_ROOTS}, evaluated with Commons Math complex
+   * arithmetic by {@link RogerApproximationTest.RogerFormData}.
+   *
+   * @param seed random seed of the coefficients
+   * @return the data
+   */
+  static RogerApproximationTest.RogerFormData minimumStateData(long seed) {
     int n = 3;
-    double[] beta = {0.08, 0.3, 0.9};
-    Random rnd = new Random(11);
+    double[] beta = MINIMUM_STATE_LAG_ROOTS;
+    Random rnd = new Random(seed);
     double[][][] a = new double[beta.length + 3][n][n];
     for (int m = 0; m < 3; m++) {
       for (int i = 0; i < n; i++) {
@@ -39,7 +43,19 @@ class MinimumStateApproximationTest {
         }
       }
     }
-    RogerApproximationTest.RogerFormData data = new RogerApproximationTest.RogerFormData(a, beta);
+    return new RogerApproximationTest.RogerFormData(a, beta);
+  }
+
+  @Test
+  void dataExactlyOfMinimumStateFormAreReproduced() {
+    // Closed form: Q(p) = A0 + A1 p + A2 p^2 + D (pI - R)^-1 E p with the fit's own lag roots is in
+    // the model set, so the fit can reach it exactly. Data evaluated independently (Commons Math
+    // complex arithmetic, RogerApproximationTest.RogerFormData with rank-one lag matrices D[:, l]
+    // E[l, :]). Measured worst element error 3.7e-16 on the fitted k and 8.9e-16 up to k = 3 (the
+    // start from a Roger fit is already exact here); 1e-12 allows for round-off in the least
+    // squares and still tells an exact fit from the ~1e-3 of a fit of the wrong form.
+    double[] beta = MINIMUM_STATE_LAG_ROOTS;
+    RogerApproximationTest.RogerFormData data = minimumStateData(11);
     RationalFit fit = MinimumStateApproximation.fit(data,
         RogerApproximation.defaultReducedFrequencies(1.5, RogerApproximation.DEFAULT_POINTS), beta, 0.05);
     assertTrue(fit.error().worstRelativeError() < 1e-12, "worst " + fit.error().worstRelativeError());

@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.Random;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.QRDecomposition;
@@ -139,26 +138,8 @@ class RationalFitSettingsTest {
     // exactly. 1e-11: round-off of the least squares (the weights reach 20), far below the ~1e-3 of
     // a fit of the wrong form; checked on the fitted k and on 1501 k up to 3 (between and beyond).
     int n = 3;
-    double[] beta = {0.08, 0.3, 0.9};
-    Random rnd = new Random(5);
-    double[][][] a = new double[beta.length + 3][n][n];
-    for (int m = 0; m < 3; m++) {
-      for (int i = 0; i < n; i++) {
-        for (int j = 0; j < n; j++) {
-          a[m][i][j] = 2 * rnd.nextDouble() - 1;
-        }
-      }
-    }
-    for (int l = 0; l < beta.length; l++) {
-      double[] d = {rnd.nextDouble() + 0.5, rnd.nextDouble() - 0.5, rnd.nextDouble() - 0.2};
-      double[] e = {rnd.nextDouble() - 0.5, rnd.nextDouble() + 0.5, rnd.nextDouble() - 0.7};
-      for (int i = 0; i < n; i++) {
-        for (int j = 0; j < n; j++) {
-          a[l + 3][i][j] = d[i] * e[j];
-        }
-      }
-    }
-    RogerApproximationTest.RogerFormData data = new RogerApproximationTest.RogerFormData(a, beta);
+    double[] beta = MinimumStateApproximationTest.MINIMUM_STATE_LAG_ROOTS;
+    RogerApproximationTest.RogerFormData data = MinimumStateApproximationTest.minimumStateData(5);
     for (RationalFitForm form : RationalFitForm.values()) {
       for (FitWeighting w : FitWeighting.values()) {
         RationalFit fit = RationalFits.fit(data, settings(form, -1, beta, 0, 1.5, 31, w), 1.0);
@@ -167,7 +148,7 @@ class RationalFitSettingsTest {
         assertTrue(RogerApproximationTest.denseError(data, fit, 3.0) < 1e-11, what + " between and beyond");
         for (int l = 0; l < beta.length; l++) {
           for (int i = 0; i < n; i++) {
-            assertArrayEquals(a[l + 3][i], fit.matrix(l + 3)[i], 1e-10, what + " lag matrix " + l);
+            assertArrayEquals(data.a[l + 3][i], fit.matrix(l + 3)[i], 1e-10, what + " lag matrix " + l);
           }
         }
       }

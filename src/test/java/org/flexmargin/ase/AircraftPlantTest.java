@@ -99,18 +99,9 @@ class AircraftPlantTest {
     // has a positive real root; time to double = ln 2 / sigma (closed form).
     RigidBody rb = navion(0.5, Map.of());
     AircraftPlant p = plant(rb, oneMode(30, new ShapeValue(0, 0)), zeroAero(1), SENSORS);
-    FlightCondition fc = p.condition();
-    double v = fc.speedTasMps();
-    double qd = fc.dynamicPressurePa();
-    double za = -qd * rb.referenceAreaM2() * rb.liftSlopePerRad() / rb.massKg();
-    double mf = qd * rb.referenceAreaM2() * rb.referenceChordM() / rb.pitchInertiaKgM2();
-    double rf = rb.referenceChordM() / (2 * v);
-    double ma = mf * rb.pitchMomentSlopePerRad();
-    double mq = mf * rb.pitchDampingCmq() * rf;
-    double mad = mf * rb.alphaDotDampingCmAlphaDot() * rf;
-    double b1 = -(mq + mad + za / v);
-    double c0 = za * mq / v - ma;
-    double sigma = (-b1 + Math.sqrt(b1 * b1 - 4 * c0)) / 2;
+    // sigma = -b1 / 2 + sqrt(b1^2 / 4 - c0), the quadratic written out in ShortPeriodRootsTest
+    double[] q = ShortPeriodRootsTest.quadratic(p, rb);
+    double sigma = q[0] + Math.sqrt(q[1]);
     assertTrue(sigma > 0);
     Eigenvalues e = p.stateSpace(zeroAero(1)).eigenvalues();
     assertEquals(sigma, e.maxRealPart(), 1e-9 * sigma);

@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 class ShortPeriodRootsTest {
 
   /** {-b1 / 2, discriminant b1^2 / 4 - c0} of the quadratic, from the derivatives by hand. */
-  private static double[] quadratic(AircraftPlant p, RigidBody rb) {
+  static double[] quadratic(AircraftPlant p, RigidBody rb) {
     FlightCondition fc = p.condition();
     double v = fc.speedTasMps();
     double qd = fc.dynamicPressurePa();
