@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.model.RationalFitSettings;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -158,7 +159,7 @@ class RogerLeastSquaresTest {
     assertEquals(points, assertThrows(InvalidInputException.class,
         () -> RogerApproximation.defaultReducedFrequencies(1.5, 2)).fieldPath());
     assertEquals("rfa.lag_count", assertThrows(InvalidInputException.class,
-        () -> RogerApproximation.defaultLagRoots(1.5, 13)).fieldPath());
+        () -> RogerApproximation.defaultLagRoots(1.5, RationalFitSettings.MAX_LAG_COUNT + 1)).fieldPath());
     for (double bad : new double[] {0, -1, Double.NaN, Double.POSITIVE_INFINITY}) {
       assertEquals("rfa.max_reduced_frequency", assertThrows(InvalidInputException.class,
           () -> RogerApproximation.defaultLagRoots(bad, 2)).fieldPath());
