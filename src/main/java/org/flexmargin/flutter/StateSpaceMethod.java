@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.ejml.data.DMatrixRMaj;
@@ -358,18 +359,35 @@ public final class StateSpaceMethod implements FlutterMethod {
   private static void flagFitErrorAtOnsets(AeroSource source, RationalFit fit, List<FlutterCrossing> crossings,
       List<String> warnings) {
     for (FlutterCrossing x : crossings) {
-      if (x.kind() != CrossingKind.FLUTTER_ONSET) {
-        continue;
-      }
-      double k = 2 * Math.PI * x.frequencyHz() * fit.referenceSemichordM() / x.condition().speedTasMps();
-      double error = fitErrorAt(source, fit, k);
-      if (error > ONSET_FIT_ERROR_LIMIT) {
-        warnings.add(String.format(Locale.ROOT,
-            "rational fit error %.3g %% at the reduced frequency k = %.4g of the %s onset at %.2f m/s EAS exceeds "
-                + "%.3g %%: the state-space onset may be off; compare with p-k, add lag roots or refit around it",
-            100 * error, k, x.branchName(), x.condition().speedEasMps(), 100 * ONSET_FIT_ERROR_LIMIT));
+      if (x.kind() == CrossingKind.FLUTTER_ONSET) {
+        fitErrorWarning(source, fit, x, "the " + x.branchName() + " onset",
+            "the state-space onset may be off; compare with p-k, add lag roots or refit around it")
+            .ifPresent(warnings::add);
       }
     }
+  }
+
+  /**
+   * The warning for a crossing whose reduced frequency sees a fit error above {@link
+   * #ONSET_FIT_ERROR_LIMIT}, shared by the open-loop and the closed-loop state-space models.
+   *
+   * @param source the fitted data
+   * @param fit the fit
+   * @param x the crossing
+   * @param what the crossing in words, e.g. "the wing_bending_2 onset"
+   * @param advice what the reader should make of it
+   * @return the warning, or empty when the fit is close enough there
+   */
+  public static Optional<String> fitErrorWarning(AeroSource source, RationalFit fit, FlutterCrossing x, String what,
+      String advice) {
+    double k = 2 * Math.PI * x.frequencyHz() * fit.referenceSemichordM() / x.condition().speedTasMps();
+    double error = fitErrorAt(source, fit, k);
+    if (!(error > ONSET_FIT_ERROR_LIMIT)) {
+      return Optional.empty();
+    }
+    return Optional.of(String.format(Locale.ROOT,
+        "rational fit error %.3g %% at the reduced frequency k = %.4g of %s at %.2f m/s EAS exceeds %.3g %%: %s",
+        100 * error, k, what, x.condition().speedEasMps(), 100 * ONSET_FIT_ERROR_LIMIT, advice));
   }
 
   private static boolean finite(DMatrixRMaj x) {

@@ -172,24 +172,15 @@ public final class ClosedLoopSweep {
     return new ClosedLoopResult(points, onsets, fitText, solves[0], warnings, assumptions, refinements);
   }
 
-  /**
-   * Adds a warning when the fit's error at the reduced frequency of a rational g = 0 crossing
-   * exceeds {@link StateSpaceMethod#ONSET_FIT_ERROR_LIMIT}.
-   */
+  /** Adds a warning when the fit's error at the reduced frequency of a rational g = 0 crossing is large. */
   private static void flagFitError(ConfigurationModel model, RationalFit fit, FlutterCrossing x, List<String> warnings) {
     if (!(x.frequencyHz() > 0)) {
       return;
     }
-    double k = 2 * Math.PI * x.frequencyHz() * fit.referenceSemichordM() / x.condition().speedTasMps();
-    double error = StateSpaceMethod.fitErrorAt(model.system().aero(), fit, k);
-    if (error > StateSpaceMethod.ONSET_FIT_ERROR_LIMIT) {
-      warnings.add(String.format(Locale.ROOT,
-          "rational fit error %.3g %% at the reduced frequency k = %.4g of the closed-loop %s of %s at %.2f m/s "
-              + "EAS exceeds %.3g %%: the rational onset may be off (the exact-loop refinement is not); add lag "
-              + "roots or refit around it",
-          100 * error, k, x.kind().name().toLowerCase(Locale.ROOT).replace('_', ' '), x.branchName(),
-          x.condition().speedEasMps(), 100 * StateSpaceMethod.ONSET_FIT_ERROR_LIMIT));
-    }
+    StateSpaceMethod.fitErrorWarning(model.system().aero(), fit, x,
+        "the closed-loop " + x.kind().name().toLowerCase(Locale.ROOT).replace('_', ' ') + " of " + x.branchName(),
+        "the rational onset may be off (the exact-loop refinement is not); add lag roots or refit around it")
+        .ifPresent(warnings::add);
   }
 
   /**
