@@ -1,6 +1,7 @@
 package org.flexmargin.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -20,11 +21,6 @@ import picocli.CommandLine.Command;
       "Analysis only: results support, and never replace, ground vibration tests, structural-coupling "
           + "tests, flight flutter testing and the approval of the airworthiness authority."
     },
-    subcommands = {CheckCommand.class, SweepCommand.class, DemoCommand.class, BenchCommand.class, NotchDesignCommand.class,
-        MarginsCommand.class,
-        SimulateCommand.class, CampaignCommand.class,
-        EnvelopeCommand.class,
-        CommandLine.HelpCommand.class},
     footer = {
       "",
       "Examples:",
@@ -37,6 +33,11 @@ import picocli.CommandLine.Command;
           + "4 output could not be written (disk full, read-only, no permission)."
     })
 public final class FlexMargin implements Runnable {
+
+  /** The subcommands, in the order the usage help lists them. */
+  private static final List<Class<?>> SUBCOMMANDS = List.of(CheckCommand.class, SweepCommand.class,
+      DemoCommand.class, BenchCommand.class, NotchDesignCommand.class, MarginsCommand.class,
+      SimulateCommand.class, CampaignCommand.class, EnvelopeCommand.class, CommandLine.HelpCommand.class);
 
   /** Exit code: done. */
   public static final int EXIT_OK = 0;
@@ -68,11 +69,15 @@ public final class FlexMargin implements Runnable {
    */
   public static int execute(String[] args, PrintWriter out, PrintWriter err) {
     CommandLine cl = new CommandLine(new FlexMargin());
+    for (Class<?> c : subcommandsFor(args)) {
+      cl.addSubcommand(c);
+    }
     cl.setOut(out);
     cl.setErr(err);
     cl.setExecutionExceptionHandler(new ErrorHandler());
     cl.setParameterExceptionHandler((ex, a) -> {
       err.println("flexmargin: " + ex.getMessage());
+      CommandLine.UnmatchedArgumentException.printSuggestions(ex, err);
       err.println("Try 'flexmargin " + (ex.getCommandLine().getCommandName().equals("flexmargin") ? ""
           : ex.getCommandLine().getCommandName() + " ") + "--help'.");
       return EXIT_BAD_INPUT;
@@ -81,6 +86,22 @@ public final class FlexMargin implements Runnable {
     out.flush();
     err.flush();
     return code;
+  }
+
+  /**
+   * The subcommands whose model is built for these arguments: only the named one when the first
+   * argument names a subcommand (building the model of every command costs more than a small
+   * {@code check}), all of them otherwise (top-level help, {@code help}, a mistyped name).
+   */
+  static List<Class<?>> subcommandsFor(String[] args) {
+    if (args.length > 0) {
+      for (Class<?> c : SUBCOMMANDS) {
+        if (c != CommandLine.HelpCommand.class && c.getAnnotation(Command.class).name().equals(args[0])) {
+          return List.of(c);
+        }
+      }
+    }
+    return SUBCOMMANDS;
   }
 
   /** @param args command-line arguments */

@@ -100,4 +100,31 @@ class CommandLineTest {
       assertTrue(r.out().contains("Example"), cmd + " help lacks examples");
     }
   }
+
+  @Test
+  void topLevelHelpAndHelpCommandListEveryCommand() {
+    String[] names = {"check", "sweep", "demo", "bench", "notch-design", "margins", "simulate", "campaign",
+        "envelope"};
+    for (String[] args : new String[][] {{"--help"}, {"help"}, {}}) {
+      CliRun r = run(args);
+      for (String name : names) {
+        assertTrue(r.out().contains("  " + name + " ") || r.out().contains("  " + name + "\n"),
+            String.join(" ", args) + " does not list " + name + ":\n" + r.out());
+      }
+    }
+    CliRun help = run("help", "sweep");
+    assertEquals(0, help.code());
+    assertTrue(help.out().contains("Usage: flexmargin sweep"), help.out());
+    CliRun typo = run("chek", "case.json");
+    assertEquals(FlexMargin.EXIT_BAD_INPUT, typo.code());
+    assertTrue(typo.err().contains("check"), "a mistyped command suggests the right one: " + typo.err());
+  }
+
+  @Test
+  void onlyTheNamedSubcommandIsBuilt() {
+    assertEquals(java.util.List.of(CheckCommand.class), FlexMargin.subcommandsFor(new String[] {"check", "x"}));
+    assertEquals(10, FlexMargin.subcommandsFor(new String[] {"help", "check"}).size());
+    assertEquals(10, FlexMargin.subcommandsFor(new String[] {"--version"}).size());
+    assertEquals(10, FlexMargin.subcommandsFor(new String[0]).size());
+  }
 }
