@@ -14,11 +14,13 @@ import java.nio.file.Path;
 import java.time.Duration;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.parallel.Isolated;
 
 /**
  * Files that are not files, files that are too large, and content beyond the parser's limits: each
  * is refused at once in our own words, with file and line where there is one.
  */
+@Isolated("changes the input size limit, a system property every reader consults")
 class InputFilesHardeningTest {
   private static final Path GOOD = Path.of("src/test/resources/io");
 
