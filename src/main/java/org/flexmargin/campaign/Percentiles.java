@@ -6,14 +6,14 @@ import java.util.Arrays;
  * Sample percentiles by linear interpolation between order statistics (Hyndman and Fan 1996,
  * definition 7; the default of R and of spreadsheet PERCENTILE): with the n values sorted,
  * h = (n - 1) p and the percentile is x[floor h] + (h - floor h)(x[floor h + 1] - x[floor h]).
- * Infinite values (an onset beyond the sweep) sort last; a percentile that reaches them is
- * infinite.
+ * Infinite values sort to their ends: +infinity (an onset beyond the sweep) last, -infinity (a margin
+ * lost to an unstable closed loop) first; a percentile that reaches one of them is that infinity.
  */
 public final class Percentiles {
   private Percentiles() {}
 
   /**
-   * @param values the sample (NaN not allowed; +infinity allowed), not changed
+   * @param values the sample (NaN not allowed; infinities allowed), not changed
    * @param p probability in [0, 1]
    * @return the p-quantile, NaN for an empty sample
    */
@@ -32,7 +32,10 @@ public final class Percentiles {
     if (frac == 0 || lo + 1 >= x.length) {
       return x[lo];
     }
-    if (Double.isInfinite(x[lo + 1])) {
+    if (x[lo] == Double.NEGATIVE_INFINITY) {
+      return Double.NEGATIVE_INFINITY;
+    }
+    if (x[lo + 1] == Double.POSITIVE_INFINITY) {
       return Double.POSITIVE_INFINITY;
     }
     return x[lo] + frac * (x[lo + 1] - x[lo]);

@@ -53,6 +53,8 @@ final class CampaignCharts {
     XYChart chart = chart(title + ": median (solid) and 5 % / 95 % of the samples (dashed)", y);
     Set<String> used = new HashSet<>();
     List<String> notes = new ArrayList<>();
+    double low = Double.POSITIVE_INFINITY;
+    double high = Double.NEGATIVE_INFINITY;
     for (int k = 0; k < cells.size(); k++) {
       Cell c = cells.get(k);
       MarginBand b = which.apply(summary.cells().get(c.index()));
@@ -60,19 +62,67 @@ final class CampaignCharts {
         continue;
       }
       String label = c.condition().name() + " / " + c.failure().name() + (c.gainFactor() == 1.0 ? "" : " / x" + c.gainFactor());
-      ChartSeries.line(chart, used, label + " 50 %", b.speedEasMps(), b.p50(), ReportStyle.seriesColor(k),
-          ReportStyle.seriesStroke(0));
-      ChartSeries.line(chart, used, label + " 5 %", b.speedEasMps(), b.p5(), ReportStyle.seriesColor(k),
-          ReportStyle.referenceStroke(1.4f, DASH)).setShowInLegend(false);
-      ChartSeries.line(chart, used, label + " 95 %", b.speedEasMps(), b.p95(), ReportStyle.seriesColor(k),
-          ReportStyle.referenceStroke(1.4f, DASH)).setShowInLegend(false);
+      double[] x = b.speedEasMps();
+      String[] names = {" 50 %", " 5 %", " 95 %"};
+      double[][] ys = {b.p50(), b.p5(), b.p95()};
+      for (int j = 0; j < 3; j++) {
+        double[] yj = drawable(ys[j]);
+        if (Arrays.stream(yj).allMatch(Double::isNaN)) {
+          continue;
+        }
+        for (double v : yj) {
+          if (!Double.isNaN(v)) {
+            low = Math.min(low, v);
+            high = Math.max(high, v);
+          }
+        }
+        ChartSeries.line(chart, used, label + names[j], x, yj, ReportStyle.seriesColor(k), j == 0
+            ? ReportStyle.seriesStroke(0) : ReportStyle.referenceStroke(1.4f, DASH)).setShowInLegend(j == 0);
+      }
       int gaps = (int) Arrays.stream(b.counts()).filter(n -> n == 0).count();
       if (gaps > 0) {
         notes.add(label + ": no sample has this margin at " + gaps + " grid speed(s) (no crossover there): gap.");
       }
+      String lost = lostFrom(x, ys);
+      if (!lost.isEmpty()) {
+        notes.add(label + ": " + lost);
+      }
+    }
+    if (low <= high) { // the axis from the drawn points only (the gaps would otherwise upset its range)
+      double pad = Math.max(0.05 * (high - low), 0.5);
+      chart.getStyler().setYAxisMin(low - pad).setYAxisMax(high + pad);
     }
     return new ReportChart(stem, title + " against airspeed: median and 5-95 % band over the Monte Carlo samples of "
-        + "each cell (at each speed, over the samples that have the margin).", chart, notes);
+        + "each cell (at each speed, over the samples that have the margin; a sample whose closed loop is unstable at "
+        + "that speed counts as margin lost, and a band line ends where it reaches such samples).", chart, notes);
+  }
+
+  /** Minus infinity (margin lost) as NaN: a gap in the line. */
+  private static double[] drawable(double[] y) {
+    double[] d = y.clone();
+    for (int i = 0; i < d.length; i++) {
+      if (d[i] == Double.NEGATIVE_INFINITY) {
+        d[i] = Double.NaN;
+      }
+    }
+    return d;
+  }
+
+  /** Where the 5 % line and the median first reach samples with an unstable closed loop; empty when never. */
+  private static String lostFrom(double[] speedEasMps, double[][] p50p5p95) {
+    List<String> parts = new ArrayList<>();
+    String[] what = {"median", "5 % line"};
+    for (int j = 1; j >= 0; j--) {
+      double[] y = p50p5p95[j];
+      for (int i = 0; i < y.length; i++) {
+        if (y[i] == Double.NEGATIVE_INFINITY) {
+          parts.add("the " + what[j] + " is lost from " + String.format(java.util.Locale.ROOT, "%.1f", speedEasMps[i])
+              + " m/s EAS (samples unstable in closed loop reach the " + (j == 1 ? "5 % point" : "median") + ")");
+          break;
+        }
+      }
+    }
+    return String.join("; ", parts);
   }
 
   private static ReportChart firstProblem(CampaignPlan plan, List<SampleOutcome> outcomes) {

@@ -33,4 +33,20 @@ class PercentilesTest {
     assertEquals(inf, Percentiles.of(x, 0.6)); // between 100 and infinity
     assertEquals(80 + 0.2 * 10, Percentiles.of(x, 0.05), 1e-12); // h = 0.2: derived from definition 7
   }
+
+  @Test
+  void lostMarginsSortFirstAndReachMinusInfinity() {
+    double lost = Double.NEGATIVE_INFINITY;
+    double[] x = {12, lost, 10, 14, 16};
+    // sorted: -inf, 10, 12, 14, 16 (definition 7, h = 4 p)
+    assertEquals(lost, Percentiles.of(x, 0.0));
+    assertEquals(lost, Percentiles.of(x, 0.05)); // h = 0.2, between -inf and 10
+    assertEquals(10, Percentiles.of(x, 0.25)); // h = 1
+    assertEquals(12 + 0.4 * 2, Percentiles.of(x, 0.6), 1e-12); // h = 2.4
+    assertEquals(16, Percentiles.of(x, 1.0));
+    double[] both = {lost, 5, Double.POSITIVE_INFINITY};
+    assertEquals(5, Percentiles.of(both, 0.5)); // h = 1
+    assertEquals(lost, Percentiles.of(both, 0.25));
+    assertEquals(Double.POSITIVE_INFINITY, Percentiles.of(both, 0.75));
+  }
 }
