@@ -14,7 +14,7 @@ import org.flexmargin.io.CampaignReader;
 
 /**
  * {@code flexmargin bench campaign}: the cost of one Monte Carlo sample of a demo-sized campaign
- * (the bundled demo's full-payload configuration, 8 modes, loop and requirements, 28 sweep points,
+ * (the bundled demo's notched case, full-payload configuration, 8 modes, loop and requirements, 28 sweep points,
  * modal uncertainty), and the projected time of a 10 000-sample campaign on this machine.
  */
 final class CampaignBench {
@@ -30,7 +30,7 @@ final class CampaignBench {
       DemoCommand.unpack(dir);
       Path file = dir.resolve("bench-campaign.json");
       Files.writeString(file, """
-          {"format": 1, "name": "bench-campaign", "base_case": "demo-case.json", "sweep_points": 28,
+          {"format": 1, "name": "bench-campaign", "base_case": "demo-case-notched.json", "sweep_points": 28,
            "matrix": {"configurations": ["full_payload"]},
            "monte_carlo": {"samples": %d, "seed": 1, "parameters": [
              {"name": "f", "quantity": "modal_frequency",
@@ -53,7 +53,7 @@ final class CampaignBench {
       double perSample = (System.nanoTime() - t0) * 1e-9 / n;
       double cpuPerSample = (BenchCommand.cpuSeconds() - c0) / n;
       int cores = Runtime.getRuntime().availableProcessors();
-      out.printf(Locale.ROOT, "campaign: demo full_payload, 8 modes, loop and requirements, 28 points; %d samples "
+      out.printf(Locale.ROOT, "campaign: notched demo full_payload, 8 modes, loop and requirements, 28 points; %d samples "
           + "after warm-up: %.2f s per sample on one thread, %.2f s CPU per sample (all threads of the process; "
           + "%.2f s CPU would run %d samples in 10 min on %d core(s))%n", n, perSample, cpuPerSample,
           600.0 * cores / PROJECTED_SAMPLES, PROJECTED_SAMPLES, cores);
