@@ -43,7 +43,7 @@ public record GroupSummary(String label, int samples, int passed, int failed, in
         Spread.of("open-loop flutter onset", outcomes, SampleOutcome::openLoopFlutterEasMps),
         Spread.of("closed-loop instability onset", outcomes, SampleOutcome::closedLoopOnsetEasMps),
         Spread.of("loop margin requirement first lost", outcomes, SampleOutcome::marginOnsetEasMps),
-        Spread.of("first problem (lowest of the above)", outcomes, SampleOutcome::criticalEasMps));
+        Spread.of("first problem (lowest of the above and of any failed requirement)", outcomes, SampleOutcome::criticalEasMps));
     MarginBand empty = MarginBand.of(List.of(), MarginCurve::gainMarginDb);
     return new GroupSummary(label, n, pass, count[SampleStatus.FAIL.ordinal()],
         count[SampleStatus.UNRELIABLE.ordinal()], count[SampleStatus.NOT_JUDGED.ordinal()],

@@ -12,8 +12,8 @@ package org.flexmargin.campaign;
  * @param openLoopFlutterEasMps lowest open-loop flutter onset (m/s EAS)
  * @param closedLoopOnsetEasMps lowest closed-loop instability (m/s EAS)
  * @param marginOnsetEasMps lowest speed at which a loop requirement is first lost (m/s EAS)
- * @param criticalEasMps lowest of the instabilities and the margin onset: the sample's first
- *     problem (m/s EAS)
+ * @param criticalEasMps lowest of the instabilities, the margin onset and the lowest speed at which
+ *     any requirement fails (a damping requirement, say): the sample's first problem (m/s EAS)
  * @param governing the governing finding (or the error message), in words
  * @param draws the drawn parameter values, in parameter order
  * @param margins margin curve along the sweep (empty without a loop or on error)

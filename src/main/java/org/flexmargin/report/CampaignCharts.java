@@ -153,7 +153,8 @@ final class CampaignCharts {
     chart.getStyler().setYAxisDecimalPattern("0");
     chart.getStyler().setXAxisDecimalPattern("0.#");
     return new ReportChart("first-problem", "Empirical distribution of each cell's first problem (the lowest of "
-        + "divergence, open- and closed-loop flutter onset and the first lost loop margin requirement): the "
+        + "divergence, open- and closed-loop flutter onset, the first lost loop margin requirement and the lowest "
+        + "speed at which any other requirement fails, such as the damping requirement): the "
         + "percentage of samples whose first problem lies below each airspeed; samples without a problem in "
         + "the sweep never reach the curve.", chart, notes);
   }
