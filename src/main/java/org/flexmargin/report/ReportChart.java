@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import javax.imageio.ImageIO;
 import org.knowm.xchart.BitmapEncoder;
 import org.knowm.xchart.XYChart;
 
@@ -30,6 +31,12 @@ public record ReportChart(String fileStem, String caption, XYChart chart, List<S
     }
     caption = caption == null ? "" : caption;
     notes = List.copyOf(notes);
+  }
+
+  static {
+    // PNG bytes are encoded in memory: without this ImageIO buffers every image in a temporary
+    // file first (the same bytes, plus file-system work)
+    ImageIO.setUseCache(false);
   }
 
   /**
