@@ -8,14 +8,14 @@ package org.flexmargin.loop;
  */
 public record SecondOrderActuator(double naturalFrequencyHz, double dampingRatio)
     implements LinearBlock {
-  /** Validates. */
+  /** Validates (cheaply: the low-pass filter makes one per frequency it is evaluated at). */
   public SecondOrderActuator {
     StateSpace.require(Double.isFinite(naturalFrequencyHz) && naturalFrequencyHz > 0,
         "second_order_actuator.natural_frequency_hz", "a finite value > 0",
-        String.valueOf(naturalFrequencyHz));
+        naturalFrequencyHz);
     StateSpace.require(Double.isFinite(dampingRatio) && dampingRatio > 0,
         "second_order_actuator.damping_ratio", "a finite value > 0",
-        String.valueOf(dampingRatio));
+        dampingRatio);
   }
 
   private double wn() {

@@ -587,4 +587,11 @@ public final class StateSpace {
       throw new InvalidInputException(field, expected, found);
     }
   }
+
+  /** As {@link #require(boolean, String, String, String)}; the value is written out only on failure. */
+  static void require(boolean ok, String field, String expected, double found) {
+    if (!ok) {
+      throw new InvalidInputException(field, expected, String.valueOf(found));
+    }
+  }
 }

@@ -2,6 +2,8 @@ package org.flexmargin.report;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -44,6 +46,38 @@ final class ChartSeries {
     ReportStyle.apply(chart);
     return chart;
   }
+
+  /**
+   * A chart against time in seconds. Its samples are equally spaced, so XChart puts the time ticks
+   * on samples and tries label after label until they fit; the labels are therefore written by
+   * {@link #timeLabel} (a few hundred nanoseconds each) instead of XChart's general number format,
+   * which looks the pattern up afresh for every label.
+   *
+   * @param title chart title
+   * @param yTitle y-axis title
+   * @return the styled chart with the x axis titled "time (s)"
+   */
+  static XYChart timeChart(String title, String yTitle) {
+    XYChart chart = chart(title, "time (s)", yTitle);
+    chart.getStyler().setxAxisTickLabelsFormattingFunction(ChartSeries::timeLabel);
+    return chart;
+  }
+
+  /**
+   * @param seconds a time (s)
+   * @return the time rounded to the microsecond (half away from zero), trailing zeros removed,
+   *     plain notation, no sign on zero: "0.17", "3.4", "12"
+   */
+  static String timeLabel(Double seconds) {
+    if (seconds == null || !Double.isFinite(seconds)) {
+      return "";
+    }
+    BigDecimal r = BigDecimal.valueOf(seconds).setScale(TIME_LABEL_DECIMALS, RoundingMode.HALF_UP);
+    return r.signum() == 0 ? "0" : r.stripTrailingZeros().toPlainString();
+  }
+
+  /** Decimals of a time label (microseconds: finer than any simulation step of a flight-control loop). */
+  static final int TIME_LABEL_DECIMALS = 6;
 
   /** Adds a line series without markers; NaN values are gaps. */
   static XYSeries line(XYChart chart, Set<String> used, String name, double[] x, double[] y, Color color,

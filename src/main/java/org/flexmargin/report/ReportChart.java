@@ -3,11 +3,12 @@ package org.flexmargin.report;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import javax.imageio.ImageIO;
 import org.knowm.xchart.BitmapEncoder;
-import org.knowm.xchart.VectorGraphicsEncoder;
 import org.knowm.xchart.XYChart;
 
 /**
@@ -32,6 +33,12 @@ public record ReportChart(String fileStem, String caption, XYChart chart, List<S
     notes = List.copyOf(notes);
   }
 
+  static {
+    // PNG bytes are encoded in memory: without this ImageIO buffers every image in a temporary
+    // file first (the same bytes, plus file-system work)
+    ImageIO.setUseCache(false);
+  }
+
   /**
    * @return the chart as PNG bytes, at its own pixel size
    * @throws IOException if encoding fails
@@ -41,14 +48,21 @@ public record ReportChart(String fileStem, String caption, XYChart chart, List<S
   }
 
   /**
-   * Writes the chart as SVG (vector graphics through the VectorGraphics2D library that XChart
-   * brings along; no further dependency).
+   * Writes the chart as SVG (UTF-8), drawn by XChart on our {@link SvgCanvas}.
    *
    * @param out stream to write to (not closed)
    * @throws IOException on failure
    */
   public void writeSvg(OutputStream out) throws IOException {
-    VectorGraphicsEncoder.saveVectorGraphic(chart, out, VectorGraphicsEncoder.VectorGraphicsFormat.SVG);
+    out.write(svg().getBytes(StandardCharsets.UTF_8));
+  }
+
+  /** @return the chart as an SVG document, at its own pixel size */
+  public String svg() {
+    SvgCanvas canvas = new SvgCanvas(chart.getWidth(), chart.getHeight());
+    chart.paint(canvas, chart.getWidth(), chart.getHeight());
+    canvas.dispose();
+    return canvas.svg();
   }
 
   /**

@@ -31,7 +31,7 @@ public final class SimulationCharts {
   public static List<ReportChart> of(String stem, String title, TimeHistory h, ActuatorLimits limits) {
     List<ReportChart> out = new ArrayList<>();
     double[] t = h.timesS();
-    XYChart sensors = ChartSeries.chart(title + ": sensors", "time (s)", "sensor signal (deg/s, g)");
+    XYChart sensors = ChartSeries.timeChart(title + ": sensors", "sensor signal (deg/s, g)");
     Set<String> used = new HashSet<>();
     int colour = 0;
     for (int i = 0; i < h.names().size(); i++) {
@@ -53,7 +53,7 @@ public final class SimulationCharts {
       }
     }
     out.add(new ReportChart(stem + "-sensors", title + ": sensor signals and rigid pitch rate.", sensors, List.of()));
-    XYChart elevator = ChartSeries.chart(title + ": elevator", "time (s)", "elevator (deg), rate (deg/s)");
+    XYChart elevator = ChartSeries.timeChart(title + ": elevator", "elevator (deg), rate (deg/s)");
     used = new HashSet<>();
     ChartSeries.line(elevator, used, "command (deg)", t, degrees(h.channel(AircraftSimulationModel.ELEVATOR_COMMAND)),
         ReportStyle.seriesColor(1), DASHED);
@@ -72,7 +72,7 @@ public final class SimulationCharts {
       notes.add("no actuator rate limit given: the actuator is linear");
     }
     out.add(new ReportChart(stem + "-elevator", title + ": elevator command, position and rate.", elevator, notes));
-    XYChart modes = ChartSeries.chart(title + ": modal coordinates", "time (s)", "modal coordinate");
+    XYChart modes = ChartSeries.timeChart(title + ": modal coordinates", "modal coordinate");
     used = new HashSet<>();
     colour = 0;
     for (int i = 0; i < h.names().size(); i++) {

@@ -127,8 +127,8 @@ final class SimulationSection implements ReportSection {
     List<ReportChart> out = new ArrayList<>();
     double limit = comparison.variants().get(0).result().scenario().limits().rateLimitRadPerS();
     for (String input : List.of("doublet", "gust")) {
-      XYChart sensors = ChartSeries.chart(input + ": sensor signals", "time (s)", "sensor signal (deg/s, g)");
-      XYChart rate = ChartSeries.chart(input + ": elevator rate", "time (s)", "elevator rate (deg/s)");
+      XYChart sensors = ChartSeries.timeChart(input + ": sensor signals", "sensor signal (deg/s, g)");
+      XYChart rate = ChartSeries.timeChart(input + ": elevator rate", "elevator rate (deg/s)");
       Set<String> usedS = new HashSet<>();
       Set<String> usedR = new HashSet<>();
       for (int k = 0; k < comparison.variants().size(); k++) {

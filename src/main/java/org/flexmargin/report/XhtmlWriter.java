@@ -22,8 +22,15 @@ public final class XhtmlWriter {
    *     characters other than tab and newline removed (they are not allowed in XML)
    */
   public static String escape(String text) {
-    StringBuilder b = new StringBuilder(text.length() + 16);
-    for (int i = 0; i < text.length(); i++) {
+    int first = 0;
+    while (first < text.length() && plain(text.charAt(first))) {
+      first++;
+    }
+    if (first == text.length()) {
+      return text; // nothing to replace (the common case, e.g. an embedded chart's data URI)
+    }
+    StringBuilder b = new StringBuilder(text.length() + 16).append(text, 0, first);
+    for (int i = first; i < text.length(); i++) {
       char ch = text.charAt(i);
       switch (ch) {
         case '&' -> b.append("&amp;");
@@ -32,13 +39,18 @@ public final class XhtmlWriter {
         case '"' -> b.append("&quot;");
         case '\'' -> b.append("&#39;");
         default -> {
-          if (ch >= 0x20 || ch == '\n' || ch == '\t') {
+          if (plain(ch)) {
             b.append(ch);
           }
         }
       }
     }
     return b.toString();
+  }
+
+  /** @return whether {@link #escape} writes the character as it is */
+  private static boolean plain(char ch) {
+    return ch != '&' && ch != '<' && ch != '>' && ch != '"' && ch != '\'' && (ch >= 0x20 || ch == '\n' || ch == '\t');
   }
 
   /**
