@@ -29,10 +29,10 @@ public record OrthotropicLamina(
 
   /** Validates positive moduli and density and a positive-definite reduced stiffness. */
   public OrthotropicLamina {
-    if (!(e1Pa > 0) || !(e2Pa > 0) || !(g12Pa > 0) || !(densityKgPerM3 > 0)
-        || !Double.isFinite(e1Pa + e2Pa + g12Pa + densityKgPerM3)) {
-      throw new IllegalArgumentException("lamina moduli (Pa) and density (kg/m^3) must be positive and finite");
-    }
+    PositiveFinite.require("lamina E1 (Pa)", e1Pa);
+    PositiveFinite.require("lamina E2 (Pa)", e2Pa);
+    PositiveFinite.require("lamina G12 (Pa)", g12Pa);
+    PositiveFinite.require("lamina density (kg/m^3)", densityKgPerM3);
     if (!Double.isFinite(axisAngleRad) || !Double.isFinite(nu12) || !(nu12 * nu12 * e2Pa / e1Pa < 1)) {
       throw new IllegalArgumentException("lamina needs a finite axis angle (rad) and nu12^2 E2 / E1 < 1; got nu12 "
           + nu12 + ", angle " + axisAngleRad);

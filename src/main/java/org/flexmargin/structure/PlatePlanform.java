@@ -38,11 +38,9 @@ public record PlatePlanform(
     if (!Double.isFinite(rootLeadingEdgeXM) || !Double.isFinite(tipLeadingEdgeXM)) {
       throw new IllegalArgumentException("plate leading edges must be finite (m)");
     }
-    if (!(rootChordM > 0) || !(tipChordM > 0) || !(semispanM > 0)
-        || !Double.isFinite(rootChordM + tipChordM + semispanM)) {
-      throw new IllegalArgumentException("plate chords and semispan must be positive and finite (m); got root "
-          + rootChordM + ", tip " + tipChordM + ", semispan " + semispanM);
-    }
+    PositiveFinite.require("plate root chord (m)", rootChordM);
+    PositiveFinite.require("plate tip chord (m)", tipChordM);
+    PositiveFinite.require("plate semispan (m)", semispanM);
   }
 
   /**

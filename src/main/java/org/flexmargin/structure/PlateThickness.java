@@ -20,9 +20,7 @@ public sealed interface PlateThickness permits PlateThickness.Uniform, PlateThic
   record Uniform(double thicknessM) implements PlateThickness {
     /** Validates a positive finite thickness. */
     public Uniform {
-      if (!(thicknessM > 0) || !Double.isFinite(thicknessM)) {
-        throw new IllegalArgumentException("plate thickness must be positive and finite (m); got " + thicknessM);
-      }
+      PositiveFinite.require("plate thickness (m)", thicknessM);
     }
 
     @Override

@@ -351,28 +351,58 @@ class TrapezoidalPlateRitzTest {
   }
 
   @Test
+  void quarterChordFactoryAndIsotropicFactoryFollowTheirDefinitions() {
+    PlatePlanform p = PlatePlanform.fromQuarterChordSweep(1.0, 0.4, 2.0, Math.toRadians(30));
+    assertEquals(Math.toRadians(30), p.sweepRad(0.25), 1e-14);
+    assertEquals(0, p.rootLeadingEdgeXM(), 0);
+    assertEquals(1.4, p.areaM2(), 1e-15); // 2.0 (1.0 + 0.4) / 2
+    // G = E / (2 (1 + nu))
+    assertEquals(new OrthotropicLamina(E, E, E / 2.6, 0.3, RHO, 0), OrthotropicLamina.isotropic(E, 0.3, RHO));
+  }
+
+  @Test
   void inputsOutsideTheirDomainAreRefused() {
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(0, 0, 0, 1, 1));
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(0, 1, 0, -1, 1));
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(0, 1, 0, 1, 0));
+    assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(0, 1, 0, 1, Double.POSITIVE_INFINITY));
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(Double.NaN, 1, 0, 1, 1));
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(0, 1, Double.POSITIVE_INFINITY, 1, 1));
     assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(0, 1, 1, 0.3, 1, 0));
+    assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 0, 1, 0.3, 1, 0));
+    assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 1, 0, 0.3, 1, 0));
     assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 1, 1, 0.3, 0, 0));
     assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 1, 1, 1.0, 1, 0));
     assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 1, 1, 0.3, 1, Double.NaN));
+    assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 1, 1, Double.NaN, 1, 0));
+    // nu12^2 E2 / E1 = 4.41 x 2 / 8 = 1.1025: no positive-definite stiffness; 1.9 gives 0.9025
+    assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(8e9, 2e9, 1e9, 2.1, 1, 0));
+    assertEquals(1.9, new OrthotropicLamina(8e9, 2e9, 1e9, 1.9, 1, 0).nu12());
     assertThrows(IllegalArgumentException.class, () -> new PlateThickness.Uniform(0));
+    assertThrows(IllegalArgumentException.class, () -> new PlateThickness.Uniform(Double.POSITIVE_INFINITY));
     assertThrows(IllegalArgumentException.class, () -> new PlateThickness.FourDigitSection(0));
     assertThrows(IllegalArgumentException.class, () -> new PlateThickness.FourDigitSection(0.31));
+    assertEquals(0.3, new PlateThickness.FourDigitSection(0.3).thicknessRatio());
     PlatePlanform p = new PlatePlanform(0, 1, 0, 1, 2);
     OrthotropicLamina iso = OrthotropicLamina.isotropic(E, 0.3, RHO);
     PlateThickness t = new PlateThickness.Uniform(T);
     assertThrows(IllegalArgumentException.class, () -> new TrapezoidalPlateRitz(p, iso, t, 0, 3));
+    assertThrows(IllegalArgumentException.class, () -> new TrapezoidalPlateRitz(p, iso, t, 3, 0));
+    assertThrows(IllegalArgumentException.class, () -> new TrapezoidalPlateRitz(p, iso, t, 17, 3));
     assertThrows(IllegalArgumentException.class, () -> new TrapezoidalPlateRitz(p, iso, t, 3, 17));
+    // the limits themselves are accepted
+    assertEquals(16, new TrapezoidalPlateRitz(p, iso, t, 1, 16).frequenciesHz().length);
+    assertEquals(16, new TrapezoidalPlateRitz(p, iso, t, 16, 1).frequenciesHz().length);
     TrapezoidalPlateRitz r = new TrapezoidalPlateRitz(p, iso, t, 2, 3);
     assertThrows(IllegalArgumentException.class, () -> r.gridPoints(1, 3, "g"));
+    assertThrows(IllegalArgumentException.class, () -> r.gridPoints(3, 1, "g"));
+    assertEquals(4, r.gridPoints(2, 2, "g").size());
     assertThrows(IllegalArgumentException.class, () -> r.modeTable("x", 7, r.gridPoints(2, 2, "g"), 0));
-    assertThrows(IllegalArgumentException.class,
+    assertThrows(IllegalArgumentException.class, () -> r.modeTable("x", 0, r.gridPoints(2, 2, "g"), 0));
+    ModeTable all = r.modeTable("x", 6, r.gridPoints(3, 3, "g"), 0);
+    assertEquals(List.of("mode_1", "mode_2", "mode_3", "mode_4", "mode_5", "mode_6"), all.modeNames());
+    IllegalArgumentException still = assertThrows(IllegalArgumentException.class,
         () -> r.modeTable("x", 1, List.of(new SplinePoint("root", 0.5, 0)), 0));
+    assertEquals("mode 1 vanishes at every given point", still.getMessage());
   }
 }
