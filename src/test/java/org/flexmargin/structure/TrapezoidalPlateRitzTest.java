@@ -368,7 +368,8 @@ class TrapezoidalPlateRitzTest {
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(0, 1, 0, 1, Double.POSITIVE_INFINITY));
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(Double.NaN, 1, 0, 1, 1));
     assertThrows(IllegalArgumentException.class, () -> new PlatePlanform(0, 1, Double.POSITIVE_INFINITY, 1, 1));
-    assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(0, 1, 1, 0.3, 1, 0));
+    assertEquals("lamina E1 (Pa) must be positive and finite; got 0.0",
+        assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(0, 1, 1, 0.3, 1, 0)).getMessage());
     assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 0, 1, 0.3, 1, 0));
     assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 1, 0, 0.3, 1, 0));
     assertThrows(IllegalArgumentException.class, () -> new OrthotropicLamina(1, 1, 1, 0.3, 0, 0));
@@ -394,11 +395,13 @@ class TrapezoidalPlateRitzTest {
     assertEquals(16, new TrapezoidalPlateRitz(p, iso, t, 1, 16).frequenciesHz().length);
     assertEquals(16, new TrapezoidalPlateRitz(p, iso, t, 16, 1).frequenciesHz().length);
     TrapezoidalPlateRitz r = new TrapezoidalPlateRitz(p, iso, t, 2, 3);
-    assertThrows(IllegalArgumentException.class, () -> r.gridPoints(1, 3, "g"));
+    assertEquals("a plate grid needs at least 2 x 2 points",
+        assertThrows(IllegalArgumentException.class, () -> r.gridPoints(1, 3, "g")).getMessage());
     assertThrows(IllegalArgumentException.class, () -> r.gridPoints(3, 1, "g"));
     assertEquals(4, r.gridPoints(2, 2, "g").size());
     assertThrows(IllegalArgumentException.class, () -> r.modeTable("x", 7, r.gridPoints(2, 2, "g"), 0));
-    assertThrows(IllegalArgumentException.class, () -> r.modeTable("x", 0, r.gridPoints(2, 2, "g"), 0));
+    assertEquals("mode count 0 outside 1..6",
+        assertThrows(IllegalArgumentException.class, () -> r.modeTable("x", 0, r.gridPoints(2, 2, "g"), 0)).getMessage());
     ModeTable all = r.modeTable("x", 6, r.gridPoints(3, 3, "g"), 0);
     assertEquals(List.of("mode_1", "mode_2", "mode_3", "mode_4", "mode_5", "mode_6"), all.modeNames());
     IllegalArgumentException still = assertThrows(IllegalArgumentException.class,
