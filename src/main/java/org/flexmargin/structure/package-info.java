@@ -4,7 +4,9 @@
  * validation structures of the model package (uniform cantilever wing, typical section) into
  * normal modes ({@link org.flexmargin.model.ModeTable}) and strip-theory aerodynamics
  * ({@link org.flexmargin.model.StripTheorySpec}), so that the rest of the tool sees only mode
- * tables.
+ * tables. {@link org.flexmargin.structure.TrapezoidalPlateRitz} gives the modes of a swept,
+ * tapered orthotropic cantilever plate at chosen points of its planform, for the lattice's
+ * surface spline.
  *
  * <p>Conventions:
  *
