@@ -199,9 +199,17 @@ public final class ClosedLoopSweep {
     int base = (int) Math.floor(t0);
     double lo = Math.max(0, base - EXACT_SEARCH_INTERVALS);
     double hi = Math.min(path.gridPoints() - 1, base + 1 + EXACT_SEARCH_INTERVALS);
-    CriticalPointSolver.Solution s = CriticalPointSolver.solve(
-        t -> ServoMargins.loopAt(model, configuration, loop, path.at(t)).brokenLoop(), t0, w0, lo, hi,
-        EXACT_PARAMETER_TOLERANCE, EXACT_MAX_ITERATIONS);
+    CriticalPointSolver.Solution s;
+    try {
+      s = CriticalPointSolver.solve(
+          t -> ServoMargins.loopAt(model, configuration, loop, path.at(t)).brokenLoop(), t0, w0, lo, hi,
+          EXACT_PARAMETER_TOLERANCE, EXACT_MAX_ITERATIONS);
+    } catch (ArithmeticException e) {
+      // the aircraft's own response is singular there: an open-loop root on the axis that the loop
+      // does not move (a mode the elevator does not drive), so the loop has no crossing of -1 to find
+      return new OnsetRefinement(x, Optional.empty(), Double.NaN, 0, "the exact loop cannot be evaluated at the "
+          + "onset (" + e.getMessage() + "): an open-loop root the loop does not move");
+    }
     if (!s.converged()) {
       return new OnsetRefinement(x, Optional.empty(), s.residual(), s.iterations(), s.remark());
     }

@@ -1,0 +1,218 @@
+package org.flexmargin.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.concurrent.ForkJoinPool;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.EigenDecomposition;
+import org.ejml.data.DMatrixRMaj;
+import org.flexmargin.aero.RationalFits;
+import org.flexmargin.ase.RationalAerodynamics;
+import org.flexmargin.flutter.CrossingKind;
+import org.flexmargin.flutter.FlutterCrossing;
+import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.flutter.PkMethod;
+import org.flexmargin.model.AnalysisOptions;
+import org.flexmargin.model.Configuration;
+import org.flexmargin.model.LoopSpec;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Closed-loop eigenvalues and onsets of the small section of {@link LoopTestSection}: with the
+ * mode uncoupled from the elevator its closed-loop root is the closed-form root of the section
+ * (the loop cannot move it), and its onsets are those of the closed form; with the elevator
+ * driving the mode the onset is a crossing of -1 by the exact loop.
+ */
+class LoopSweepUnitTest {
+  private static final AnalysisOptions OPTIONS = AnalysisOptions.defaults();
+  private static final LoopSpec LOOP = LoopTestSection.loop(0.1);
+  private static final double W_BEND = 2 * Math.PI * LoopTestSection.FREQUENCY_HZ;
+
+  private static ClosedLoopResult sweep(Configuration cfg) {
+    ConfigurationModel m = ConfigurationModel.of(cfg);
+    PlannedPath path = LoopTestSection.path();
+    FlutterSolution ol = new PkMethod().solve(m.system(), path, OPTIONS);
+    return new ClosedLoopSweep().analyse(m, cfg, LOOP, path, ol, OPTIONS);
+  }
+
+  private static ClosedLoopRoot nearest(ClosedLoopPoint p, double re, double im) {
+    ClosedLoopRoot best = null;
+    for (ClosedLoopRoot r : p.roots()) {
+      if (best == null || Math.hypot(r.realPerS() - re, r.imagRadPerS() - im)
+          < Math.hypot(best.realPerS() - re, best.imagRadPerS() - im)) {
+        best = r;
+      }
+    }
+    return best;
+  }
+
+  @Test
+  void aModeTheLoopDoesNotDriveKeepsItsClosedFormRootAndOnsets() {
+    ClosedLoopResult r = sweep(LoopTestSection.configuration(0));
+    assertEquals(9, r.points().size());
+    for (ClosedLoopPoint p : r.points()) {
+      // states: alpha, q, the mode (2), four lag states of one mode, the first-order actuator
+      assertEquals(9, p.states());
+      double[] s = LoopTestSection.modeRoot(p.condition().speedEasMps());
+      ClosedLoopRoot bend = nearest(p, s[0], s[1]);
+      // the least-squares fit holds the linear table to round-off: 1e-5 1/s of a 37.7 rad/s root
+      assertEquals(s[0], bend.realPerS(), 1e-5, "at " + p.condition().speedEasMps());
+      assertEquals(s[1], bend.imagRadPerS(), 1e-5);
+      assertEquals("bend", bend.label());
+      for (int i = 0; i < p.roots().size(); i++) {
+        ClosedLoopRoot x = p.roots().get(i);
+        assertTrue(x.imagRadPerS() >= 0, "only the upper half plane is listed");
+        assertTrue(i == 0 || x.imagRadPerS() >= p.roots().get(i - 1).imagRadPerS(), "ascending frequency");
+        double size = Math.hypot(x.realPerS(), x.imagRadPerS());
+        // roots near no open-loop root: below half the first elastic frequency rigid, above the loop's
+        if (x.label().equals("rigid body + loop")) {
+          assertTrue(size < 0.5 * W_BEND, x.toString());
+        }
+        if (x.label().equals("control loop")) {
+          assertTrue(size >= 0.5 * 37.69, x.toString());
+        }
+      }
+      // the first-order actuator's root (-62.8 1/s open loop) is a loop root
+      assertTrue(p.roots().stream().anyMatch(x -> x.label().equals("control loop")), p.roots().toString());
+    }
+    assertTrue(r.points().get(0).roots().stream().anyMatch(x -> x.label().equals("short period")));
+    // the onset: total damping zero at V_F (closed form); Brent to 0.01 m/s on a grid of 10 m/s
+    FlutterCrossing onset = r.crossings().stream().filter(x -> x.kind() == CrossingKind.FLUTTER_ONSET)
+        .findFirst().orElseThrow();
+    assertEquals(LoopTestSection.flutterSpeedMps(), onset.condition().speedEasMps(), 0.02);
+    assertEquals("bend", onset.branchName());
+    assertEquals(0.0, onset.thresholdG(), 0.0);
+    // at the onset sigma = 0, so the frequency is the in-vacuo one (sigma ~ 1e-4 1/s there: 1e-6 Hz)
+    assertEquals(LoopTestSection.FREQUENCY_HZ, onset.frequencyHz(), 1e-4);
+    // the damping-limit crossing: 2 sigma + 0.03 w_d = 0 (g = 2 sigma / w_d = -0.03), the speed found
+    // independently by Commons Math's Brent solver on the closed-form root
+    double vLimit = new BrentSolver(1e-10).solve(100, v -> {
+      double[] s = LoopTestSection.modeRoot(v);
+      return 2 * s[0] + 0.03 * s[1];
+    }, 10, 40);
+    FlutterCrossing limit = r.crossings().stream().filter(x -> x.kind() == CrossingKind.DAMPING_BELOW_LIMIT)
+        .findFirst().orElseThrow();
+    assertEquals(vLimit, limit.condition().speedEasMps(), 0.02);
+    assertEquals(-0.03, limit.thresholdG(), 0.0);
+    assertEquals(2, r.crossings().size(), r.crossings().toString());
+    assertTrue(r.crossings().get(0).pathParameter() < r.crossings().get(1).pathParameter());
+    // the loop cannot reach the mode, so the exact loop has no crossing of -1 there: said, not hidden
+    assertEquals(1, r.refinements().size());
+    OnsetRefinement refinement = r.refinements().get(0);
+    assertFalse(refinement.confirmed());
+    assertEquals(onset, refinement.rational());
+    // the onset root is the open-loop root itself, on the axis: the aircraft's response is singular
+    assertTrue(refinement.remark().startsWith("the exact loop cannot be evaluated at the onset"), refinement.remark());
+    assertTrue(Double.isNaN(refinement.residual()));
+    assertEquals("closed-loop state space", r.routeOf(onset));
+    assertTrue(r.warnings().stream().anyMatch(w -> w.startsWith(String.format(java.util.Locale.ROOT,
+        "closed-loop flutter onset of bend at %.2f m/s EAS (rational model) not confirmed on the exact loop: ",
+        onset.condition().speedEasMps()))), r.warnings().toString());
+    // every refinement step tracked its one root: the full eigen-solves are the grid points'
+    assertEquals(9, r.eigenSolves());
+    assertTrue(r.fitDescription().contains("4 lag roots"), r.fitDescription());
+    assertTrue(r.assumptions().stream().anyMatch(a -> a.contains("Pade approximation (order 2)")));
+  }
+
+  @Test
+  void aModeDrivenByTheElevatorFluttersWhereTheExactLoopPassesThroughMinusOne() {
+    Configuration cfg = LoopTestSection.configuration(0.02);
+    ConfigurationModel m = ConfigurationModel.of(cfg);
+    PlannedPath path = LoopTestSection.path();
+    ClosedLoopResult r = sweep(cfg);
+    assertEquals(1, r.refinements().size(), r.refinements().toString());
+    OnsetRefinement o = r.refinements().get(0);
+    assertTrue(o.confirmed(), o.remark());
+    FlutterCrossing exact = o.exact().orElseThrow();
+    assertTrue(r.crossings().contains(exact));
+    assertTrue(r.routeOf(exact).startsWith("exact frequency-domain loop"), r.routeOf(exact));
+    assertTrue(r.warnings().isEmpty(), r.warnings().toString());
+    // the loop moves the onset away from the open-loop V_F (61.55 m/s)
+    assertTrue(Math.abs(exact.condition().speedEasMps() - LoopTestSection.flutterSpeedMps()) > 0.1);
+    // 1 + L(j w) = 0 at the exact onset, L evaluated here on its own (Newton's residual 1e-9)
+    double[] l = new double[2];
+    ServoMargins.loopAt(m, cfg, LOOP, exact.condition()).brokenLoop().response(2 * Math.PI * exact.frequencyHz(), l);
+    assertEquals(0.0, Math.hypot(1 + l[0], l[1]), 1e-8);
+    // the rational model is the same loop here (linear table, no delay): both onsets agree to the
+    // Brent tolerance of the rational one (0.01 m/s)
+    assertEquals(exact.condition().speedEasMps(), o.rational().condition().speedEasMps(), 0.02);
+    assertEquals(exact.frequencyHz(), o.rational().frequencyHz(), 1e-4);
+    // and the closed-loop matrix there has a root on the axis at that frequency (Commons Math's
+    // eigen-decomposition; 1e-3 1/s: d(Re s)/dV is ~0.012 1/s per m/s here, times 0.01 m/s, and more)
+    RationalAerodynamics rational = RationalAerodynamics.of(RationalFits.fit(m.system().aero(), OPTIONS.rationalFit(),
+        2.0));
+    DMatrixRMaj a = ServoMargins.loopAt(m, cfg, LOOP, exact.condition()).closedLoop(rational).a();
+    double[][] arr = new double[a.numRows][a.numCols];
+    for (int i = 0; i < a.numRows; i++) {
+      for (int j = 0; j < a.numCols; j++) {
+        arr[i][j] = a.get(i, j);
+      }
+    }
+    EigenDecomposition eig = new EigenDecomposition(new Array2DRowRealMatrix(arr));
+    double best = Double.MAX_VALUE;
+    for (int i = 0; i < arr.length; i++) {
+      best = Math.min(best, Math.hypot(eig.getRealEigenvalues()[i], eig.getImagEigenvalues()[i]
+          - 2 * Math.PI * exact.frequencyHz()));
+    }
+    assertTrue(best < 1e-3, "nearest root " + best);
+  }
+
+  @Test
+  void theResultDoesNotDependOnTheNumberOfThreads() throws Exception {
+    Configuration cfg = LoopTestSection.configuration(-0.02);
+    ForkJoinPool one = new ForkJoinPool(1);
+    try {
+      ClosedLoopResult single = one.submit(() -> sweep(cfg)).get();
+      ClosedLoopResult several = sweep(cfg);
+      assertEquals(single.points(), several.points());
+      assertEquals(single.crossings(), several.crossings());
+      assertEquals(single.refinements(), several.refinements());
+      assertEquals(single.warnings(), several.warnings());
+    } finally {
+      one.shutdown();
+    }
+  }
+
+  @Test
+  void aRealOrNearlyStillRootHasNothingToRefineOnTheExactLoop() {
+    Configuration cfg = LoopTestSection.configuration(0.02);
+    ConfigurationModel m = ConfigurationModel.of(cfg);
+    PlannedPath path = LoopTestSection.path();
+    for (double hz : new double[] {0.0, 0.5 * ServoMargins.MIN_FREQUENCY_HZ}) {
+      FlutterCrossing x = new FlutterCrossing(0, "rigid body + loop", CrossingKind.FLUTTER_ONSET, 2.5, path.at(2.5), hz,
+          0.0, 3, 0.001);
+      OnsetRefinement r = ClosedLoopSweep.onExactLoop(m, cfg, LOOP, path, x);
+      assertFalse(r.confirmed());
+      assertEquals(0, r.iterations());
+      assertTrue(Double.isNaN(r.residual()));
+      assertTrue(r.remark().startsWith("a real closed-loop root (no oscillation)"), r.remark());
+    }
+    // at the lowest analysed frequency itself Newton is tried (and finds nothing there)
+    FlutterCrossing low = new FlutterCrossing(0, "rigid body + loop", CrossingKind.FLUTTER_ONSET, 2.5, path.at(2.5),
+        ServoMargins.MIN_FREQUENCY_HZ, 0.0, 3, 0.001);
+    OnsetRefinement tried = ClosedLoopSweep.onExactLoop(m, cfg, LOOP, path, low);
+    assertFalse(tried.confirmed());
+    assertTrue(tried.iterations() > 0, tried.remark());
+    assertFalse(tried.remark().startsWith("a real closed-loop root"), tried.remark());
+  }
+
+  @Test
+  void theNearestEigenvalueIsPicked() {
+    org.flexmargin.loop.Eigenvalues e = new org.flexmargin.loop.Eigenvalues(new double[] {-1, -0.2, -0.2, -5},
+        new double[] {0, 10, -10, 3});
+    double[] out = new double[2];
+    ClosedLoopSweep.nearest(e, -0.3, 9, out);
+    assertEquals(-0.2, out[0], 0.0);
+    assertEquals(10, out[1], 0.0);
+    ClosedLoopSweep.nearest(e, -4, 2, out);
+    assertEquals(-5, out[0], 0.0);
+    assertEquals(3, out[1], 0.0);
+    // the first of two equally near roots stays
+    ClosedLoopSweep.nearest(new org.flexmargin.loop.Eigenvalues(new double[] {-1, 1}, new double[] {0, 0}), 0, 0, out);
+    assertEquals(-1, out[0], 0.0);
+  }
+}
