@@ -33,10 +33,21 @@ class LoopSweepUnitTest {
   private static final double W_BEND = 2 * Math.PI * LoopTestSection.FREQUENCY_HZ;
 
   private static ClosedLoopResult sweep(Configuration cfg) {
+    return sweep(cfg, LoopTestSection.path(), OPTIONS);
+  }
+
+  private static ClosedLoopResult sweep(Configuration cfg, PlannedPath path, AnalysisOptions options) {
     ConfigurationModel m = ConfigurationModel.of(cfg);
-    PlannedPath path = LoopTestSection.path();
-    FlutterSolution ol = new PkMethod().solve(m.system(), path, OPTIONS);
-    return new ClosedLoopSweep().analyse(m, cfg, LOOP, path, ol, OPTIONS);
+    FlutterSolution ol = new PkMethod().solve(m.system(), path, options);
+    return new ClosedLoopSweep().analyse(m, cfg, LOOP, path, ol, options);
+  }
+
+  /** Speed where the mode's g = 2 sigma / w_d reaches -0.03 (Commons Math's Brent solver on the closed form). */
+  private static double dampingLimitSpeed() {
+    return new BrentSolver(1e-10).solve(100, v -> {
+      double[] s = LoopTestSection.modeRoot(v);
+      return 2 * s[0] + 0.03 * s[1];
+    }, 10, 40);
   }
 
   private static ClosedLoopRoot nearest(ClosedLoopPoint p, double re, double im) {
@@ -90,14 +101,16 @@ class LoopSweepUnitTest {
     assertEquals(LoopTestSection.FREQUENCY_HZ, onset.frequencyHz(), 1e-4);
     // the damping-limit crossing: 2 sigma + 0.03 w_d = 0 (g = 2 sigma / w_d = -0.03), the speed found
     // independently by Commons Math's Brent solver on the closed-form root
-    double vLimit = new BrentSolver(1e-10).solve(100, v -> {
-      double[] s = LoopTestSection.modeRoot(v);
-      return 2 * s[0] + 0.03 * s[1];
-    }, 10, 40);
+    double vLimit = dampingLimitSpeed();
     FlutterCrossing limit = r.crossings().stream().filter(x -> x.kind() == CrossingKind.DAMPING_BELOW_LIMIT)
         .findFirst().orElseThrow();
     assertEquals(vLimit, limit.condition().speedEasMps(), 0.02);
     assertEquals(-0.03, limit.thresholdG(), 0.0);
+    assertEquals(LoopTestSection.FREQUENCY_HZ, limit.frequencyHz(), 0.01);
+    // Brent's tolerance on the path parameter: 0.01 m/s over a 10 m/s interval
+    assertEquals(0.001, limit.bracketWidth(), 1e-15);
+    assertEquals(0.001, onset.bracketWidth(), 1e-15);
+    assertTrue(limit.evaluations() > 1 && limit.evaluations() < 60, "evaluations " + limit.evaluations());
     assertEquals(2, r.crossings().size(), r.crossings().toString());
     assertTrue(r.crossings().get(0).pathParameter() < r.crossings().get(1).pathParameter());
     // the loop cannot reach the mode, so the exact loop has no crossing of -1 there: said, not hidden
@@ -114,7 +127,8 @@ class LoopSweepUnitTest {
         onset.condition().speedEasMps()))), r.warnings().toString());
     // every refinement step tracked its one root: the full eigen-solves are the grid points'
     assertEquals(9, r.eigenSolves());
-    assertTrue(r.fitDescription().contains("4 lag roots"), r.fitDescription());
+    // fitted up to k = 1.5 w_max b / V_min = 1.5 x 2 pi 6 x 0.5 / 10 = 2.827 (below the table's 4)
+    assertTrue(r.fitDescription().contains("4 lag roots, k from 0 to 2.827"), r.fitDescription());
     assertTrue(r.assumptions().stream().anyMatch(a -> a.contains("Pade approximation (order 2)")));
   }
 
@@ -145,13 +159,7 @@ class LoopSweepUnitTest {
     // eigen-decomposition; 1e-3 1/s: d(Re s)/dV is ~0.012 1/s per m/s here, times 0.01 m/s, and more)
     RationalAerodynamics rational = RationalAerodynamics.of(RationalFits.fit(m.system().aero(), OPTIONS.rationalFit(),
         2.0));
-    DMatrixRMaj a = ServoMargins.loopAt(m, cfg, LOOP, exact.condition()).closedLoop(rational).a();
-    double[][] arr = new double[a.numRows][a.numCols];
-    for (int i = 0; i < a.numRows; i++) {
-      for (int j = 0; j < a.numCols; j++) {
-        arr[i][j] = a.get(i, j);
-      }
-    }
+    double[][] arr = toArray(ServoMargins.loopAt(m, cfg, LOOP, exact.condition()).closedLoop(rational).a());
     EigenDecomposition eig = new EigenDecomposition(new Array2DRowRealMatrix(arr));
     double best = Double.MAX_VALUE;
     for (int i = 0; i < arr.length; i++) {
@@ -163,11 +171,17 @@ class LoopSweepUnitTest {
 
   @Test
   void theResultDoesNotDependOnTheNumberOfThreads() throws Exception {
+    // without a damping limit only the g = 0 crossing is sought
     Configuration cfg = LoopTestSection.configuration(-0.02);
+    AnalysisOptions noLimit = new AnalysisOptions(OPTIONS.method(), 0.0, OPTIONS.convergenceTolerance(),
+        OPTIONS.maxIterations(), OPTIONS.onsetSpeedToleranceMps(), OPTIONS.kMethodMinReducedFrequency(),
+        OPTIONS.kMethodMaxReducedFrequency(), OPTIONS.kMethodPoints());
     ForkJoinPool one = new ForkJoinPool(1);
     try {
-      ClosedLoopResult single = one.submit(() -> sweep(cfg)).get();
-      ClosedLoopResult several = sweep(cfg);
+      ClosedLoopResult single = one.submit(() -> sweep(cfg, LoopTestSection.path(), noLimit)).get();
+      ClosedLoopResult several = sweep(cfg, LoopTestSection.path(), noLimit);
+      assertEquals(1, several.crossings().size(), several.crossings().toString());
+      assertEquals(CrossingKind.FLUTTER_ONSET, several.crossings().get(0).kind());
       assertEquals(single.points(), several.points());
       assertEquals(single.crossings(), several.crossings());
       assertEquals(single.refinements(), several.refinements());
@@ -198,6 +212,74 @@ class LoopSweepUnitTest {
     assertFalse(tried.confirmed());
     assertTrue(tried.iterations() > 0, tried.remark());
     assertFalse(tried.remark().startsWith("a real closed-loop root"), tried.remark());
+  }
+
+  @Test
+  void downTheSpeedsTheSameSpeedsAreARecoveryAndADampingRise() {
+    // the points of the path in reverse order, 90 down to 10 m/s EAS at sea level
+    List<org.flexmargin.model.SweepPoint> down = new java.util.ArrayList<>();
+    for (int v = 90; v >= 10; v -= 10) {
+      down.add(new org.flexmargin.model.SweepPoint(0, v, org.flexmargin.model.AirspeedKind.EQUIVALENT));
+    }
+    PlannedPath path = new PlannedPath(new org.flexmargin.model.PointList(down));
+    ClosedLoopResult r = sweep(LoopTestSection.configuration(0), path, OPTIONS);
+    assertEquals(2, r.crossings().size(), r.crossings().toString());
+    FlutterCrossing recovery = r.crossings().get(0);
+    assertEquals(CrossingKind.FLUTTER_RECOVERY, recovery.kind());
+    assertEquals(LoopTestSection.flutterSpeedMps(), recovery.condition().speedEasMps(), 0.02);
+    FlutterCrossing rise = r.crossings().get(1);
+    assertEquals(CrossingKind.DAMPING_ABOVE_LIMIT, rise.kind());
+    assertEquals(dampingLimitSpeed(), rise.condition().speedEasMps(), 0.02);
+    assertTrue(r.warnings().stream().anyMatch(w -> w.startsWith("closed-loop flutter recovery of bend at ")),
+        r.warnings().toString());
+  }
+
+  @Test
+  void aRootBetweenTwoEquallyNearRootsIsTakenFromTheFullSolve() {
+    // a real shift halfway along a conjugate pair is equally near both: inverse iteration cannot
+    // settle, so the full eigen-solve (counted) gives the nearest root: the short period at 10 m/s,
+    // checked against Commons Math's eigen-decomposition of the same matrix
+    Configuration cfg = LoopTestSection.configuration(0);
+    ConfigurationModel m = ConfigurationModel.of(cfg);
+    PlannedPath path = LoopTestSection.path();
+    RationalAerodynamics rational = RationalAerodynamics.of(RationalFits.fit(m.system().aero(), OPTIONS.rationalFit(),
+        2.827));
+    DMatrixRMaj a = ServoMargins.loopAt(m, cfg, LOOP, path.at(0)).closedLoop(rational).a();
+    EigenDecomposition eig = new EigenDecomposition(new Array2DRowRealMatrix(toArray(a)));
+    double[] re = eig.getRealEigenvalues();
+    double[] im = eig.getImagEigenvalues();
+    int sp = -1;
+    for (int i = 0; i < re.length; i++) {
+      // the slow oscillatory pair: the short period (|s| < 1 1/s at 10 m/s)
+      if (im[i] > 0 && Math.hypot(re[i], im[i]) < 1) {
+        sp = i;
+      }
+    }
+    assertTrue(sp >= 0);
+    double[] out = new double[2];
+    int[] solves = {0};
+    ClosedLoopSweep.rootNear(m, cfg, LOOP, path.at(0), rational, re[sp], 0, re[sp], 0, 0.5, out, solves);
+    assertEquals(1, solves[0], "one full solve");
+    // round-off of two eigen-solvers on a 9 x 9 matrix
+    assertEquals(re[sp], out[0], 1e-9);
+    assertEquals(im[sp], Math.abs(out[1]), 1e-9);
+    // a shift near one root alone is tracked without a full solve
+    int[] tracked = {0};
+    ClosedLoopSweep.rootNear(m, cfg, LOOP, path.at(0), rational, re[sp], im[sp] + 0.01, re[sp], im[sp] - 0.01, 0.5,
+        out, tracked);
+    assertEquals(0, tracked[0]);
+    assertEquals(re[sp], out[0], 1e-9);
+    assertEquals(im[sp], out[1], 1e-9);
+  }
+
+  private static double[][] toArray(DMatrixRMaj a) {
+    double[][] arr = new double[a.numRows][a.numCols];
+    for (int i = 0; i < a.numRows; i++) {
+      for (int j = 0; j < a.numCols; j++) {
+        arr[i][j] = a.get(i, j);
+      }
+    }
+    return arr;
   }
 
   @Test
