@@ -186,6 +186,24 @@ class RateSaturationUnitTest {
   }
 
   @Test
+  void alongTheSweepThePeakFallbackUsesTheClearanceOfThatPointOnly() {
+    // no crossover in the band at either point; the clearance assessed point 0 only (band edge
+    // 5 Hz, peak of mode "bend" at 9 Hz): a line at point 0, none at point 1
+    FlutterSolution f = solution(branch("a", new double[] {5, 5}, new boolean[] {true, true}));
+    ServoPoint sp = point(crossover(2, 6));
+    ClosedLoopResult cl = new ClosedLoopResult(List.of(closedPoint(-1), closedPoint(-1)), List.of(), "", 0, List.of(),
+        List.of());
+    ClearanceResult clearance = new ClearanceResult(List.of(assessment(5, mode("bend", -3, 9))), List.of(), null, "",
+        List.of());
+    ConfigurationResult c = result(f, new double[] {4}, new ServoResult(List.of(sp, sp), cl), clearance);
+    List<Optional<RateSaturation.Line>> lines = RateSaturation.along(c, loop(ACTUATOR));
+    assertEquals(2, lines.size());
+    assertEquals(9, lines.get(0).orElseThrow().frequencyHz(), 0.0);
+    assertEquals(openLine(9), lines.get(0).orElseThrow().commandAmplitudeRad(), 1e-14 * openLine(9));
+    assertTrue(lines.get(1).isEmpty());
+  }
+
+  @Test
   void noLineWithoutALoopOrARateLimit() {
     FlutterSolution f = solution(branch("a", new double[] {5}, new boolean[] {true}));
     ServoPoint sp = point(crossover(6, 2));
