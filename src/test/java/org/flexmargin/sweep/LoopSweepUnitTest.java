@@ -192,6 +192,28 @@ class LoopSweepUnitTest {
   }
 
   @Test
+  void anOnsetWhereTheFitIsPoorIsNamedInAWarning() {
+    // the real part of the table alternates in sign from node to node (0, 0.5, -0.5, 0.5, 0 at
+    // k = 0, 0.5, 1, 2, 4): no rational function with four lag roots follows that within 1 %
+    double[] ks = {0, 0.5, 1, 2, 4};
+    double[] wiggle = {0, 0.5, -0.5, 0.5, 0};
+    double[][][] re = new double[ks.length][1][1];
+    double[][][] im = new double[ks.length][1][1];
+    for (int i = 0; i < ks.length; i++) {
+      re[i][0][0] = wiggle[i];
+      im[i][0][0] = LoopTestSection.DAMPING_SLOPE_M2 * ks[i];
+    }
+    Configuration smooth = LoopTestSection.configuration(0.02);
+    Configuration cfg = new Configuration("wiggly", smooth.structure(), new org.flexmargin.model.GafTable(
+        LoopTestSection.SEMICHORD_M, 0.0, List.of("bend"), ks, re, im), smooth.rigidBody());
+    ClosedLoopResult r = sweep(cfg);
+    FlutterCrossing onset = r.refinements().get(0).rational();
+    assertTrue(r.warnings().stream().anyMatch(w -> w.startsWith("rational fit error") && w.contains(String.format(
+        java.util.Locale.ROOT, "of the closed-loop flutter onset of %s at %.2f m/s EAS exceeds 1.00 %%",
+        onset.branchName(), onset.condition().speedEasMps()))), r.warnings().toString());
+  }
+
+  @Test
   void aRealOrNearlyStillRootHasNothingToRefineOnTheExactLoop() {
     Configuration cfg = LoopTestSection.configuration(0.02);
     ConfigurationModel m = ConfigurationModel.of(cfg);
@@ -270,6 +292,21 @@ class LoopSweepUnitTest {
     assertEquals(0, tracked[0]);
     assertEquals(re[sp], out[0], 1e-9);
     assertEquals(im[sp], out[1], 1e-9);
+    // between the short period and the mode's root (37.7 rad/s) the point at a tenth of the way is
+    // nearest the short period, at nine tenths nearest the mode's root
+    int bend = -1;
+    for (int i = 0; i < re.length; i++) {
+      if (im[i] > 30) {
+        bend = i;
+      }
+    }
+    assertTrue(bend >= 0);
+    ClosedLoopSweep.rootNear(m, cfg, LOOP, path.at(0), rational, re[sp], im[sp], re[bend], im[bend], 0.1, out, tracked);
+    assertEquals(re[sp], out[0], 1e-9);
+    assertEquals(im[sp], out[1], 1e-9);
+    ClosedLoopSweep.rootNear(m, cfg, LOOP, path.at(0), rational, re[sp], im[sp], re[bend], im[bend], 0.9, out, tracked);
+    assertEquals(re[bend], out[0], 1e-9);
+    assertEquals(im[bend], out[1], 1e-9);
   }
 
   private static double[][] toArray(DMatrixRMaj a) {

@@ -117,11 +117,11 @@ class ServoMarginsUnitTest {
   @Test
   void aNotchIsCheckedAtTheConvergedModesAndAtTheRigidCrossover() {
     // point 1: mode a converged at 6 Hz, mode b lost (its 2 Hz must not count); first mode 6 Hz, so
-    // the rigid crossover is the highest below 3 Hz: 2.5 Hz (4 Hz is an elastic crossing)
+    // the rigid crossover is the highest below 3 Hz: 2.5 Hz (3 Hz itself and 4 Hz count as elastic)
     FlutterSolution ol = solution(
         branch("a", new double[] {6, 6}, new double[] {0.02, 0.02}, new boolean[] {true, true}),
         branch("b", new double[] {2, 2}, new double[] {0.02, 0.02}, new boolean[] {true, false}));
-    List<NotchCheck> checks = ServoMargins.notchChecks(twoPaths(), ol, 1, crossovers(1, 2.5, 4));
+    List<NotchCheck> checks = ServoMargins.notchChecks(twoPaths(), ol, 1, crossovers(1, 2.5, 3, 4));
     assertEquals(1, checks.size());
     NotchCheck c = checks.get(0);
     assertEquals(1, c.path());
@@ -178,6 +178,8 @@ class ServoMarginsUnitTest {
       // with a single feedback path the loop broken at that path is the same return ratio
       assertEquals(1, sp.pathMargins().size());
       LoopMarginResult atPath = sp.pathMargins().get(0);
+      assertEquals(r.omegaMinRadPerS(), atPath.omegaMinRadPerS(), 0.0);
+      assertEquals(r.omegaMaxRadPerS(), atPath.omegaMaxRadPerS(), 0.0);
       assertEquals(r.gainCrossovers().size(), atPath.gainCrossovers().size());
       assertEquals(r.phaseCrossovers().size(), atPath.phaseCrossovers().size());
       for (int i = 0; i < r.gainCrossovers().size(); i++) {
