@@ -264,7 +264,7 @@ public final class ClosedLoopSweep {
   }
 
   /** Nearest open-loop root: p-k structural root at grid point p, or the rigid short period. */
-  private static String label(double re, double im, FlutterSolution openLoop, int p, double[] shortPeriod) {
+  static String label(double re, double im, FlutterSolution openLoop, int p, double[] shortPeriod) {
     double lowestStructural = Double.MAX_VALUE;
     for (BranchCurve b : openLoop.branches()) {
       if (p < b.size() && b.converged()[p]) {
