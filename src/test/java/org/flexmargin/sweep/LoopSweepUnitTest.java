@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.concurrent.ForkJoinPool;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
 import org.ejml.data.DMatrixRMaj;
@@ -44,10 +43,7 @@ class LoopSweepUnitTest {
 
   /** Speed where the mode's g = 2 sigma / w_d reaches -0.03 (Commons Math's Brent solver on the closed form). */
   private static double dampingLimitSpeed() {
-    return new BrentSolver(1e-10).solve(100, v -> {
-      double[] s = LoopTestSection.modeRoot(v);
-      return 2 * s[0] + 0.03 * s[1];
-    }, 10, 40);
+    return LoopTestSection.dampingLimitSpeedMps(LoopTestSection.FREQUENCY_HZ, LoopTestSection.DAMPING_SLOPE_M2);
   }
 
   private static ClosedLoopRoot nearest(ClosedLoopPoint p, double re, double im) {
@@ -192,6 +188,60 @@ class LoopSweepUnitTest {
   }
 
   @Test
+  void crossingsOfTwoModesComeInSpeedOrder() {
+    // bend: limit 15.4, onset 61.5 m/s; twist: limit and onset earlier (closed forms), so the
+    // crossings of the two branches interleave along the path
+    ClosedLoopResult r = sweep(LoopTestSection.twoModes());
+    assertEquals(4, r.crossings().size(), r.crossings().toString());
+    double twistLimit = LoopTestSection.dampingLimitSpeedMps(LoopTestSection.TWIST_HZ, LoopTestSection.TWIST_SLOPE_M2);
+    double twistOnset = LoopTestSection.flutterSpeedMps(LoopTestSection.TWIST_HZ, LoopTestSection.TWIST_SLOPE_M2);
+    double[] expected = {twistLimit, dampingLimitSpeed(), twistOnset, LoopTestSection.flutterSpeedMps()};
+    String[] names = {"twist", "bend", "twist", "bend"};
+    for (int i = 0; i < 4; i++) {
+      // Brent to 0.01 m/s along the path
+      assertEquals(expected[i], r.crossings().get(i).condition().speedEasMps(), 0.02, "crossing " + i);
+      assertEquals(names[i], r.crossings().get(i).branchName());
+    }
+    assertEquals(2, r.refinements().size());
+    assertTrue(r.refinements().get(0).rational().pathParameter() < r.refinements().get(1).rational().pathParameter());
+  }
+
+  @Test
+  void anExactCrossingFarFromTheRootsFrequencyIsNotTakenForIt() {
+    // gain 3 with a 0.05 s delay: the rigid loop itself goes unstable near 4.1 Hz as the speed
+    // (and with it the pitch response) grows; the exact loop confirms it
+    LoopSpec delayed = LoopTestSection.loop(3, 0.05);
+    Configuration cfg = LoopTestSection.configuration(0);
+    ConfigurationModel m = ConfigurationModel.of(cfg);
+    PlannedPath path = LoopTestSection.path();
+    FlutterSolution ol = new PkMethod().solve(m.system(), path, OPTIONS);
+    ClosedLoopResult r = new ClosedLoopSweep().analyse(m, cfg, delayed, path, ol, OPTIONS);
+    OnsetRefinement loopOnset = r.refinements().stream().filter(OnsetRefinement::confirmed).findFirst().orElseThrow();
+    FlutterCrossing exact = loopOnset.exact().orElseThrow();
+    double[] l = new double[2];
+    ServoMargins.loopAt(m, cfg, delayed, exact.condition()).brokenLoop().response(2 * Math.PI * exact.frequencyHz(), l);
+    assertEquals(0.0, Math.hypot(1 + l[0], l[1]), 1e-8);
+    // started 15 % off in frequency Newton finds the same crossing, which lies within 20 % of the
+    // start: confirmed; started 30 % off it finds it too, but that is too far to be the same root
+    FlutterCrossing x = loopOnset.rational();
+    for (double factor : new double[] {0.85, 1.15, 0.7, 1.3}) {
+      FlutterCrossing start = new FlutterCrossing(x.branch(), x.branchName(), x.kind(), x.pathParameter(),
+          x.condition(), factor * x.frequencyHz(), 0.0, x.evaluations(), x.bracketWidth());
+      OnsetRefinement o = ClosedLoopSweep.onExactLoop(m, cfg, delayed, path, start);
+      if (Math.abs(factor - 1) < 0.2) {
+        assertTrue(o.confirmed(), o.remark());
+        assertEquals(exact.frequencyHz(), o.exact().orElseThrow().frequencyHz(), 1e-6);
+        assertEquals(exact.pathParameter(), o.exact().orElseThrow().pathParameter(), 1e-6);
+      } else {
+        assertFalse(o.confirmed());
+        assertTrue(o.remark().startsWith(String.format(java.util.Locale.ROOT, "the nearest crossing of -1 by the "
+            + "exact loop is at %.3f Hz, not near the root's %.3f Hz", exact.frequencyHz(), start.frequencyHz())),
+            o.remark());
+      }
+    }
+  }
+
+  @Test
   void anOnsetWhereTheFitIsPoorIsNamedInAWarning() {
     // the real part of the table alternates in sign from node to node (0, 0.5, -0.5, 0.5, 0 at
     // k = 0, 0.5, 1, 2, 4): no rational function with four lag roots follows that within 1 %
@@ -233,7 +283,7 @@ class LoopSweepUnitTest {
     OnsetRefinement tried = ClosedLoopSweep.onExactLoop(m, cfg, LOOP, path, low);
     assertFalse(tried.confirmed());
     assertTrue(tried.iterations() > 0, tried.remark());
-    assertFalse(tried.remark().startsWith("a real closed-loop root"), tried.remark());
+    assertTrue(tried.remark().contains("did not converge"), tried.remark());
   }
 
   @Test

@@ -39,21 +39,64 @@ final class LoopTestSection {
 
   private LoopTestSection() {}
 
-  /** @return V_F = 4 zeta w M / (rho c b), m/s (TAS = EAS at sea level) */
+  /** Second mode of {@link #twoModes()}: "twist", 9 Hz, zeta 0.02, 10 kg. */
+  static final double TWIST_HZ = 9.0;
+  /** Its damping slope (m^2): V_F = 4 x 0.02 x 2 pi 9 x 10 / (1.225 x 1.6413 x 0.5) = 45.0 m/s. */
+  static final double TWIST_SLOPE_M2 = 1.6413;
+
+  /** @return V_F = 4 zeta w M / (rho c b) of "bend", m/s (TAS = EAS at sea level) */
   static double flutterSpeedMps() {
-    return 4 * ZETA * 2 * Math.PI * FREQUENCY_HZ * MASS_KG / (RHO * DAMPING_SLOPE_M2 * SEMICHORD_M);
+    return flutterSpeedMps(FREQUENCY_HZ, DAMPING_SLOPE_M2);
+  }
+
+  /** @return V_F = 4 zeta w M / (rho c b) of a mode with zeta 0.02 and 10 kg, m/s */
+  static double flutterSpeedMps(double frequencyHz, double slopeM2) {
+    return 4 * ZETA * 2 * Math.PI * frequencyHz * MASS_KG / (RHO * slopeM2 * SEMICHORD_M);
+  }
+
+  /** @return the root of "bend" at a speed ({@link #modeRoot(double, double, double)}) */
+  static double[] modeRoot(double speedMps) {
+    return modeRoot(FREQUENCY_HZ, DAMPING_SLOPE_M2, speedMps);
   }
 
   /**
-   * The mode's root s = sigma + j w_d at a speed, from M s^2 + (2 zeta w M - rho V c b / 2) s + w^2 M = 0.
+   * A mode's root s = sigma + j w_d at a speed, from M s^2 + (2 zeta w M - rho V c b / 2) s + w^2 M = 0
+   * (zeta 0.02, M = 10 kg).
    *
    * @return {sigma, w_d}
    */
-  static double[] modeRoot(double speedMps) {
-    double w = 2 * Math.PI * FREQUENCY_HZ;
-    double damping = 2 * ZETA * w * MASS_KG - 0.5 * RHO * speedMps * DAMPING_SLOPE_M2 * SEMICHORD_M;
+  static double[] modeRoot(double frequencyHz, double slopeM2, double speedMps) {
+    double w = 2 * Math.PI * frequencyHz;
+    double damping = 2 * ZETA * w * MASS_KG - 0.5 * RHO * speedMps * slopeM2 * SEMICHORD_M;
     double sigma = -damping / (2 * MASS_KG);
     return new double[] {sigma, Math.sqrt(w * w - sigma * sigma)};
+  }
+
+  /** @return a speed where the mode's g = 2 sigma / w_d is -0.03 (Commons Math's Brent solver, 10 to 40 m/s) */
+  static double dampingLimitSpeedMps(double frequencyHz, double slopeM2) {
+    return new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-10).solve(100, v -> {
+      double[] s = modeRoot(frequencyHz, slopeM2, v);
+      return 2 * s[0] + 0.03 * s[1];
+    }, 1, 40);
+  }
+
+  /**
+   * "bend" and a second mode "twist" with its own damping force (the table diagonal), both
+   * uncoupled from the loop.
+   */
+  static Configuration twoModes() {
+    ModeTable modes = new ModeTable("section", List.of(
+        new ElasticMode("bend", FREQUENCY_HZ, ZETA, MASS_KG, Map.of("gyro", new ShapeValue(0.0, 0.05))),
+        new ElasticMode("twist", TWIST_HZ, ZETA, MASS_KG, Map.of("gyro", new ShapeValue(0.0, 0.02)))));
+    double[] ks = {0, 0.5, 1, 2, 4};
+    double[][][] re = new double[ks.length][2][2];
+    double[][][] im = new double[ks.length][2][2];
+    for (int i = 0; i < ks.length; i++) {
+      im[i][0][0] = DAMPING_SLOPE_M2 * ks[i];
+      im[i][1][1] = TWIST_SLOPE_M2 * ks[i];
+    }
+    GafTable forces = new GafTable(SEMICHORD_M, 0.0, List.of("bend", "twist"), ks, re, im);
+    return new Configuration("section", modes, forces, configuration(0).rigidBody());
   }
 
   static ModeTable modes() {
@@ -85,9 +128,14 @@ final class LoopTestSection {
 
   /** Pitch-rate gyro at the station "gyro", gain kp (rad per rad/s), 10 Hz first-order actuator. */
   static LoopSpec loop(double kp) {
+    return loop(kp, 0.0);
+  }
+
+  /** The same with a computational delay (s), Pade order 2 in the state space. */
+  static LoopSpec loop(double kp, double delayS) {
     return new LoopSpec(new ActuatorSpec(ActuatorOrder.FIRST, 10, 0.7, 1.0, 0.35),
         List.of(new org.flexmargin.model.SensorSpec("gyro", SensorKind.PITCH_RATE_GYRO, "gyro", 0, 0)),
-        List.of(new FeedbackPath("gyro", kp, 0, List.of(), null)), 0, 0, 2);
+        List.of(new FeedbackPath("gyro", kp, 0, List.of(), null)), delayS, 0, 2);
   }
 
   /** @return sea level, 10 to 90 m/s EAS in 10 m/s steps */
