@@ -118,6 +118,13 @@ class RateSaturationUnitTest {
   }
 
   @Test
+  void ofTwoEqualPeaksTheFirstListedIsUsed() {
+    ServoPoint p = point();
+    PointAssessment a = assessment(7, mode("wing_bending", -4, 14), mode("fuselage_bending", -4, 9));
+    assertEquals(14, RateSaturation.at(p, 7, a, FORWARD, ACTUATOR, true).orElseThrow().frequencyHz(), 0.0);
+  }
+
+  @Test
   void noStructuralFrequencyGivesNoLine() {
     ServoPoint p = point(crossover(2, 6));
     assertTrue(RateSaturation.at(p, 7, null, FORWARD, ACTUATOR, true).isEmpty());
