@@ -189,21 +189,23 @@ class LoopSweepUnitTest {
 
   @Test
   void crossingsOfTwoModesComeInSpeedOrder() {
-    // bend: limit 15.4, onset 61.5 m/s; twist: limit and onset earlier (closed forms), so the
+    // bend: limit 15.4, onset 61.5 m/s; twist: limit 18.8, onset 75.0 m/s (closed forms), so the
     // crossings of the two branches interleave along the path
     ClosedLoopResult r = sweep(LoopTestSection.twoModes());
     assertEquals(4, r.crossings().size(), r.crossings().toString());
     double twistLimit = LoopTestSection.dampingLimitSpeedMps(LoopTestSection.TWIST_HZ, LoopTestSection.TWIST_SLOPE_M2);
     double twistOnset = LoopTestSection.flutterSpeedMps(LoopTestSection.TWIST_HZ, LoopTestSection.TWIST_SLOPE_M2);
-    double[] expected = {twistLimit, dampingLimitSpeed(), twistOnset, LoopTestSection.flutterSpeedMps()};
-    String[] names = {"twist", "bend", "twist", "bend"};
+    double[] expected = {dampingLimitSpeed(), twistLimit, LoopTestSection.flutterSpeedMps(), twistOnset};
+    String[] names = {"bend", "twist", "bend", "twist"};
     for (int i = 0; i < 4; i++) {
       // Brent to 0.01 m/s along the path
       assertEquals(expected[i], r.crossings().get(i).condition().speedEasMps(), 0.02, "crossing " + i);
       assertEquals(names[i], r.crossings().get(i).branchName());
     }
+    // the exact-loop refinements follow the same order
     assertEquals(2, r.refinements().size());
-    assertTrue(r.refinements().get(0).rational().pathParameter() < r.refinements().get(1).rational().pathParameter());
+    assertEquals("bend", r.refinements().get(0).rational().branchName());
+    assertEquals("twist", r.refinements().get(1).rational().branchName());
   }
 
   @Test
@@ -357,6 +359,27 @@ class LoopSweepUnitTest {
     ClosedLoopSweep.rootNear(m, cfg, LOOP, path.at(0), rational, re[sp], im[sp], re[bend], im[bend], 0.9, out, tracked);
     assertEquals(re[bend], out[0], 1e-9);
     assertEquals(im[bend], out[1], 1e-9);
+    // along the real axis, from the fastest real root nine tenths of the way to the slowest: the
+    // real root nearest that point
+    double fastest = 0;
+    double slowest = -Double.MAX_VALUE;
+    for (int i = 0; i < re.length; i++) {
+      if (im[i] == 0) {
+        fastest = Math.min(fastest, re[i]);
+        slowest = Math.max(slowest, re[i]);
+      }
+    }
+    double point = fastest + 0.9 * (slowest - fastest);
+    double want = fastest;
+    for (int i = 0; i < re.length; i++) {
+      if (im[i] == 0 && Math.abs(re[i] - point) < Math.abs(want - point)) {
+        want = re[i];
+      }
+    }
+    assertTrue(want != fastest && want != slowest, "an inner root: " + want);
+    ClosedLoopSweep.rootNear(m, cfg, LOOP, path.at(0), rational, fastest, 0, slowest, 0, 0.9, out, tracked);
+    assertEquals(want, out[0], 1e-9 * Math.abs(want));
+    assertEquals(0, out[1], 1e-9);
   }
 
   private static double[][] toArray(DMatrixRMaj a) {
