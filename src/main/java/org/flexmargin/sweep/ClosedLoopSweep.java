@@ -186,7 +186,10 @@ public final class ClosedLoopSweep {
   /**
    * Refines a g = 0 crossing of the rational model on the exact loop: Newton on the path parameter
    * and the frequency for 1 + L(j w) = 0, started at the rational onset and kept within two grid
-   * intervals of it.
+   * intervals of it. Not confirmed (with the reason) for a real root, when Newton does not
+   * converge, when the crossing it finds is more than 20 % away in frequency, or when the
+   * aircraft's own response is singular there (an open-loop root on the axis that the loop does
+   * not move, such as a mode the elevator does not drive).
    */
   static OnsetRefinement onExactLoop(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       PlannedPath path, FlutterCrossing x) {
