@@ -186,7 +186,10 @@ public final class ClosedLoopSweep {
   /**
    * Refines a g = 0 crossing of the rational model on the exact loop: Newton on the path parameter
    * and the frequency for 1 + L(j w) = 0, started at the rational onset and kept within two grid
-   * intervals of it.
+   * intervals of it. Not confirmed (with the reason) for a real root, when Newton does not
+   * converge, when the crossing it finds is more than 20 % away in frequency, or when the
+   * aircraft's own response is singular there (an open-loop root on the axis that the loop does
+   * not move, such as a mode the elevator does not drive).
    */
   static OnsetRefinement onExactLoop(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       PlannedPath path, FlutterCrossing x) {
@@ -199,9 +202,17 @@ public final class ClosedLoopSweep {
     int base = (int) Math.floor(t0);
     double lo = Math.max(0, base - EXACT_SEARCH_INTERVALS);
     double hi = Math.min(path.gridPoints() - 1, base + 1 + EXACT_SEARCH_INTERVALS);
-    CriticalPointSolver.Solution s = CriticalPointSolver.solve(
-        t -> ServoMargins.loopAt(model, configuration, loop, path.at(t)).brokenLoop(), t0, w0, lo, hi,
-        EXACT_PARAMETER_TOLERANCE, EXACT_MAX_ITERATIONS);
+    CriticalPointSolver.Solution s;
+    try {
+      s = CriticalPointSolver.solve(
+          t -> ServoMargins.loopAt(model, configuration, loop, path.at(t)).brokenLoop(), t0, w0, lo, hi,
+          EXACT_PARAMETER_TOLERANCE, EXACT_MAX_ITERATIONS);
+    } catch (ArithmeticException e) {
+      // the aircraft's own response is singular there: an open-loop root on the axis that the loop
+      // does not move (a mode the elevator does not drive), so the loop has no crossing of -1 to find
+      return new OnsetRefinement(x, Optional.empty(), Double.NaN, 0, "the exact loop cannot be evaluated at the "
+          + "onset (" + e.getMessage() + "): an open-loop root the loop does not move");
+    }
     if (!s.converged()) {
       return new OnsetRefinement(x, Optional.empty(), s.residual(), s.iterations(), s.remark());
     }
@@ -256,7 +267,7 @@ public final class ClosedLoopSweep {
   }
 
   /** Nearest open-loop root: p-k structural root at grid point p, or the rigid short period. */
-  private static String label(double re, double im, FlutterSolution openLoop, int p, double[] shortPeriod) {
+  static String label(double re, double im, FlutterSolution openLoop, int p, double[] shortPeriod) {
     double lowestStructural = Double.MAX_VALUE;
     for (BranchCurve b : openLoop.branches()) {
       if (p < b.size() && b.converged()[p]) {
