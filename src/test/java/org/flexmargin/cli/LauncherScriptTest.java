@@ -34,6 +34,7 @@ class LauncherScriptTest {
     List<String> cmd = new java.util.ArrayList<>(List.of("bash", script.toString()));
     cmd.addAll(List.of(args));
     ProcessBuilder pb = new ProcessBuilder(cmd).directory(cwd.toFile());
+    pb.environment().remove("FLEXMARGIN_JAVA_OPTS");
     pb.environment().putAll(env);
     Process p = pb.start();
     String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
@@ -67,8 +68,17 @@ class LauncherScriptTest {
     assertTrue(first.err().contains("building"), first.err());
     assertEquals(1, Files.readAllLines(log).size(), "built once");
 
-    launch(script, elsewhere, env, "check", "x.json");
+    Result check = launch(script, elsewhere, env, "check", "x.json");
     assertEquals(1, Files.readAllLines(log).size(), "an up-to-date jar is not rebuilt");
+    assertTrue(check.out().startsWith("[-XX:+UseSerialGC]\n[-Xms64m]\n[-XX:TieredStopAtLevel=1]\n[-jar]\n"),
+        "a short command runs on the quick JIT compiler: " + check.out());
+    Result campaign = launch(script, elsewhere, env, "campaign", "c.json");
+    assertTrue(campaign.out().startsWith("[-XX:+UseSerialGC]\n[-Xms64m]\n[-jar]\n"),
+        "a campaign gets the optimising compiler: " + campaign.out());
+    Map<String, String> own = new java.util.HashMap<>(env);
+    own.put("FLEXMARGIN_JAVA_OPTS", "-Xmx1g");
+    Result mine = launch(script, elsewhere, own, "demo");
+    assertTrue(mine.out().startsWith("[-Xmx1g]\n[-jar]\n"), "the user's options replace the defaults: " + mine.out());
 
     Path source = root.resolve("src/main/Changed.java");
     Files.writeString(source, "class Changed {}");
