@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import org.flexmargin.clearance.RankedFinding;
 import org.flexmargin.io.CaseReader;
 import org.flexmargin.io.CaseVariantWriter;
 import org.flexmargin.io.InputFileException;
@@ -99,6 +100,7 @@ public final class SampleRunner {
     double ol = r.lowestOpenLoopFlutter().map(Instability::speedEasMps).orElse(Double.NaN);
     double cl = r.lowestClosedLoopInstability().map(Instability::speedEasMps).orElse(Double.NaN);
     double mo = Double.NaN;
+    double failedFrom = Double.NaN;
     SampleStatus status;
     String governing;
     if (r.clearance() == null) {
@@ -111,8 +113,11 @@ public final class SampleRunner {
       status = !passed ? SampleStatus.FAIL
           : r.trackingTrustedUpToEasMps().isPresent() ? SampleStatus.UNRELIABLE : SampleStatus.PASS;
       governing = r.clearance().governingFinding().map(f -> f.describe()).orElse("");
+      failedFrom = r.clearance().failures().stream().mapToDouble(RankedFinding::speedEasMps).min()
+          .orElse(Double.NaN);
     }
-    double critical = min(r.lowestInstability().map(Instability::speedEasMps).orElse(Double.NaN), mo);
+    double critical = min(min(r.lowestInstability().map(Instability::speedEasMps).orElse(Double.NaN), mo),
+        failedFrom);
     return new SampleOutcome(task, cell, sample, status, div, ol, cl, mo, critical, governing, draws, curve(r));
   }
 
