@@ -75,6 +75,16 @@ class AeroValidityTest {
   }
 
   @Test
+  void fromMachOneThePrandtlGlauertFactorIsNotQuoted() {
+    // V = a gives Mach a / a = 1 exactly (the interpolation from 0.6 a is exact there, Sterbenz), where
+    // 1 / sqrt(1 - M^2) is infinite
+    String w = AeroValidity.warnings(Double.NaN, throughMach(0.6, 1)).get(0);
+    assertTrue(w.contains("reaches Mach 1.000"), w);
+    assertTrue(w.endsWith("the flow is supersonic there and the results have no physical meaning in dimensional "
+        + "terms"), w);
+  }
+
+  @Test
   void theStripTheoryWarningInFull() {
     // Prandtl-Glauert at Mach 0.441: 1 / sqrt(1 - 0.441^2) = 1.114, about 11 %
     assertEquals(List.of("aerodynamics outside their range: strip theory with Theodorsen's function is "

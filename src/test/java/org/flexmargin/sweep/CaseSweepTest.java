@@ -67,8 +67,12 @@ class CaseSweepTest {
   @Test
   void oneConfigurationAgainstClosedForms() {
     PlannedPath path = new PlannedPath(SWEEP);
+    long before = System.nanoTime();
     ConfigurationResult r = CaseSweep.analyse(SECTION, path, caseOf(List.of(SECTION), AnalysisOptions.defaults(),
         null));
+    double wall = (System.nanoTime() - before) * 1e-9;
+    // the configuration's own wall time lies inside the time measured around the call
+    assertTrue(r.elapsedSeconds() > 0 && r.elapsedSeconds() <= wall, r.elapsedSeconds() + " s of " + wall + " s");
     assertEquals("section", r.configuration());
     assertEquals(List.of("mode_1", "mode_2"), r.modeNames());
     double[] f = inVacuoHz(3, 16);
@@ -88,7 +92,43 @@ class CaseSweepTest {
         + "is incompressible")), r.flutter().warnings().toString());
     assertNull(r.servo());
     assertNull(r.clearance());
-    assertTrue(r.elapsedSeconds() > 0);
+  }
+
+  @Test
+  void notesOnReSolvesUnreliableTrackingAndAerodynamicRange() {
+    // hand-made solutions over sea-level grid speeds 50, 100, 150, 200 m/s (InstabilityFindingsTest)
+    PlannedPath planned = new PlannedPath(new SpeedSweep(0, AirspeedKind.EQUIVALENT, 50, 200, 4));
+    var b = InstabilityFindingsTest.branch("bending", new double[] {-0.1, -0.1, -0.1, -0.1},
+        InstabilityFindingsTest.ALL);
+    var clean = new org.flexmargin.flutter.FlutterSolution(FlutterMethodKind.PK, List.of(b), List.of(),
+        new org.flexmargin.flutter.SolverDiagnostics(1, 1, 1, 0, 0, 1, 0), List.of("solver note"));
+    // nothing to add: the same solution
+    assertSame(clean, CaseSweep.withNotes(clean, planned, planned, List.of()));
+    assertEquals(List.of("solver note", "range"), CaseSweep.withNotes(clean, planned, planned, List.of("range"))
+        .warnings());
+    // re-solved on a grid four times finer: (4 - 1) x 4 + 1 = 13 points
+    assertEquals(List.of("solver note", "mode tracking was in doubt on the planned grid: re-solved with every "
+        + "interval split in 4 (13 grid points)"), CaseSweep.withNotes(clean, planned, planned.refined(4), List.of())
+        .warnings());
+    // still in doubt from path parameter 2.5 (175 m/s EAS): trusted to grid point 1, 100 m/s EAS
+    var doubt = InstabilityFindingsTest.solution(FlutterMethodKind.PK, List.of(b), List.of(), 2.5);
+    var noted = CaseSweep.withNotes(doubt, planned, planned, List.of());
+    assertEquals(List.of("UNRELIABLE: mode tracking is still in doubt from 175.00 m/s EAS; findings above 100.00 m/s "
+        + "EAS are marked unreliable and no flutter-free speed is claimed beyond it"), noted.warnings());
+    assertSame(doubt.diagnostics(), noted.diagnostics());
+    assertEquals(doubt.branches(), noted.branches());
+    assertEquals(FlutterMethodKind.PK, noted.method());
+  }
+
+  @Test
+  void theExactLoopModelKeepsModesAndEquations() {
+    ConfigurationModel m = ConfigurationModel.of(SECTION);
+    ConfigurationModel exact = m.withExactLoop();
+    assertSame(m.modes(), exact.modes());
+    assertSame(m.system(), exact.system());
+    assertTrue(m.loopAero().interpolated());
+    assertFalse(exact.loopAero().interpolated());
+    assertSame(m.system().aero(), exact.loopAero().source());
   }
 
   @Test

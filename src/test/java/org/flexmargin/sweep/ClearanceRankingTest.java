@@ -96,6 +96,7 @@ class ClearanceRankingTest {
     List<MarginOnset> onsets = List.of(
         onset(GAIN, 80), // outside the bracket (100, 150]: ignored
         onset(PHASE, 140), // another requirement: ignored for the gain
+        onset(PHASE, 80), // a met requirement ranks where it is tightest, whatever onsets it has
         onset(GAIN, 130),
         onset(PHASE_AE, 150), onset(PHASE_AE, 120)); // the first inside the bracket counts
     ClearanceSweep.DampingPeak damping = new ClearanceSweep.DampingPeak(-0.05, 100, Double.NaN);
@@ -142,7 +143,8 @@ class ClearanceRankingTest {
         .add(-0.03, 60, -0.03)
         .add(-0.02, 120, -0.03)
         .add(-0.025, 80, -0.03)
-        .add(-0.04, 70, -0.03);
+        .add(-0.04, 70, -0.03)
+        .add(-0.02, 130, -0.03); // as high as the peak, but later: the peak stays where it was first
     assertEquals(-0.02, d.highestG(), 0.0);
     assertEquals(120, d.highestAtEasMps(), 0.0);
     assertEquals(80, d.firstBelowMinimumEasMps(), 0.0);
@@ -160,6 +162,7 @@ class ClearanceRankingTest {
         point(50, new ClosedLoopRoot(-1, 20, "bending"), new ClosedLoopRoot(0.5, 0, "rigid"),
             new ClosedLoopRoot(0.1, 1e-6, "slow")),
         point(100, new ClosedLoopRoot(-0.2, 20, "bending")),
+        point(150, new ClosedLoopRoot(-0.5, 20, "bending")), // g -0.05, at V_L: counted, not highest
         point(200, new ClosedLoopRoot(1, 20, "bending"))), List.of());
     ClearanceSweep.DampingPeak d = ClearanceSweep.highestG(f, servo, REQ);
     assertEquals(-0.02, d.highestG(), 1e-15);
@@ -169,6 +172,10 @@ class ClearanceRankingTest {
     ClearanceSweep.DampingPeak o = ClearanceSweep.highestG(f, null, REQ);
     assertEquals(-0.025, o.highestG(), 0.0);
     assertEquals(150, o.firstBelowMinimumEasMps(), 0.0);
+    // a closed-loop root exactly at V_L counts: s = 0.1 + 20i at 150 m/s has g_Vg = 0.01
+    ServoResult atLimit = InstabilityFindingsTest.servo(List.of(point(150, new ClosedLoopRoot(0.1, 20, "bending"))),
+        List.of());
+    assertEquals(0.01, ClearanceSweep.highestG(f, atLimit, REQ).highestG(), 1e-15);
   }
 
   @Test

@@ -73,6 +73,20 @@ class FindingsClearanceTest {
   }
 
   @Test
+  void aRootNotConvergedAtTheFirstPointHasNoStartStatus() {
+    // g_Vg = 0.5 at the first point would be unstable, but the root did not converge there
+    var lost = InstabilityFindingsTest.branch("torsion", new double[] {0.5, -0.1, -0.1, -0.1},
+        new boolean[] {false, true, true, true});
+    var start = InstabilityFindingsTest.branch("bending", new double[] {0.5, -0.1, -0.1, -0.1},
+        InstabilityFindingsTest.ALL);
+    List<Finding> all = Findings.of(sweep(result("clean", NO_DIVERGENCE, solution(FlutterMethodKind.PK,
+        List.of(lost, start), List.of(), Double.NaN), null)), seaLevel(50));
+    assertEquals(List.of("no divergence", Findings.OPEN_LOOP_UNSTABLE_AT_START), all.stream().map(Finding::what)
+        .toList());
+    assertEquals("bending", all.get(1).mode());
+  }
+
+  @Test
   void divergenceAtTheSweepStartAltitudeAndFindingsPerConfiguration() {
     // a start at 3000 m (rho 0.9093 kg/m^3, a 328.58 m/s, US Standard Atmosphere 1976, from
     // memory; the findings only use what the condition says): divergence at q = 12 250 Pa has TAS

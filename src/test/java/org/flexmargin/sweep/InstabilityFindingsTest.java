@@ -146,6 +146,11 @@ class InstabilityFindingsTest {
       assertEquals(140, result(NO_DIVERGENCE, solution(FlutterMethodKind.PK, List.of(b), xs, Double.NaN), null)
           .lowestOpenLoopFlutter().orElseThrow().speedEasMps(), 0.0);
     }
+    // a branch without points has no start
+    BranchCurve empty = new BranchCurve("none", new double[0], new double[0], new double[0], new double[0],
+        new double[0], new double[0], new double[0], new boolean[0]);
+    assertEquals(140, result(NO_DIVERGENCE, solution(FlutterMethodKind.PK, List.of(empty, stable), xs, Double.NaN),
+        null).lowestOpenLoopFlutter().orElseThrow().speedEasMps(), 0.0);
     // no onset at all
     assertTrue(result(NO_DIVERGENCE, solution(FlutterMethodKind.PK, List.of(stable), List.of(), Double.NaN), null)
         .lowestOpenLoopFlutter().isEmpty());

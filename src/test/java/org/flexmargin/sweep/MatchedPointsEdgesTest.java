@@ -44,11 +44,15 @@ class MatchedPointsEdgesTest {
       "no forces");
 
   /** Forces that alternate between strip theory and twice strip theory at every call: no fixed point. */
-  static DoubleFunction<AeroSource> alternating() {
-    AeroSource one = scaled(1).apply(0);
-    AeroSource two = scaled(2).apply(0);
-    int[] calls = {0};
-    return m -> calls[0]++ % 2 == 0 ? one : two;
+  static final class Alternating implements DoubleFunction<AeroSource> {
+    private final AeroSource one = scaled(1).apply(0);
+    private final AeroSource two = scaled(2).apply(0);
+    int calls;
+
+    @Override
+    public AeroSource apply(double mach) {
+      return calls++ % 2 == 0 ? one : two;
+    }
   }
 
   @Test
@@ -118,15 +122,18 @@ class MatchedPointsEdgesTest {
 
   @Test
   void forcesThatKeepChangingDoNotSettle() {
-    MatchedPoints.Point f = MatchedPoints.flutterAtAltitude(STRUCTURE, alternating(), 0, SEA_LEVEL,
+    Alternating forces = new Alternating();
+    MatchedPoints.Point f = MatchedPoints.flutterAtAltitude(STRUCTURE, forces, 0, SEA_LEVEL,
         AnalysisOptions.defaults(), 0.3);
+    // one solve per iteration, all of them used
+    assertEquals(MatchedPoints.MAX_ITERATIONS, forces.calls);
     assertFalse(f.converged());
     assertFalse(f.found());
     assertNull(f.condition());
     assertEquals(MatchedPoints.MAX_ITERATIONS, f.iterations());
     assertTrue(f.note().startsWith("Mach number of the forces did not settle at 0 m after 20 iterations (last "),
         f.note());
-    MatchedPoints.Point d = MatchedPoints.divergenceAtAltitude(STRUCTURE, alternating(), 0, 0.3);
+    MatchedPoints.Point d = MatchedPoints.divergenceAtAltitude(STRUCTURE, new Alternating(), 0, 0.3);
     assertFalse(d.converged());
     assertEquals(MatchedPoints.Kind.DIVERGENCE_AT_ALTITUDE, d.kind());
     assertEquals(20, d.iterations());
