@@ -20,7 +20,6 @@ import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.ClearanceRequirements;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.FlutterMethodKind;
-import org.flexmargin.model.RequirementPresets;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.model.TypicalSection;
 import org.junit.jupiter.api.Test;
@@ -36,7 +35,7 @@ class CaseSweepTest {
   static final Configuration SOFT = new Configuration("soft", new TypicalSection(0.5, 50, 0, 0.1, 0.25, 3, 12,
       2 * Math.PI, 1, 0), null);
   static final SpeedSweep SWEEP = new SpeedSweep(3000, AirspeedKind.EQUIVALENT, 50, 200, 4);
-  static final ClearanceRequirements REQ = RequirementPresets.recalledMilitaryAndTransport(120, 150);
+  static final ClearanceRequirements REQ = ClearanceWithoutLoopTest.REQ;
 
   static AnalysisCase caseOf(List<Configuration> cs, AnalysisOptions options, ClearanceRequirements req) {
     return new AnalysisCase(1, "sections", "", cs, SWEEP, options, List.of(), null, req);

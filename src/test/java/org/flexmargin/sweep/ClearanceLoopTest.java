@@ -30,7 +30,6 @@ import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FlutterMethodKind;
 import org.flexmargin.model.SpeedSweep;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -48,9 +47,8 @@ class ClearanceLoopTest {
   static final PlannedPath PATH = new PlannedPath(new SpeedSweep(3000, AirspeedKind.EQUIVALENT, 30, 60, 3));
   /** Onset refinement tolerance on airspeed (m/s EAS). */
   static final double TOL = 0.5;
-  static FlutterSolution open;
-  static ServoResult servo;
-  static ClearanceResult result;
+  /** The open-loop solution ({@link #inVacuo()}), cheap enough to build once. */
+  static final FlutterSolution OPEN = inVacuo();
 
   /** Every mode at its in-vacuo frequency at every grid point, g = -0.04 (zeta 0.02). */
   static FlutterSolution inVacuo() {
@@ -78,7 +76,7 @@ class ClearanceLoopTest {
 
   static LoopMarginResult marginsAt(double t, int seedPoint) {
     ServoLoop sl = ServoMargins.loopAt(MODEL, CFG, DEMO.loop(), PATH.at(t));
-    return ServoMargins.withDefaults().at(sl, ServoMargins.seeds(open, seedPoint), ServoMargins.bandTopHz(MODEL));
+    return ServoMargins.withDefaults().at(sl, ServoMargins.seeds(OPEN, seedPoint), ServoMargins.bandTopHz(MODEL));
   }
 
   /** The closed-loop onset between grid points 1 and 2 (45 and 60 m/s EAS): t = 1.6, 54 m/s. */
@@ -86,9 +84,12 @@ class ClearanceLoopTest {
     return new FlutterCrossing(0, "wing_bending_1", CrossingKind.FLUTTER_ONSET, 1.6, PATH.at(1.6), 4, 0, 6, 1e-6);
   }
 
-  @BeforeAll
-  static void assess() {
-    open = inVacuo();
+  /**
+   * One assessment per test run (not shared between tests or set up beforehand, so that each
+   * test exercises the driver itself).
+   */
+  @Test
+  void theDriverWithTheLoop() {
     List<ServoPoint> points = new ArrayList<>();
     List<ClosedLoopPoint> roots = new ArrayList<>();
     for (int p = 0; p < PATH.gridPoints(); p++) {
@@ -96,18 +97,23 @@ class ClearanceLoopTest {
       roots.add(new ClosedLoopPoint(p, PATH.at(p), List.of(new ClosedLoopRoot(p == 2 ? 0.1 : -0.5, 25,
           "wing_bending_1")), 8));
     }
-    servo = new ServoResult(points, new ClosedLoopResult(roots, List.of(closedLoopOnset()), "fit", 3, List.of(),
+    ServoResult servo = new ServoResult(points, new ClosedLoopResult(roots, List.of(closedLoopOnset()), "fit", 3, List.of(),
         List.of()));
     DivergenceResult none = new DivergenceResult(false, Double.NaN, Double.NaN, new double[0], Double.NaN, 0, "none");
-    result = new ClearanceSweep().assess(MODEL, CFG, DEMO.loop(), PATH, open, none, servo, DEMO.requirements(), TOL);
+    ClearanceResult result = new ClearanceSweep().assess(MODEL, CFG, DEMO.loop(), PATH, OPEN, none, servo,
+        DEMO.requirements(), TOL);
+    everyGridPointIsAssessedOnItsOwnLoopWithTheClosedLoopStability(servo, result);
+    theClosedLoopStabilityOnsetIsTheRefinedCrossing(result);
+    refinedMarginOnsetsAreRootsOfTheirExcessInsideTheirBrackets(result);
+    everyRequirementIsRankedOnce(result);
   }
 
   static List<ModeFrequency> modes() {
     return MODEL.modes().modes().stream().map(m -> new ModeFrequency(m.name(), m.frequencyHz())).toList();
   }
 
-  @Test
-  void everyGridPointIsAssessedOnItsOwnLoopWithTheClosedLoopStability() {
+  static void everyGridPointIsAssessedOnItsOwnLoopWithTheClosedLoopStability(ServoResult servo,
+      ClearanceResult result) {
     double f1 = MODEL.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).min().orElseThrow();
     for (int p = 0; p < 3; p++) {
       ClosedLoopStability s = p == 2 ? ClosedLoopStability.UNSTABLE : ClosedLoopStability.STABLE;
@@ -122,8 +128,7 @@ class ClearanceLoopTest {
     }
   }
 
-  @Test
-  void theClosedLoopStabilityOnsetIsTheRefinedCrossing() {
+  static void theClosedLoopStabilityOnsetIsTheRefinedCrossing(ClearanceResult result) {
     MarginOnset m = result.marginOnsets().stream().filter(o -> o.key().kind() == CheckKind.CLOSED_LOOP_STABILITY)
         .findFirst().orElseThrow();
     assertEquals(PATH.at(1.6).speedEasMps(), m.condition().speedEasMps(), 0.0);
@@ -141,8 +146,7 @@ class ClearanceLoopTest {
     assertEquals(-0.008, damping.achievedValue(), 1e-15);
   }
 
-  @Test
-  void refinedMarginOnsetsAreRootsOfTheirExcessInsideTheirBrackets() {
+  static void refinedMarginOnsetsAreRootsOfTheirExcessInsideTheirBrackets(ClearanceResult result) {
     List<MarginOnsets.Bracket> brackets = MarginOnsets.brackets(result.points());
     int checked = 0;
     for (MarginOnset o : result.marginOnsets()) {
@@ -183,8 +187,7 @@ class ClearanceLoopTest {
         modes(), sl.brokenLoop()).worstExcess(key).orElse(Double.NaN);
   }
 
-  @Test
-  void everyRequirementIsRankedOnce() {
+  static void everyRequirementIsRankedOnce(ClearanceResult result) {
     long distinct = result.ranked().stream().map(r -> r.check().key()).distinct().count();
     assertEquals(result.ranked().size(), distinct);
     for (PointAssessment pa : result.points()) {

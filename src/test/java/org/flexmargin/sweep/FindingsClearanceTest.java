@@ -4,6 +4,7 @@ import static org.flexmargin.sweep.InstabilityFindingsTest.NO_DIVERGENCE;
 import static org.flexmargin.sweep.InstabilityFindingsTest.crossing;
 import static org.flexmargin.sweep.InstabilityFindingsTest.seaLevel;
 import static org.flexmargin.sweep.InstabilityFindingsTest.solution;
+import static org.flexmargin.sweep.InstabilityFindingsTest.sweep;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -15,12 +16,7 @@ import org.flexmargin.clearance.CheckKind;
 import org.flexmargin.flutter.CrossingKind;
 import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.FlutterSolution;
-import org.flexmargin.model.AirspeedKind;
-import org.flexmargin.model.AnalysisCase;
-import org.flexmargin.model.AnalysisOptions;
-import org.flexmargin.model.Configuration;
 import org.flexmargin.model.FlutterMethodKind;
-import org.flexmargin.model.SpeedSweep;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -32,12 +28,6 @@ class FindingsClearanceTest {
   static ConfigurationResult result(String name, DivergenceResult d, FlutterSolution f, ClearanceResult c) {
     return new ConfigurationResult(name, List.of("bending", "torsion"), new double[] {3, 9}, "strips", d,
         OptionalDouble.empty(), Double.NaN, f, 0.1, null, c);
-  }
-
-  static SweepResult sweep(ConfigurationResult... r) {
-    AnalysisCase c = new AnalysisCase(1, "case", "", List.of(new Configuration("clean", MatchedPointsTest.SECTION,
-        null)), new SpeedSweep(0, AirspeedKind.EQUIVALENT, 50, 200, 4), AnalysisOptions.defaults(), List.of());
-    return new SweepResult(c, "path", List.of(r));
   }
 
   static final FlutterSolution QUIET = solution(FlutterMethodKind.PK, List.of(), List.of(), Double.NaN);

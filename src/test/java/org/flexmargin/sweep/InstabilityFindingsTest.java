@@ -222,7 +222,7 @@ class InstabilityFindingsTest {
         Double.NaN), null).lowestInstability());
   }
 
-  private static SweepResult sweep(ConfigurationResult... r) {
+  static SweepResult sweep(ConfigurationResult... r) {
     AnalysisCase c = new AnalysisCase(1, "case", "", List.of(new Configuration("clean", MatchedPointsTest.SECTION,
         null)), new SpeedSweep(0, AirspeedKind.EQUIVALENT, 50, 200, 4), AnalysisOptions.defaults(), List.of());
     return new SweepResult(c, "path", List.of(r));

@@ -100,7 +100,7 @@ class MatchedPointsEdgesTest {
   void divergenceAlongAMachNumberOutsideTheStandardAtmosphere() {
     // gamma p M^2 / 2 = q_D gives p = 2 q_D / (1.4 M^2) (derived). At Mach 0.1: 2.87 MPa, above the
     // pressure at -5 km (about 177 kPa); the note rounds p to 1 Pa
-    double qd = 6400 * Math.PI;
+    double qd = CaseSweepTest.Q_D;
     MatchedPoints.Point low = MatchedPoints.divergenceAtMach(STRUCTURE, INCOMPRESSIBLE, 0.1);
     assertFalse(low.found());
     assertTrue(low.converged());
@@ -139,7 +139,7 @@ class MatchedPointsEdgesTest {
     assertEquals(20, d.iterations());
     // the last Mach number tried is that of twice the forces: q_D / 2, V = sqrt(q_D / rho0)
     // (the 20th call gets the doubled forces; that point's Mach number is the last one kept)
-    double v = Math.sqrt(6400 * Math.PI / 1.225);
+    double v = Math.sqrt(CaseSweepTest.Q_D / 1.225);
     assertTrue(d.note().contains(String.format(Locale.ROOT, "(last %.4f)", v / A0)), d.note());
   }
 
@@ -157,9 +157,9 @@ class MatchedPointsEdgesTest {
     // divergence at 0 and 6000 m: V = sqrt(2 q_D / rho(h)); rho(6000 m) = 0.6601 kg/m^3 (US Standard
     // Atmosphere 1976 table, from memory, four digits)
     assertEquals(0, b.get(1).condition().altitudeM(), 0.0);
-    assertEquals(Math.sqrt(2 * 6400 * Math.PI / 1.225), b.get(1).condition().speedTasMps(), 1e-6 * 181);
+    assertEquals(Math.sqrt(2 * CaseSweepTest.Q_D / 1.225), b.get(1).condition().speedTasMps(), 1e-6 * 181);
     assertEquals(6000, b.get(3).condition().altitudeM(), 0.0);
-    assertEquals(Math.sqrt(2 * 6400 * Math.PI / 0.6601), b.get(3).condition().speedTasMps(), 1e-4 * 247);
+    assertEquals(Math.sqrt(2 * CaseSweepTest.Q_D / 0.6601), b.get(3).condition().speedTasMps(), 1e-4 * 247);
     // the constant-Mach lines carry their own Mach numbers
     assertEquals(0.3, b.get(5).forcesMach(), 0.0);
     assertEquals(0.6, b.get(7).condition().mach(), 1e-12);
@@ -183,7 +183,7 @@ class MatchedPointsEdgesTest {
     List<String> w = e.warnings();
     assertTrue(w.get(0).startsWith("the forces do not depend on the Mach number (incompressible strip theory)"),
         w.get(0));
-    double mach = Math.sqrt(2 * 6400 * Math.PI / 1.225) / A0;
+    double mach = Math.sqrt(2 * CaseSweepTest.Q_D / 1.225) / A0;
     assertTrue(w.stream().anyMatch(x -> x.equals(String.format(Locale.ROOT, "aerodynamics outside their range: "
         + "divergence at altitude at 0 m, Mach %.3f, lies outside the forces' Mach range 0.000 to 0.300 (the "
         + "nearest forces were used)", mach))), w.toString());
