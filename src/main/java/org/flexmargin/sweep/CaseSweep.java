@@ -131,7 +131,7 @@ public final class CaseSweep {
    * Adds the re-solve, the unreliability if tracking stayed in doubt, and the aerodynamic range
    * warnings to the solution's warnings.
    */
-  private static FlutterSolution withNotes(FlutterSolution f, PlannedPath planned, PlannedPath used,
+  static FlutterSolution withNotes(FlutterSolution f, PlannedPath planned, PlannedPath used,
       List<String> aeroRange) {
     List<String> notes = new ArrayList<>(aeroRange);
     if (used.subdivisions() > 1) {

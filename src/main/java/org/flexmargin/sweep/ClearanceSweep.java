@@ -98,7 +98,7 @@ public final class ClearanceSweep {
    * and divergence checks at their onset speed; the damping check at the first speed where a root
    * falls below the minimum damping (or where damping is least).
    */
-  private static List<RankedFinding> rank(List<PointAssessment> points, List<MarginOnset> onsets,
+  static List<RankedFinding> rank(List<PointAssessment> points, List<MarginOnset> onsets,
       FlutterClearance fc, DampingPeak damping, double limitEas) {
     Map<CheckKey, RankedFinding> byKey = new LinkedHashMap<>();
     for (int p = 0; p < points.size(); p++) {
@@ -145,14 +145,14 @@ public final class ClearanceSweep {
    * closed-loop oscillatory root, the speed where it occurs, and the lowest speed at which any
    * root's g exceeds -minimum damping (NaN if none).
    */
-  private record DampingPeak(double highestG, double highestAtEasMps, double firstBelowMinimumEasMps) {
+  record DampingPeak(double highestG, double highestAtEasMps, double firstBelowMinimumEasMps) {
     DampingPeak add(double g, double eas, double limitG) {
       double first = g > limitG && !(firstBelowMinimumEasMps <= eas) ? eas : firstBelowMinimumEasMps;
       return g > highestG ? new DampingPeak(g, eas, first) : new DampingPeak(highestG, highestAtEasMps, first);
     }
   }
 
-  private static DampingPeak highestG(FlutterSolution flutter, ServoResult servo, ClearanceRequirements req) {
+  static DampingPeak highestG(FlutterSolution flutter, ServoResult servo, ClearanceRequirements req) {
     double limitEas = req.limitSpeedEasMps();
     double limitG = -req.minimumDampingG();
     DampingPeak d = new DampingPeak(-1.0, flutter.branches().isEmpty() ? 0.0
@@ -181,7 +181,7 @@ public final class ClearanceSweep {
   }
 
   /** Structural modes and their current (p-k) frequencies at grid point p. */
-  private static List<ModeFrequency> modesAt(FlutterSolution flutter, double t) {
+  static List<ModeFrequency> modesAt(FlutterSolution flutter, double t) {
     List<ModeFrequency> modes = new ArrayList<>();
     for (BranchCurve b : flutter.branches()) {
       int p = (int) Math.floor(t);
@@ -204,7 +204,7 @@ public final class ClearanceSweep {
     return PointAssessor.assess(requirements, fc.speedEasMps(), f1, margins, stability, modes, loop.brokenLoop());
   }
 
-  private static MarginOnset stabilityOnset(MarginOnsets.Bracket b, ServoResult servo, List<PointAssessment> points,
+  static MarginOnset stabilityOnset(MarginOnsets.Bracket b, ServoResult servo, List<PointAssessment> points,
       ClearanceRequirements requirements) {
     // the closed-loop onset itself is refined by the closed-loop sweep: take the first refined
     // closed-loop flutter onset inside the bracket, else the failing grid point
@@ -257,7 +257,7 @@ public final class ClearanceSweep {
         failing.unit().symbol(), evaluations[0], refined);
   }
 
-  private static int indexOfSpeed(List<PointAssessment> points, double eas) {
+  static int indexOfSpeed(List<PointAssessment> points, double eas) {
     for (int i = 0; i < points.size(); i++) {
       if (points.get(i).speedEasMps() == eas) {
         return i;

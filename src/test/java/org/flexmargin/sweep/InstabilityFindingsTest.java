@@ -146,6 +146,11 @@ class InstabilityFindingsTest {
       assertEquals(140, result(NO_DIVERGENCE, solution(FlutterMethodKind.PK, List.of(b), xs, Double.NaN), null)
           .lowestOpenLoopFlutter().orElseThrow().speedEasMps(), 0.0);
     }
+    // a branch without points has no start
+    BranchCurve empty = new BranchCurve("none", new double[0], new double[0], new double[0], new double[0],
+        new double[0], new double[0], new double[0], new boolean[0]);
+    assertEquals(140, result(NO_DIVERGENCE, solution(FlutterMethodKind.PK, List.of(empty, stable), xs, Double.NaN),
+        null).lowestOpenLoopFlutter().orElseThrow().speedEasMps(), 0.0);
     // no onset at all
     assertTrue(result(NO_DIVERGENCE, solution(FlutterMethodKind.PK, List.of(stable), List.of(), Double.NaN), null)
         .lowestOpenLoopFlutter().isEmpty());
@@ -217,7 +222,7 @@ class InstabilityFindingsTest {
         Double.NaN), null).lowestInstability());
   }
 
-  private static SweepResult sweep(ConfigurationResult... r) {
+  static SweepResult sweep(ConfigurationResult... r) {
     AnalysisCase c = new AnalysisCase(1, "case", "", List.of(new Configuration("clean", MatchedPointsTest.SECTION,
         null)), new SpeedSweep(0, AirspeedKind.EQUIVALENT, 50, 200, 4), AnalysisOptions.defaults(), List.of());
     return new SweepResult(c, "path", List.of(r));

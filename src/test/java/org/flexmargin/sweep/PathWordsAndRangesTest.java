@@ -46,6 +46,8 @@ class PathWordsAndRangesTest {
     assertEquals(150, p.at(2 + 1e-10).speedEasMps(), 1e-9);
     assertThrows(IllegalArgumentException.class, () -> p.at(-1e-8));
     assertThrows(IllegalArgumentException.class, () -> p.at(2 + 1e-8));
+    assertEquals("path parameter 2.5 outside [0, 2]", assertThrows(IllegalArgumentException.class,
+        () -> p.at(2.5)).getMessage());
   }
 
   @Test
