@@ -68,6 +68,10 @@ class StateSpaceMethodTest {
     assertEquals(0, sol.diagnostics().unconvergedRoots());
     assertTrue(sol.diagnostics().maxRelativeResidual() < 1e-12, "residual " + sol.diagnostics());
     assertTrue(sol.diagnostics().fullEigenSolves() >= 31);
+    // the coupled mode shapes turn along the sweep (MAC below 1) and every accepted step is clean
+    // (MAC at least 0.8, StateSpaceMethod documentation)
+    double mac = sol.diagnostics().minMac();
+    assertTrue(mac >= 0.8 && mac < 1 - 1e-6, "lowest step MAC " + mac);
     // only the line naming the method: no fit, range, lag-root or tracking warning
     assertEquals(1, sol.warnings().size(), sol.warnings().toString());
     assertTrue(sol.warnings().get(0).startsWith("method: state-space"));
