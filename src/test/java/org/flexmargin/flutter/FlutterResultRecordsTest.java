@@ -62,6 +62,8 @@ class FlutterResultRecordsTest {
   void aNonOscillatingRootHasInfiniteGAndARootAtTheOriginNoDamping() {
     assertEquals(Double.POSITIVE_INFINITY, new Root(0.5, 0.0, new double[2], 0, 0, true).dampingG());
     assertEquals(Double.NEGATIVE_INFINITY, new Root(-0.5, 0.0, new double[2], 0, 0, true).dampingG());
+    // a root at the origin is not unstable (Re s = 0 is not > 0): -infinity, never NaN from 0/0
+    assertEquals(Double.NEGATIVE_INFINITY, new Root(0.0, 0.0, new double[2], 0, 0, true).dampingG());
     // real roots: zeta = -Re(s)/|s| = -sign(Re s)
     assertEquals(-1.0, new Root(0.5, 0.0, new double[2], 0, 0, true).dampingRatio(), 0.0);
     assertEquals(1.0, new Root(-0.5, 0.0, new double[2], 0, 0, true).dampingRatio(), 0.0);

@@ -75,6 +75,10 @@ class StateSpaceMethodTest {
     // only the line naming the method: no fit, range, lag-root or tracking warning
     assertEquals(1, sol.warnings().size(), sol.warnings().toString());
     assertTrue(sol.warnings().get(0).startsWith("method: state-space"));
+    // the line gives the fit's worst element error in per cent
+    String worst = String.format(java.util.Locale.ROOT, "worst element error %.3g %%)",
+        100 * new StateSpaceMethod(4, 1.5).fitFor(sys).error().worstRelativeError());
+    assertTrue(sol.warnings().get(0).endsWith(worst), worst + " not in " + sol.warnings().get(0));
   }
 
   @Test
