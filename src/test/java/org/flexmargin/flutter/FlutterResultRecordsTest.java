@@ -215,6 +215,9 @@ class FlutterResultRecordsTest {
     assertTrue(path(1.0).constantDensity());
     // 1e-13 relative is round-off of the atmosphere model, below the 1e-12 allowance
     assertTrue(path(1 + 1e-13).constantDensity());
+    // the allowance is relative to the first density: 0.9e-12 inside it, 1.1e-12 outside
+    assertTrue(path(1 + 0.9e-12).constantDensity());
+    assertFalse(path(1 + 1.1e-12).constantDensity());
     assertFalse(path(1 + 1e-9).constantDensity());
     assertFalse(path(1 - 1e-9).constantDensity());
   }
