@@ -62,6 +62,8 @@ class FlutterResultRecordsTest {
   void aNonOscillatingRootHasInfiniteGAndARootAtTheOriginNoDamping() {
     assertEquals(Double.POSITIVE_INFINITY, new Root(0.5, 0.0, new double[2], 0, 0, true).dampingG());
     assertEquals(Double.NEGATIVE_INFINITY, new Root(-0.5, 0.0, new double[2], 0, 0, true).dampingG());
+    // a root at the origin is not unstable (Re s = 0 is not > 0): -infinity, never NaN from 0/0
+    assertEquals(Double.NEGATIVE_INFINITY, new Root(0.0, 0.0, new double[2], 0, 0, true).dampingG());
     // real roots: zeta = -Re(s)/|s| = -sign(Re s)
     assertEquals(-1.0, new Root(0.5, 0.0, new double[2], 0, 0, true).dampingRatio(), 0.0);
     assertEquals(1.0, new Root(-0.5, 0.0, new double[2], 0, 0, true).dampingRatio(), 0.0);
@@ -213,6 +215,9 @@ class FlutterResultRecordsTest {
     assertTrue(path(1.0).constantDensity());
     // 1e-13 relative is round-off of the atmosphere model, below the 1e-12 allowance
     assertTrue(path(1 + 1e-13).constantDensity());
+    // the allowance is relative to the first density: 0.9e-12 inside it, 1.1e-12 outside
+    assertTrue(path(1 + 0.9e-12).constantDensity());
+    assertFalse(path(1 + 1.1e-12).constantDensity());
     assertFalse(path(1 + 1e-9).constantDensity());
     assertFalse(path(1 - 1e-9).constantDensity());
   }

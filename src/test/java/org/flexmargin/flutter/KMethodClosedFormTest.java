@@ -143,4 +143,26 @@ class KMethodClosedFormTest {
     assertTrue(sol.warnings().stream().anyMatch(w -> w.contains("outside their reduced-frequency range")),
         sol.warnings().toString());
   }
+
+  @Test
+  void aConservativeSystemHasZeroDampingEverywhereAndNoCrossing() {
+    // no structural damping and purely real (in-phase) aerodynamics: K_c = K and Lambda(k) =
+    // (1 + rho b^2 q0 / (2 k^2)) / w0^2 is real, so g = 0 at every point of mode 1 (q0 > 0); g never
+    // changes sign, so there is nothing to report
+    double w0 = 2 * Math.PI * F_HZ[0];
+    AeroelasticSystem sys = new AeroelasticSystem(new org.flexmargin.structure.StructuralModel(List.of("mode_1"),
+        new double[][] {{1.0}}, new double[][] {{0.0}}, new double[][] {{w0 * w0}}),
+        new org.flexmargin.aero.FunctionForces(1, B, 0.0, 5.0, (k, out) -> out.set(0, 0, Q0[0], 0.0), "real forces"));
+    FlutterSolution sol = new KMethod().solve(sys, PATH, OPTIONS);
+    BranchCurve c = sol.branches().get(0);
+    for (int i = 0; i < POINTS; i++) {
+      double k = c.pathParameter()[i];
+      double omega = w0 / Math.sqrt(1 + RHO * B * B * Q0[0] / (2 * k * k));
+      assertTrue(c.converged()[i]);
+      assertEquals(0.0, c.dampingG()[i], 0.0, "k = " + k);
+      // a double-precision eigenvalue of a 1 x 1 matrix: round-off only
+      assertEquals(omega / (2 * Math.PI), c.frequencyHz()[i], 1e-12 * omega, "k = " + k);
+    }
+    assertTrue(sol.crossings().isEmpty(), sol.crossings().toString());
+  }
 }

@@ -58,6 +58,45 @@ class KMethodCurvesTest {
     return new Complex[] {tr.add(root).divide(2), tr.subtract(root).divide(2)};
   }
 
+  /** Eigenvector (p01, Lambda - p00) of the 2 x 2 k-method matrix for its eigenvalue Lambda. */
+  private static Complex[] vector(AeroelasticSystem sys, double k, Complex lambda) {
+    ZMatrixRMaj q = new ZMatrixRMaj(2, 2);
+    sys.aero().forces(k, q);
+    double b = sys.aero().referenceSemichordM();
+    double factor = RHO * b * b / (2 * k * k);
+    Complex p00 = new Complex(sys.structure().mass(0, 0) + factor * q.getReal(0, 0), factor * q.getImag(0, 0))
+        .divide(sys.structure().stiffness(0, 0));
+    Complex p01 = new Complex(sys.structure().mass(0, 1) + factor * q.getReal(0, 1), factor * q.getImag(0, 1))
+        .divide(sys.structure().stiffness(0, 0));
+    return new Complex[] {p01, lambda.subtract(p00)};
+  }
+
+  /**
+   * Lowest MAC |a^H b|^2 / (|a|^2 |b|^2) between a branch's eigenvectors at consecutive grid points,
+   * each branch taken at the eigenvalue nearest its reported Lambda = (1 + i g) / omega^2.
+   */
+  private static double lowestStepMac(AeroelasticSystem sys, BranchCurve[] br, double[] ks) {
+    double lowest = 1.0;
+    for (BranchCurve c : br) {
+      Complex[] prev = null;
+      for (int i = 0; i < ks.length; i++) {
+        double omega = 2 * Math.PI * c.frequencyHz()[i];
+        Complex got = new Complex(1, c.dampingG()[i]).divide(omega * omega);
+        Complex[] ref = lambdas(sys, ks[i]);
+        Complex lambda = got.subtract(ref[0]).abs() <= got.subtract(ref[1]).abs() ? ref[0] : ref[1];
+        Complex[] v = vector(sys, ks[i], lambda);
+        if (prev != null) {
+          Complex dot = prev[0].conjugate().multiply(v[0]).add(prev[1].conjugate().multiply(v[1]));
+          double aa = prev[0].abs() * prev[0].abs() + prev[1].abs() * prev[1].abs();
+          double bb = v[0].abs() * v[0].abs() + v[1].abs() * v[1].abs();
+          lowest = Math.min(lowest, dot.abs() * dot.abs() / (aa * bb));
+        }
+        prev = v;
+      }
+    }
+    return lowest;
+  }
+
   @Test
   void everyCurvePointSolvesTheKMethodEigenproblem() {
     AeroelasticSystem sys = ValidationCases.system(ValidationCases.lpwSection());
@@ -89,6 +128,9 @@ class KMethodCurvesTest {
         assertTrue(c.converged()[i]);
       }
     }
+    // the lowest step MAC is that of the exact eigenvectors (p01, Lambda - p00) of consecutive points
+    assertEquals(lowestStepMac(sys, br, ks), sol.diagnostics().minMac(), 1e-9);
+    assertTrue(sol.diagnostics().minMac() < 1 - 1e-6, "premise: the coupled eigenvectors turn, " + sol.diagnostics().minMac());
     // at k = 5 the air adds ~1 % mass (mu = 100): branch j starts at in-vacuo mode j
     for (int j = 0; j < 2; j++) {
       double fVac = sys.inVacuoOmegaRadPerS(j) / (2 * Math.PI);

@@ -78,6 +78,27 @@ class StateSpaceAgreementTest {
     FlutterSolution poor = new StateSpaceMethod(0, 1.5).solve(sys, path, AnalysisOptions.defaults());
     assertTrue(poor.warnings().stream().anyMatch(w -> w.contains("at the reduced frequency k = ")
         && w.contains("exceeds 1.00 %")), poor.warnings().toString());
+    // the warning names the onset's reduced frequency k = omega b / V and the fit's error there:
+    // largest element difference over the largest element (StateSpaceMethod.fitErrorAt documentation)
+    FlutterCrossing onset = poor.firstOnset().orElseThrow();
+    double k = 2 * Math.PI * onset.frequencyHz() * sys.aero().referenceSemichordM() / onset.condition().speedTasMps();
+    org.flexmargin.aero.RationalFit fit = new StateSpaceMethod(0, 1.5).fitFor(sys);
+    org.ejml.data.ZMatrixRMaj exact = new org.ejml.data.ZMatrixRMaj(2, 2);
+    org.ejml.data.ZMatrixRMaj approx = new org.ejml.data.ZMatrixRMaj(2, 2);
+    sys.aero().forces(k, exact);
+    fit.evaluate(k, approx);
+    double diff = 0;
+    double size = 0;
+    for (int i = 0; i < 2; i++) {
+      for (int j = 0; j < 2; j++) {
+        diff = Math.max(diff, Math.hypot(approx.getReal(i, j) - exact.getReal(i, j),
+            approx.getImag(i, j) - exact.getImag(i, j)));
+        size = Math.max(size, Math.hypot(exact.getReal(i, j), exact.getImag(i, j)));
+      }
+    }
+    String text = String.format(java.util.Locale.ROOT, "rational fit error %.3g %% at the reduced frequency k = %.4g ",
+        100 * diff / size, k);
+    assertTrue(poor.warnings().stream().anyMatch(w -> w.startsWith(text)), text + " not in " + poor.warnings());
     FlutterSolution good = new StateSpaceMethod().solve(sys, path, AnalysisOptions.defaults());
     assertTrue(good.warnings().stream().noneMatch(w -> w.contains("at the reduced frequency k = ")),
         good.warnings().toString());

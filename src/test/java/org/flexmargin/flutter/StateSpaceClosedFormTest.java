@@ -69,6 +69,14 @@ class StateSpaceClosedFormTest {
       assertEquals(vl, limit.condition().speedTasMps(), 0.02, "limit crossing of mode " + j);
     }
     assertEquals(4, sol.crossings().size(), sol.crossings().toString());
+    for (FlutterCrossing c : sol.crossings()) {
+      // Brent's absolute accuracy on the path parameter is the speed tolerance over the grid step:
+      // 0.01 m/s over 10 m/s (EAS = TAS at sea level to the atmosphere's round-off)
+      assertEquals(options.onsetSpeedToleranceMps() / 10, c.bracketWidth(), 1e-9, c.toString());
+      assertTrue(c.evaluations() > 0 && c.evaluations() < 100, c.toString());
+      // the condition is the path's at the refined parameter: 20 m/s plus 10 m/s per grid step
+      assertEquals(20 + 10 * c.pathParameter(), c.condition().speedTasMps(), 1e-9, c.toString());
+    }
     assertEquals(0, sol.diagnostics().unconvergedRoots());
     assertTrue(Double.isNaN(sol.diagnostics().firstTroublePathParameter()));
     assertEquals(1.0, sol.diagnostics().minMac(), 1e-9, "uncoupled modes keep their unit vectors");

@@ -119,6 +119,8 @@ class StateSpaceInputsTest {
         () -> StateSpaceMethod.stateMatrix(sys, FIT, 1.0, Double.POSITIVE_INFINITY));
     RationalFit one = fit(B, new double[][][] {{{1}}, {{0}}, {{0}}}, new double[0]);
     assertThrows(IllegalArgumentException.class, () -> StateSpaceMethod.stateMatrix(sys, one, 1.0, 10));
+    assertThrows(org.flexmargin.model.InvalidInputException.class,
+        () -> new StateSpaceMethod((org.flexmargin.model.RationalFitSettings) null));
   }
 
   @Test

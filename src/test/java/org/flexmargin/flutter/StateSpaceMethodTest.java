@@ -68,9 +68,17 @@ class StateSpaceMethodTest {
     assertEquals(0, sol.diagnostics().unconvergedRoots());
     assertTrue(sol.diagnostics().maxRelativeResidual() < 1e-12, "residual " + sol.diagnostics());
     assertTrue(sol.diagnostics().fullEigenSolves() >= 31);
+    // the coupled mode shapes turn along the sweep (MAC below 1) and every accepted step is clean
+    // (MAC at least 0.8, StateSpaceMethod documentation)
+    double mac = sol.diagnostics().minMac();
+    assertTrue(mac >= 0.8 && mac < 1 - 1e-6, "lowest step MAC " + mac);
     // only the line naming the method: no fit, range, lag-root or tracking warning
     assertEquals(1, sol.warnings().size(), sol.warnings().toString());
     assertTrue(sol.warnings().get(0).startsWith("method: state-space"));
+    // the line gives the fit's worst element error in per cent
+    String worst = String.format(java.util.Locale.ROOT, "worst element error %.3g %%)",
+        100 * new StateSpaceMethod(4, 1.5).fitFor(sys).error().worstRelativeError());
+    assertTrue(sol.warnings().get(0).endsWith(worst), worst + " not in " + sol.warnings().get(0));
   }
 
   @Test

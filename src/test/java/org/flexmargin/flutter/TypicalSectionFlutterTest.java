@@ -39,6 +39,10 @@ class TypicalSectionFlutterTest {
     // 2e-3 relative on frequency: 4 significant digits in the reference
     assertEquals(FREQ_RATIO_FLUTTER, ratio, 2e-3 * FREQ_RATIO_FLUTTER);
     assertEquals(0, sol.diagnostics().unconvergedRoots());
+    // the coupled mode shapes turn along the sweep (MAC below 1) and every accepted step is clean
+    // (MAC at least 0.8, PkMethod documentation)
+    double mac = sol.diagnostics().minMac();
+    assertTrue(mac >= 0.8 && mac < 1 - 1e-6, "lowest step MAC " + mac);
   }
 
   @Test
