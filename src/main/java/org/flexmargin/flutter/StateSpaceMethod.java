@@ -483,6 +483,17 @@ public final class StateSpaceMethod implements FlutterMethod {
       return (negative % 2 == 0 ? 1.0 : -1.0) * nearest;
     }
 
+    /** @return the number of real eigenvalues with a positive real part (static instabilities) */
+    int unstableReal() {
+      int count = 0;
+      for (int c = 0; c < re.length; c++) {
+        if (Math.abs(im[c]) <= REAL_TOLERANCE * radius && re[c] > 0) {
+          count++;
+        }
+      }
+      return count;
+    }
+
     /** |Im| of eigenvalue c, zero for a real root. */
     double upperImag(int c) {
       return Math.abs(im[c]) <= REAL_TOLERANCE * radius ? 0.0 : Math.abs(im[c]);
@@ -491,6 +502,22 @@ public final class StateSpaceMethod implements FlutterMethod {
 
   /** Roots matched at one condition, the eigenvalue index of each, and whether the step was clean. */
   private record Match(Root[] roots, int[] assigned, Spectrum spectrum, double worstMac, boolean clean) {}
+
+  /**
+   * Whether a static crossing begins or ends a divergence, from the number of real roots with a
+   * positive real part on either side (the sign of det A alone tells only that one root crossed,
+   * not which way: it depends on how many real roots are negative, which the lag roots change).
+   */
+  static String direction(int unstableBefore, int unstableAfter) {
+    if (unstableAfter > unstableBefore) {
+      return "begins (the root becomes unstable)";
+    }
+    if (unstableAfter < unstableBefore) {
+      return "ends (the root becomes stable again)";
+    }
+    return "begins or ends (as many real roots are unstable after the step as before: several cross zero "
+        + "within it)";
+  }
 
   /** The per-call workspace: system, fit, path, counters and warnings. Not thread-safe. */
   private static final class Tracker {
@@ -835,7 +862,7 @@ public final class StateSpaceMethod implements FlutterMethod {
         staticNotes.add(String.format(Locale.ROOT,
             "a real root of the state-space model crosses zero at %.2f m/s EAS (%.2f m/s TAS, q = %.6g Pa): "
                 + "static divergence %s", fc.speedEasMps(), fc.speedTasMps(), fc.dynamicPressurePa(),
-            fa < 0 ? "ends (the root becomes stable again)" : "begins (the root becomes unstable)"));
+            direction(spectra[p].unstableReal(), spectra[p + 1].unstableReal())));
       }
     }
 
