@@ -2,21 +2,14 @@ package org.flexmargin.sweep;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertSame;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.ForkJoinPool;
-import org.flexmargin.atmosphere.FlightCondition;
-import org.flexmargin.atmosphere.StandardAtmosphere;
 import org.flexmargin.flutter.BranchCurve;
-import org.flexmargin.flutter.CrossingKind;
-import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
@@ -67,30 +60,6 @@ class LoopDriverHelpersUnitTest {
     assertFalse(TrackingTrust.unreliableAt(solution(3, b), 45));
   }
 
-  private static FlutterCrossing crossing(double easMps, double hz) {
-    FlightCondition fc = StandardAtmosphere.atEquivalentSpeed(0, easMps);
-    return new FlutterCrossing(0, "bend", CrossingKind.FLUTTER_ONSET, 1.5, fc, hz, 0.0, 7, 0.01);
-  }
-
-  @Test
-  void aRefinementGivesTheExactOnsetAndItsDifferenceOrFallsBackToTheRationalOne() {
-    FlutterCrossing rational = crossing(61.0, 6.0);
-    FlutterCrossing exact = crossing(61.25, 5.9);
-    OnsetRefinement ok = new OnsetRefinement(rational, Optional.of(exact), 1e-12, 4, "");
-    assertTrue(ok.confirmed());
-    assertSame(exact, ok.onset());
-    // at sea level EAS = TAS: 61.25 - 61.0 and 5.9 - 6.0 (round-off of the atmosphere only)
-    assertEquals(0.25, ok.speedDifferenceEasMps(), 1e-12);
-    assertEquals(-0.1, ok.frequencyDifferenceHz(), 1e-12);
-    OnsetRefinement failed = new OnsetRefinement(rational, Optional.empty(), 0.3, 40, "did not converge");
-    assertFalse(failed.confirmed());
-    assertSame(rational, failed.onset());
-    assertTrue(Double.isNaN(failed.speedDifferenceEasMps()));
-    assertTrue(Double.isNaN(failed.frequencyDifferenceHz()));
-    assertThrows(IllegalArgumentException.class, () -> new OnsetRefinement(null, Optional.empty(), 0, 0, ""));
-    assertThrows(IllegalArgumentException.class, () -> new OnsetRefinement(rational, null, 0, 0, ""));
-    assertThrows(IllegalArgumentException.class, () -> new OnsetRefinement(rational, Optional.empty(), 0, 0, null));
-  }
 
   @Test
   void theParallelMapKeepsItemOrderForAnyNumberOfThreads() throws Exception {
