@@ -25,7 +25,11 @@ import org.junit.jupiter.api.Test;
 class StateSpaceStaticDirectionTest {
 
   private static List<String> divergenceReports(double[] fHz, double[] q0, int lags, double vTo) {
-    AeroelasticSystem sys = PkClosedFormTest.system(fHz, q0, negative(fHz.length), 0.001, 2.0);
+    return divergenceReports(fHz, q0, negative(fHz.length), lags, vTo);
+  }
+
+  private static List<String> divergenceReports(double[] fHz, double[] q0, double[] d, int lags, double vTo) {
+    AeroelasticSystem sys = PkClosedFormTest.system(fHz, q0, d, 0.001, 2.0);
     RationalFit fit = RogerApproximation.fit(sys.aero(), 1.0, lags);
     PlannedPath path = new PlannedPath(new SpeedSweep(0.0, AirspeedKind.TRUE, 20, vTo, 41));
     FlutterSolution sol = new StateSpaceMethod(fit).solve(sys, path, AnalysisOptions.defaults());
@@ -91,5 +95,17 @@ class StateSpaceStaticDirectionTest {
     assertTrue(StateSpaceMethod.direction(1, 2).startsWith("begins (the root"));
     assertTrue(StateSpaceMethod.direction(2, 1).startsWith("ends"));
     assertTrue(StateSpaceMethod.direction(1, 1).startsWith("begins or ends"));
+  }
+
+  @Test
+  void aCrossingFollowedByATrackedRealBranchIsNotRepeatedAsANote() {
+    // d = -2: the aerodynamic damping rho V b |d| / 2 (about 100 1/s near divergence) far exceeds
+    // 2 sqrt(k - q q0), so the mode is overdamped, its roots real on both sides of the crossing,
+    // and the tracked branch itself reports the divergence (one report, no static note)
+    double vd = Math.sqrt(2 * qD(2.0, 0.002) / PkClosedFormTest.RHO);
+    List<String> reports = divergenceReports(new double[] {2.0}, new double[] {0.002}, new double[] {-2.0}, 1,
+        1.5 * vd);
+    assertTrue(reports.stream().noneMatch(r -> r.contains("static divergence")), reports.toString());
+    assertTrue(reports.stream().anyMatch(r -> Math.abs(q(r) / qD(2.0, 0.002) - 1) < 1e-4), reports.toString());
   }
 }
