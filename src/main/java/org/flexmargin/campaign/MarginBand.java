@@ -43,8 +43,8 @@ public record MarginBand(double[] speedEasMps, double[] p5, double[] p50, double
    */
   static MarginBand of(List<SampleOutcome> outcomes, Function<MarginCurve, double[]> margin) {
     double[] grid = null;
+    List<SampleOutcome> used = new ArrayList<>();
     List<double[]> curves = new ArrayList<>();
-    List<Double> onsets = new ArrayList<>();
     for (SampleOutcome o : outcomes) {
       if (o.margins().size() == 0) {
         continue;
@@ -53,8 +53,8 @@ public record MarginBand(double[] speedEasMps, double[] p5, double[] p50, double
         grid = o.margins().speedEasMps();
       }
       if (o.margins().size() == grid.length) {
+        used.add(o);
         curves.add(margin.apply(o.margins()));
-        onsets.add(o.closedLoopOnsetEasMps());
       }
     }
     if (grid == null) {
@@ -71,7 +71,7 @@ public record MarginBand(double[] speedEasMps, double[] p5, double[] p50, double
       int m = 0;
       for (int s = 0; s < curves.size(); s++) {
         double x = curves.get(s)[i];
-        if (onsets.get(s) <= grid[i]) { // false for NaN: no closed-loop onset in the sweep
+        if (used.get(s).closedLoopOnsetEasMps() <= grid[i]) { // false for NaN: no closed-loop onset in the sweep
           v[m++] = Double.NEGATIVE_INFINITY;
           lost[i]++;
         } else if (!Double.isNaN(x)) {

@@ -473,7 +473,7 @@ public final class StateSpaceMethod implements FlutterMethod {
       int negative = 0;
       double nearest = radius > 0 ? radius : 1.0;
       for (int c = 0; c < re.length; c++) {
-        if (Math.abs(im[c]) <= REAL_TOLERANCE * radius) {
+        if (isReal(c)) {
           if (re[c] < 0) {
             negative++;
           }
@@ -487,7 +487,7 @@ public final class StateSpaceMethod implements FlutterMethod {
     int unstableReal() {
       int count = 0;
       for (int c = 0; c < re.length; c++) {
-        if (Math.abs(im[c]) <= REAL_TOLERANCE * radius && re[c] > 0) {
+        if (isReal(c) && re[c] > 0) {
           count++;
         }
       }
@@ -496,7 +496,12 @@ public final class StateSpaceMethod implements FlutterMethod {
 
     /** |Im| of eigenvalue c, zero for a real root. */
     double upperImag(int c) {
-      return Math.abs(im[c]) <= REAL_TOLERANCE * radius ? 0.0 : Math.abs(im[c]);
+      return isReal(c) ? 0.0 : Math.abs(im[c]);
+    }
+
+    /** Whether eigenvalue c is real to the spectrum's tolerance. */
+    boolean isReal(int c) {
+      return Math.abs(im[c]) <= REAL_TOLERANCE * radius;
     }
   }
 

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 import java.util.function.Function;
 import org.flexmargin.campaign.Cell;
@@ -67,15 +68,12 @@ final class CampaignCharts {
       double[][] ys = {b.p50(), b.p5(), b.p95()};
       for (int j = 0; j < 3; j++) {
         double[] yj = drawable(ys[j]);
-        if (Arrays.stream(yj).allMatch(Double::isNaN)) {
+        double[] drawn = Arrays.stream(yj).filter(v -> !Double.isNaN(v)).toArray();
+        if (drawn.length == 0) {
           continue;
         }
-        for (double v : yj) {
-          if (!Double.isNaN(v)) {
-            low = Math.min(low, v);
-            high = Math.max(high, v);
-          }
-        }
+        low = Math.min(low, Arrays.stream(drawn).min().getAsDouble());
+        high = Math.max(high, Arrays.stream(drawn).max().getAsDouble());
         ChartSeries.line(chart, used, label + names[j], x, yj, ReportStyle.seriesColor(k), j == 0
             ? ReportStyle.seriesStroke(0) : ReportStyle.referenceStroke(1.4f, DASH)).setShowInLegend(j == 0);
       }
@@ -83,7 +81,7 @@ final class CampaignCharts {
       if (gaps > 0) {
         notes.add(label + ": no sample has this margin at " + gaps + " grid speed(s) (no crossover there): gap.");
       }
-      String lost = lostFrom(x, ys);
+      String lost = lostFrom(x, b.p5(), b.p50());
       if (!lost.isEmpty()) {
         notes.add(label + ": " + lost);
       }
@@ -109,20 +107,21 @@ final class CampaignCharts {
   }
 
   /** Where the 5 % line and the median first reach samples with an unstable closed loop; empty when never. */
-  private static String lostFrom(double[] speedEasMps, double[][] p50p5p95) {
+  private static String lostFrom(double[] speedEasMps, double[] p5, double[] p50) {
     List<String> parts = new ArrayList<>();
-    String[] what = {"median", "5 % line"};
-    for (int j = 1; j >= 0; j--) {
-      double[] y = p50p5p95[j];
-      for (int i = 0; i < y.length; i++) {
-        if (y[i] == Double.NEGATIVE_INFINITY) {
-          parts.add("the " + what[j] + " is lost from " + String.format(java.util.Locale.ROOT, "%.1f", speedEasMps[i])
-              + " m/s EAS (samples unstable in closed loop reach the " + (j == 1 ? "5 % point" : "median") + ")");
-          break;
-        }
+    addLost(parts, speedEasMps, p5, "5 % line", "5 % point");
+    addLost(parts, speedEasMps, p50, "median", "median");
+    return String.join("; ", parts);
+  }
+
+  private static void addLost(List<String> parts, double[] speedEasMps, double[] y, String line, String point) {
+    for (int i = 0; i < y.length; i++) {
+      if (y[i] == Double.NEGATIVE_INFINITY) {
+        parts.add("the " + line + " is lost from " + String.format(Locale.ROOT, "%.1f", speedEasMps[i])
+            + " m/s EAS (samples unstable in closed loop reach the " + point + ")");
+        return;
       }
     }
-    return String.join("; ", parts);
   }
 
   private static ReportChart firstProblem(CampaignPlan plan, List<SampleOutcome> outcomes) {

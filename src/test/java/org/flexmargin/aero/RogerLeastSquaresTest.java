@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.model.RationalFitSettings;
 import org.junit.jupiter.api.Test;
@@ -25,43 +24,14 @@ class RogerLeastSquaresTest {
 
   /** An n x n source from a formula, valid on [kMin, kMax]. */
   static AeroSource source(int n, double kMin, double kMax, Element f) {
-    return new AeroSource() {
-      @Override
-      public int size() {
-        return n;
-      }
-
-      @Override
-      public double referenceSemichordM() {
-        return 1.5;
-      }
-
-      @Override
-      public double minReducedFrequency() {
-        return kMin;
-      }
-
-      @Override
-      public double maxReducedFrequency() {
-        return kMax;
-      }
-
-      @Override
-      public void forces(double k, ZMatrixRMaj out) {
-        out.reshape(n, n);
-        for (int i = 0; i < n; i++) {
-          for (int j = 0; j < n; j++) {
-            double[] v = f.at(i, j, k);
-            out.set(i, j, v[0], v[1]);
-          }
+    return new FunctionForces(n, 1.5, kMin, kMax, (k, out) -> {
+      for (int i = 0; i < n; i++) {
+        for (int j = 0; j < n; j++) {
+          double[] v = f.at(i, j, k);
+          out.set(i, j, v[0], v[1]);
         }
       }
-
-      @Override
-      public String description() {
-        return "formula";
-      }
-    };
+    }, "formula");
   }
 
   /**
