@@ -20,9 +20,6 @@ import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussInteg
  * e^{-300}.
  */
 final class BesselQuadrature {
-  private static final IterativeLegendreGaussIntegrator INTEGRATOR =
-      new IterativeLegendreGaussIntegrator(8, 1e-14, 1e-15);
-
   private BesselQuadrature() {}
 
   /** @return J_n(x) by A&amp;S 9.1.21 */
@@ -55,10 +52,13 @@ final class BesselQuadrature {
   }
 
   private static double integrate(UnivariateFunction f, double lo, double hi, int count) {
+    // one integrator per call: it keeps its evaluation count and function, so it is not shared
+    // between tests that run at the same time
+    IterativeLegendreGaussIntegrator integrator = new IterativeLegendreGaussIntegrator(8, 1e-14, 1e-15);
     double h = (hi - lo) / count;
     double sum = 0.0;
     for (int i = 0; i < count; i++) {
-      sum += INTEGRATOR.integrate(1_000_000, f, lo + i * h, lo + (i + 1) * h);
+      sum += integrator.integrate(1_000_000, f, lo + i * h, lo + (i + 1) * h);
     }
     return sum;
   }
