@@ -124,7 +124,7 @@ public final class ClearanceSweep {
     return new ArrayList<>(byKey.values());
   }
 
-  /** The refined onset of a check's requirement within (lower, upper], else upper. */
+  /** The refined onset of a check's requirement within [lower, upper] (EAS, m/s), else upper. */
   private static double onsetSpeed(List<MarginOnset> onsets, ClearanceCheck c, double lower, double upper) {
     for (MarginOnset m : onsets) {
       double v = m.condition().speedEasMps();

@@ -67,7 +67,10 @@ public final class MatchedPoints {
    * @param kind what it is
    * @param found whether an onset lies within the swept range
    * @param condition the flight condition of the onset (null when not found)
-   * @param forcesMach the Mach number of the forces used for the last solve
+   * @param forcesMach the Mach number of the forces used for the last solve: the matched Mach
+   *     number, or the nearest end of the forces' Mach table when it lies outside (the point is
+   *     then warned about), or the table's one Mach number (0 for incompressible strip theory) when
+   *     the forces do not depend on Mach
    * @param frequencyHz flutter frequency (Hz); 0 for divergence, NaN when not found
    * @param mode the mode the onset branch starts from ("" for divergence or none)
    * @param iterations fixed-point iterations (1 for constant-Mach points)
@@ -75,7 +78,12 @@ public final class MatchedPoints {
    * @param note why a point is missing or unconverged ("" otherwise)
    */
   public record Point(Kind kind, boolean found, FlightCondition condition, double forcesMach, double frequencyHz,
-      String mode, int iterations, boolean converged, String note) {}
+      String mode, int iterations, boolean converged, String note) {
+    /** @return this point with the forces' Mach number replaced */
+    Point withForcesMach(double mach) {
+      return new Point(kind, found, condition, mach, frequencyHz, mode, iterations, converged, note);
+    }
+  }
 
   /**
    * The boundary of one configuration.
@@ -126,7 +134,12 @@ public final class MatchedPoints {
           ? "a force table at one Mach number" : "incompressible strip theory")
           + "): each matched point is the onset of the ordinary sweep at its altitude");
     }
-    List<Point> points = boundary(model.system().structure(), aero, spec, options, start);
+    List<Point> solved = boundary(model.system().structure(), aero, spec, options, start);
+    List<Point> points = new ArrayList<>(solved.size());
+    for (Point p : solved) {
+      // the forces actually used: clamped to the table's Mach range, or the one fixed Mach number
+      points.add(p.withForcesMach(overMach.isPresent() ? Math.max(lo, Math.min(hi, p.forcesMach())) : start));
+    }
     for (Point p : points) {
       if (!p.converged()) {
         warnings.add(p.kind().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ": " + p.note());

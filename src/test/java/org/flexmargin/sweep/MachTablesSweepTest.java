@@ -152,6 +152,10 @@ class MachTablesSweepTest {
     assertTrue(d0.found() && d0.converged(), d0.note());
     assertEquals(exact, d0.condition().mach(), 1e-9);
     assertEquals(0.1822, exact, 1e-4);
+    // the forces used there are the 0.3 table's, and the point says so; along Mach 0.5 the forces
+    // are those of Mach 0.5 itself
+    assertEquals(0.3, d0.forcesMach(), 0.0);
+    assertEquals(0.5, dm.forcesMach(), 0.0);
     assertTrue(e.warnings().stream().anyMatch(w -> w.startsWith("aerodynamics outside their range: divergence at "
         + "altitude at 0 m, Mach 0.182") && w.contains("Mach range 0.300 to 0.700")), e.warnings().toString());
     // so is the one at 3000 m (Mach sqrt(2 q_D0 sqrt(0.91) / (rho a^2)) = 0.22 there, derived), and

@@ -63,6 +63,26 @@ class MatchedPointsTest {
   }
 
   @Test
+  void incompressibleForcesAreReportedAtMachZeroWhateverTheMatchedMach() {
+    // a typical section's forces are strip theory with Theodorsen's function: incompressible, the
+    // same at every Mach number. The points are matched to the atmosphere all the same (their own
+    // Mach numbers are those of the onsets), but the forces' Mach number stays 0, with the warning
+    MatchedPoints.Envelope e = MatchedPoints.of(new Configuration("section", SECTION, null), SPEC,
+        AnalysisOptions.defaults());
+    assertTrue(e.warnings().stream().anyMatch(w -> w.contains("do not depend on the Mach number")), e.warnings()
+        .toString());
+    long found = 0;
+    for (MatchedPoints.Point p : e.points()) {
+      assertEquals(0.0, p.forcesMach(), 0.0, p.kind().toString());
+      if (p.found()) {
+        found++;
+        assertTrue(p.condition().mach() > 0.05, p.kind() + " at Mach " + p.condition().mach());
+      }
+    }
+    assertTrue(found >= 4, "flutter and divergence at both altitudes: " + found);
+  }
+
+  @Test
   void prandtlGlauertDivergenceMatchesTheClosedForm() {
     // q_D(M) = q_D0 sqrt(1 - M^2) for forces scaled by 1 / beta (derived: K_alpha fixed, lift
     // slope times 1 / beta). Matched at altitude h: rho a^2 M^2 / 2 = q_D0 sqrt(1 - M^2), i.e. with
