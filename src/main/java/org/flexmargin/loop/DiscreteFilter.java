@@ -32,13 +32,13 @@ public record DiscreteFilter(double[] numerator, double[] denominator, double sa
         "discrete.denominator", "coefficients with a0 != 0",
         denominator == null ? "nothing" : Arrays.toString(denominator));
     for (double v : numerator) {
-      StateSpace.require(Double.isFinite(v), "discrete.numerator", "finite coefficients", String.valueOf(v));
+      StateSpace.require(Double.isFinite(v), "discrete.numerator", "finite coefficients", v);
     }
     for (double v : denominator) {
-      StateSpace.require(Double.isFinite(v), "discrete.denominator", "finite coefficients", String.valueOf(v));
+      StateSpace.require(Double.isFinite(v), "discrete.denominator", "finite coefficients", v);
     }
     StateSpace.require(Double.isFinite(samplePeriodS) && samplePeriodS > 0, "sample_period_s",
-        "a finite value > 0", String.valueOf(samplePeriodS));
+        "a finite value > 0", samplePeriodS);
     numerator = numerator.clone();
     denominator = denominator.clone();
   }

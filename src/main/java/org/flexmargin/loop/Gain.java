@@ -8,7 +8,7 @@ package org.flexmargin.loop;
 public record Gain(double gain) implements LinearBlock {
   /** Validates. */
   public Gain {
-    StateSpace.require(Double.isFinite(gain), "gain.gain", "a finite gain", String.valueOf(gain));
+    StateSpace.require(Double.isFinite(gain), "gain.gain", "a finite gain", gain);
   }
 
   @Override

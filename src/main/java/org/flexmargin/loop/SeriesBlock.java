@@ -1,6 +1,7 @@
 package org.flexmargin.loop;
 
 import java.util.List;
+import org.flexmargin.model.InvalidInputException;
 
 /**
  * Blocks in series, first to last: response = product of the responses, state space = series
@@ -11,8 +12,11 @@ import java.util.List;
 public record SeriesBlock(List<LinearBlock> blocks) implements LinearBlock {
   /** Validates and copies. */
   public SeriesBlock {
-    StateSpace.require(blocks != null && !blocks.isEmpty(), "series.blocks",
-        "at least one block", String.valueOf(blocks));
+    if (blocks == null || blocks.isEmpty()) {
+      // the found value is written out only on failure: a series is built for every loop path
+      // at every sweep point, and the blocks' descriptions are long
+      throw new InvalidInputException("series.blocks", "at least one block", String.valueOf(blocks));
+    }
     for (LinearBlock b : blocks) {
       StateSpace.require(b != null, "series.blocks", "non-null blocks", "null");
     }

@@ -143,10 +143,10 @@ public final class StateSpace {
         "a degree <= denominator degree " + (denominator.length - 1),
         numerator == null ? "null" : "degree " + (numerator.length - 1));
     for (double v : numerator) {
-      require(Double.isFinite(v), "transfer_function.numerator", "finite", String.valueOf(v));
+      require(Double.isFinite(v), "transfer_function.numerator", "finite", v);
     }
     for (double v : denominator) {
-      require(Double.isFinite(v), "transfer_function.denominator", "finite", String.valueOf(v));
+      require(Double.isFinite(v), "transfer_function.denominator", "finite", v);
     }
     int n = denominator.length - 1;
     double lead = denominator[0];
@@ -386,7 +386,7 @@ public final class StateSpace {
    * @return the scaled system
    */
   public StateSpace scale(double k) {
-    require(Double.isFinite(k), "scale.k", "a finite gain", String.valueOf(k));
+    require(Double.isFinite(k), "scale.k", "a finite gain", k);
     DMatrixRMaj cc = c.copy();
     DMatrixRMaj dd = d.copy();
     CommonOps_DDRM.scale(k, cc);
