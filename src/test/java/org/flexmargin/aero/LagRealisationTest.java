@@ -158,6 +158,20 @@ class LagRealisationTest {
         () -> fit(id, new double[] {0.4}, RationalFit.MINIMUM_STATE));
     assertEquals("rational_fit.coefficients[3]", e.fieldPath());
     assertTrue(e.getMessage().contains("rank one"), e.getMessage());
+    // the residual is reported relative to the largest entry: 2 I leaves 2 of 2 after its first row
+    double[][][] twice = {{{1, 0}, {0, 1}}, new double[2][2], new double[2][2], {{2, 0}, {0, 2}}};
+    String words = assertThrows(InvalidInputException.class,
+        () -> fit(twice, new double[] {0.4}, RationalFit.MINIMUM_STATE)).getMessage();
+    assertTrue(words.contains("residual of 1.00 of its largest entry"), words);
+    // the tolerance is relative: a defect of 1e-11 of the largest entry passes at any scale
+    double[][][] big = ms.coefficients();
+    for (double[] row : big[3]) {
+      for (int j = 0; j < row.length; j++) {
+        row[j] *= 1e3;
+      }
+    }
+    big[3][1][1] += 1e-11 * 1e3;
+    assertEquals(3, fit(big, ms.lagRoots(), RationalFit.MINIMUM_STATE).lagRealisation().stateCount());
     // a zero lag matrix is of rank one (and zero) and the products of the fit pass unchanged
     double[][][] zero = {{{1, 0}, {0, 1}}, new double[2][2], new double[2][2], new double[2][2]};
     assertEquals(1, fit(zero, new double[] {0.4}, RationalFit.MINIMUM_STATE).lagRealisation().stateCount());
@@ -178,6 +192,9 @@ class LagRealisationTest {
     assertTrue(new LagRealisation(2, new double[] {0.5}, id, id).perCoordinate());
     assertFalse(new LagRealisation(2, new double[] {0.5}, new double[][][] {{{1, 0}, {0.5, 1}}}, id).perCoordinate());
     assertFalse(new LagRealisation(2, new double[] {0.5}, new double[][][] {{{1, 0}, {0, 2}}}, id).perCoordinate());
+    // one row that is the first row of the identity is still not a per-coordinate block
+    assertFalse(LagRealisation.rankOne(new double[] {0.5}, new double[][] {{1, 2}}, new double[][] {{1, 0}})
+        .perCoordinate());
     DMatrixRMaj rhs = new DMatrixRMaj(2, 7);
     lags.setForceColumns(rhs, 0, 4, 10.0);
     assertArrayEquals(new double[] {0, 0, 0, 0, 20, 10, 20, 0, 0, 0, 0, -10, 30, 40}, rhs.data, 0.0);
@@ -258,5 +275,6 @@ class LagRealisationTest {
     assertEquals(-1, ok.output(0, 1, 0), 0.0);
     assertEquals(0.8, ok.input(0, 0, 1), 0.0);
     assertEquals(0, LagRealisation.roger(2, new double[0], new double[0][][]).stateCount());
+    assertEquals("lag_realisation", path(() -> LagRealisation.roger(2, one, null)));
   }
 }
