@@ -204,10 +204,34 @@ class MinimumStatePlantTest {
     AircraftPlant plant = plant(fit(RationalFit.MINIMUM_STATE));
     RationalAerodynamics two = AircraftPlantTest.zeroAero(2);
     assertThrows(IllegalArgumentException.class, () -> plant.stateSpace(two));
-    RationalAerodynamics mismatched = new RationalAerodynamics() {
+    LagRealisation wrongSize = LagRealisation.roger(2, new double[] {0.3}, new double[1][2][2]);
+    RationalAerodynamics mismatched = withRealisation(M, wrongSize);
+    assertThrows(IllegalArgumentException.class, () -> plant.stateSpace(mismatched));
+    // a realisation of the plant's size under aerodynamics that claim another
+    LagRealisation right = LagRealisation.roger(M, new double[] {0.3}, new double[1][M][M]);
+    assertThrows(IllegalArgumentException.class, () -> plant.stateSpace(withRealisation(2, right)));
+  }
+
+  @Test
+  void lagStatesOfAMultiRowBlockAreNumberedWithinTheirLagRoot() {
+    // two states for the single lag root, E not the identity: named by lag root and state
+    LagRealisation two = new LagRealisation(M, new double[] {0.3}, new double[][][] {{{1, 0, 0}, {0, 1, 1}}},
+        new double[][][] {{{0.1, 0}, {0, 0.1}, {0, 0}}});
+    StateSpace ss = plant(fit(RationalFit.MINIMUM_STATE)).stateSpace(withRealisation(M, two));
+    assertEquals(2 + 2 * M + 2, ss.stateCount());
+    assertEquals(List.of("aero_lag1_1", "aero_lag1_2"), ss.stateNames().subList(2 + 2 * M, 2 + 2 * M + 2));
+    // the fit seen as rational aerodynamics keeps its lag roots
+    RationalAerodynamics of = RationalAerodynamics.of(fit(RationalFit.MINIMUM_STATE));
+    assertEquals(BETA.length, of.lagCount());
+    assertEquals(BETA[1], of.lagRoot(1), 0.0);
+  }
+
+  /** Zero aerodynamics of {@code size} coordinates (as they claim) with the given lag realisation. */
+  private static RationalAerodynamics withRealisation(int size, LagRealisation lags) {
+    return new RationalAerodynamics() {
       @Override
       public int size() {
-        return M;
+        return size;
       }
 
       @Override
@@ -217,12 +241,12 @@ class MinimumStatePlantTest {
 
       @Override
       public int lagCount() {
-        return 1;
+        return lags.lagCount();
       }
 
       @Override
       public double lagRoot(int l) {
-        return 0.3;
+        return lags.lagRoot(l);
       }
 
       @Override
@@ -232,9 +256,8 @@ class MinimumStatePlantTest {
 
       @Override
       public LagRealisation lagRealisation() {
-        return LagRealisation.roger(2, new double[] {0.3}, new double[1][2][2]);
+        return lags;
       }
     };
-    assertThrows(IllegalArgumentException.class, () -> plant.stateSpace(mismatched));
   }
 }
