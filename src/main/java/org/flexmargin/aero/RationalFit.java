@@ -1,5 +1,6 @@
 package org.flexmargin.aero;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.ejml.data.ZMatrixRMaj;
@@ -34,7 +35,8 @@ import org.flexmargin.model.InvalidInputException;
  * @param warnings fit quality and data-range remarks, in words (empty when none)
  * @param sourceDescription one-line description of the data that were fitted
  * @param form how the fit was made, in words: {@link #ROGER} or {@link #MINIMUM_STATE} (the
- *     minimum-state fit is held in Roger's form, its lag matrices of rank one)
+ *     minimum-state fit is held in Roger's form, its lag matrices of rank one, checked on
+ *     construction; {@link #lagRealisation()} gives it one lag state per lag root)
  */
 public record RationalFit(
     double referenceSemichordM,
@@ -118,7 +120,32 @@ public record RationalFit(
     if (form == null) {
       form = ROGER;
     }
+    for (int l = 0; MINIMUM_STATE.equals(form) && l < lagRoots.length; l++) {
+      double[][] a = coefficients[l + 3];
+      double[][] f = rankOne(a);
+      double largest = 0;
+      double residual = 0;
+      for (int i = 0; i < n; i++) {
+        for (int j = 0; j < n; j++) {
+          largest = Math.max(largest, Math.abs(a[i][j]));
+          residual = Math.max(residual, Math.abs(a[i][j] - f[0][i] * f[1][j]));
+        }
+      }
+      if (residual > RANK_ONE_TOLERANCE * largest) {
+        throw new InvalidInputException("rational_fit.coefficients[" + (l + 3) + "]",
+            "a matrix of rank one (a lag matrix of the minimum-state form)",
+            String.format(Locale.ROOT, "a rank-one residual of %.3g of its largest entry", residual / largest));
+      }
+    }
   }
+
+  /**
+   * Largest entry of A - d e<sup>T</sup>, relative to the largest of A, for a lag matrix of a
+   * {@link #MINIMUM_STATE} fit: products d<sub>i</sub> e<sub>j</sub> refactored in double precision
+   * agree to a few units of round-off (1e-16) times n, so 1e-9 leaves a wide margin and still
+   * rejects any matrix that is not of rank one.
+   */
+  static final double RANK_ONE_TOLERANCE = 1e-9;
 
   /**
    * Checks lag roots: non-empty is not required (nL = 0 is the quasi-steady fit), every root
@@ -158,14 +185,19 @@ public record RationalFit(
 
   /**
    * Rank-one factors d e<sup>T</sup> of a lag matrix, exact when it has rank one (as every lag
-   * matrix of a {@link #MINIMUM_STATE} fit): e is its largest row scaled to unit length, d = A e.
+   * matrix of a {@link #MINIMUM_STATE} fit, to {@value #RANK_ONE_TOLERANCE} of its largest entry):
+   * e is its largest row scaled to unit length, d = A e.
    *
    * @param l lag index, 0-based
    * @return {d, e}, two vectors of length n (d in units of Q, e dimensionless); both zero for a
    *     zero matrix
    */
   public double[][] rankOneLag(int l) {
-    double[][] a = coefficients[l + 3];
+    return rankOne(coefficients[l + 3]);
+  }
+
+  /** {d, e} of {@link #rankOneLag} for a square matrix. */
+  private static double[][] rankOne(double[][] a) {
     int n = a.length;
     int best = 0;
     double bestNorm = 0;
@@ -191,6 +223,29 @@ public record RationalFit(
       }
     }
     return new double[][] {d, e};
+  }
+
+  /**
+   * The lag terms as aerodynamic states ({@link LagRealisation}): for a {@link #MINIMUM_STATE} fit
+   * one state per lag root, E<sub>l</sub> = e<sub>l</sub><sup>T</sup> and D<sub>l</sub> =
+   * d<sub>l</sub> of {@link #rankOneLag}; for Roger's form n states per lag root, E<sub>l</sub> = I
+   * and D<sub>l</sub> = A<sub>l+3</sub>.
+   *
+   * @return the realisation (a new immutable object)
+   */
+  public LagRealisation lagRealisation() {
+    int nl = lagRoots.length;
+    if (MINIMUM_STATE.equals(form) && nl > 0) {
+      double[][] d = new double[nl][];
+      double[][] e = new double[nl][];
+      for (int l = 0; l < nl; l++) {
+        double[][] f = rankOneLag(l);
+        d[l] = f[0];
+        e[l] = f[1];
+      }
+      return LagRealisation.rankOne(lagRoots, d, e);
+    }
+    return LagRealisation.roger(size(), lagRoots, Arrays.copyOfRange(coefficients, 3, 3 + nl));
   }
 
   /**

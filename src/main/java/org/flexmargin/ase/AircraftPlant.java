@@ -7,6 +7,7 @@ import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.flexmargin.aero.AeroSource;
 import org.flexmargin.aero.ControlSurfaceForces;
+import org.flexmargin.aero.LagRealisation;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.loop.StateSpace;
 import org.flexmargin.model.ModeCoupling;
@@ -343,8 +344,11 @@ public final class AircraftPlant {
 
   /**
    * State-space model with the elastic aerodynamics in rational form. States: alpha (rad), q
-   * (rad/s), eta (m modal), eta' , then the lag states r_1..r_L (m each). Input: elevator (rad).
-   * Outputs: the sensors in order.
+   * (rad/s), eta (m modal), eta' , then the lag states of the aerodynamics' {@link
+   * RationalAerodynamics#lagRealisation() realisation}, z<sub>l</sub>' = E<sub>l</sub> eta' - (V/b)
+   * beta<sub>l</sub> z<sub>l</sub> (m per lag root in Roger's form, named mode_lagL; one per lag
+   * root in the minimum-state form, named aero_lagL): 2 + 2 m + n<sub>lag states</sub> in all.
+   * Input: elevator (rad). Outputs: the sensors in order.
    *
    * @param rational rational approximation of this configuration's elastic forces
    * @return the aircraft state space
@@ -356,8 +360,11 @@ public final class AircraftPlant {
     double qd = condition.dynamicPressurePa();
     double v = condition.speedTasMps();
     double b = rational.referenceSemichordM();
-    int nl = rational.lagCount();
-    int n = 2 + 2 * m + nl * m;
+    LagRealisation lags = rational.lagRealisation();
+    if (lags.size() != m) {
+      throw new IllegalArgumentException("lag realisation has " + lags.size() + " coordinates, plant " + m);
+    }
+    int n = 2 + 2 * m + lags.stateCount();
     DMatrixRMaj a = new DMatrixRMaj(n, n);
     DMatrixRMaj bIn = new DMatrixRMaj(n, 1);
     double lf = liftFactor();
@@ -381,7 +388,7 @@ public final class AircraftPlant {
       a.add(1, 2 + i, mf * momentPerEta[i]);
     }
     bIn.set(1, 0, cad * bIn.get(0, 0) + mf * rigid.pitchMomentPerElevatorPerRad());
-    // elastic: Mbar eta'' = -Cbar eta' - Kbar eta + qd sum A_l r_l + qd Qa alpha + qd Qq rf q + qd Qd delta
+    // elastic: Mbar eta'' = -Cbar eta' - Kbar eta + qd sum D_l z_l + qd Qa alpha + qd Qq rf q + qd Qd delta
     DMatrixRMaj a0 = rational.coefficient(0);
     DMatrixRMaj a1 = rational.coefficient(1);
     DMatrixRMaj a2 = rational.coefficient(2);
@@ -399,14 +406,7 @@ public final class AircraftPlant {
       rhs.set(i, 1, qd * forcePerPitchRate[i] * rf);
       rhsB.set(i, 0, qd * forcePerElevator[i]);
     }
-    for (int l = 0; l < nl; l++) {
-      DMatrixRMaj al = rational.coefficient(3 + l);
-      for (int i = 0; i < m; i++) {
-        for (int j = 0; j < m; j++) {
-          rhs.set(i, 2 + 2 * m + l * m + j, qd * al.get(i, j));
-        }
-      }
-    }
+    lags.setForceColumns(rhs, 0, 2 + 2 * m, qd);
     DMatrixRMaj etaDd = new DMatrixRMaj(m, n);
     DMatrixRMaj etaDdB = new DMatrixRMaj(m, 1);
     if (!CommonOps_DDRM.solve(mbar, rhs, etaDd) || !CommonOps_DDRM.solve(mbar, rhsB, etaDdB)) {
@@ -419,15 +419,8 @@ public final class AircraftPlant {
       }
       bIn.set(2 + m + i, 0, etaDdB.get(i, 0));
     }
-    // lag states: r_l' = eta' - (V/b) beta_l r_l
-    for (int l = 0; l < nl; l++) {
-      double beta = rational.lagRoot(l);
-      for (int i = 0; i < m; i++) {
-        int row = 2 + 2 * m + l * m + i;
-        a.set(row, 2 + m + i, 1);
-        a.set(row, row, -beta / bv);
-      }
-    }
+    // lag states: z_l' = E_l eta' - (V/b) beta_l z_l
+    lags.setLagRows(a, 2 + 2 * m, 2 + m, beta -> -beta / bv);
     int ns = sensors.size();
     DMatrixRMaj c = new DMatrixRMaj(ns, n);
     DMatrixRMaj d = new DMatrixRMaj(ns, 1);
@@ -472,9 +465,11 @@ public final class AircraftPlant {
     for (String name : modeNames) {
       states.add(name + "_rate");
     }
-    for (int l = 0; l < nl; l++) {
-      for (String name : modeNames) {
-        states.add(name + "_lag" + (l + 1));
+    boolean perMode = lags.perCoordinate();
+    for (int l = 0; l < lags.lagCount(); l++) {
+      for (int k = 0; k < lags.states(l); k++) {
+        states.add(perMode ? modeNames.get(k) + "_lag" + (l + 1)
+            : "aero_lag" + (l + 1) + (lags.states(l) > 1 ? "_" + (k + 1) : ""));
       }
     }
     List<String> outputs = sensors.stream().map(SensorSpec::name).toList();

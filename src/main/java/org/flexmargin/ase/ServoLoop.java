@@ -165,6 +165,8 @@ public final class ServoLoop {
 
   /**
    * The closed loop u = G u as a state space (input: a disturbance added at the actuator command).
+   * Its aircraft states are those of {@link AircraftPlant#stateSpace}: with a minimum-state fit one
+   * lag state per lag root, the law's, filters' and actuator's states unchanged.
    *
    * @param rational elastic aerodynamics in rational form
    * @return the closed-loop system

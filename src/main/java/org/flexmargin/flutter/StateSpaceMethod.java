@@ -12,6 +12,7 @@ import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.flexmargin.aero.AeroSource;
+import org.flexmargin.aero.LagRealisation;
 import org.flexmargin.aero.RationalFit;
 import org.flexmargin.aero.RationalFits;
 import org.flexmargin.aero.RogerApproximation;
@@ -242,13 +243,24 @@ public final class StateSpaceMethod implements FlutterMethod {
    * @param speedTasMps true airspeed V &ge; 0 (m/s)
    * @return the square state matrix (units 1/s and 1/s^2 by block): n (2 + nL) for Roger's form,
    *     2 n + nL for the minimum-state form, whose lag state z_l = e_l^T r_l follows z_l' = e_l^T
-   *     xi' - (V/b) beta_l z_l with A_{l+2} = d_l e_l^T ({@link RationalFit#rankOneLag})
+   *     xi' - (V/b) beta_l z_l with A_{l+2} = d_l e_l^T (the fit's {@link
+   *     RationalFit#lagRealisation() realisation})
    * @throws IllegalArgumentException for negative or non-finite density or speed, or sizes that
    *     differ
    * @throws ArithmeticException if Mbar = M - (rho b^2 / 2) A2 is singular
    */
   public static DMatrixRMaj stateMatrix(
       AeroelasticSystem system, RationalFit fit, double densityKgPerM3, double speedTasMps) {
+    return stateMatrix(system, fit, fit.lagRealisation(), densityKgPerM3, speedTasMps);
+  }
+
+  /**
+   * {@link #stateMatrix(AeroelasticSystem, RationalFit, double, double)} with the fit's lag
+   * realisation made once by the caller; x = [xi; xi'; z], the lag states z as the realisation
+   * numbers them.
+   */
+  static DMatrixRMaj stateMatrix(AeroelasticSystem system, RationalFit fit, LagRealisation lags,
+      double densityKgPerM3, double speedTasMps) {
     if (!(densityKgPerM3 >= 0) || !(speedTasMps >= 0) || Double.isInfinite(densityKgPerM3)
         || Double.isInfinite(speedTasMps)) {
       throw new IllegalArgumentException("density and speed must be finite and >= 0, found rho = "
@@ -258,9 +270,7 @@ public final class StateSpaceMethod implements FlutterMethod {
     if (fit.size() != n) {
       throw new IllegalArgumentException("rational fit has " + fit.size() + " coordinates, system " + n);
     }
-    int nl = fit.lagCount();
-    boolean minimumState = RationalFit.MINIMUM_STATE.equals(fit.form());
-    int size = 2 * n + nl * lagStatesPerRoot(fit, n);
+    int size = 2 * n + lags.stateCount();
     double b = fit.referenceSemichordM();
     double q = 0.5 * densityKgPerM3 * speedTasMps * speedTasMps;
     double qbv = 0.5 * densityKgPerM3 * speedTasMps * b; // q b / V
@@ -268,10 +278,6 @@ public final class StateSpaceMethod implements FlutterMethod {
     double[] mm = system.massFlat();
     double[] cc = system.dampingFlat();
     double[] kk = system.stiffnessFlat();
-    double[][][] factors = new double[nl][][];
-    for (int l = 0; l < nl && minimumState; l++) {
-      factors[l] = fit.rankOneLag(l);
-    }
     DMatrixRMaj mbar = new DMatrixRMaj(n, n);
     DMatrixRMaj rhs = new DMatrixRMaj(n, size);
     for (int i = 0; i < n; i++) {
@@ -279,14 +285,9 @@ public final class StateSpaceMethod implements FlutterMethod {
         mbar.set(i, j, mm[i * n + j] - qbv2 * fit.coefficient(2, i, j));
         rhs.set(i, j, -(kk[i * n + j] - q * fit.coefficient(0, i, j)));
         rhs.set(i, n + j, -(cc[i * n + j] - qbv * fit.coefficient(1, i, j)));
-        for (int l = 0; l < nl && !minimumState; l++) {
-          rhs.set(i, (2 + l) * n + j, q * fit.coefficient(l + 3, i, j));
-        }
-      }
-      for (int l = 0; l < nl && minimumState; l++) {
-        rhs.set(i, 2 * n + l, q * factors[l][0][i]);
       }
     }
+    lags.setForceColumns(rhs, 0, 2 * n, q);
     DMatrixRMaj x = new DMatrixRMaj(n, size);
     if (!CommonOps_DDRM.solve(mbar, rhs, x) || !finite(x)) {
       throw new ArithmeticException(String.format(Locale.ROOT,
@@ -299,30 +300,9 @@ public final class StateSpaceMethod implements FlutterMethod {
       for (int c = 0; c < size; c++) {
         a.set(n + i, c, x.get(i, c));
       }
-      for (int l = 0; l < nl && !minimumState; l++) {
-        int row = (2 + l) * n + i;
-        a.set(row, n + i, 1.0);
-        a.set(row, row, -speedTasMps / b * fit.lagRoot(l));
-      }
     }
-    for (int l = 0; l < nl && minimumState; l++) {
-      int row = 2 * n + l;
-      for (int j = 0; j < n; j++) {
-        a.set(row, n + j, factors[l][1][j]);
-      }
-      a.set(row, row, -speedTasMps / b * fit.lagRoot(l));
-    }
+    lags.setLagRows(a, 2 * n, n, beta -> -speedTasMps / b * beta);
     return a;
-  }
-
-  /**
-   * @param fit a rational fit
-   * @param n number of coordinates
-   * @return lag states per lag root of the realisation: 1 for a minimum-state fit (its lag matrices
-   *     have rank one), n for Roger's form
-   */
-  static int lagStatesPerRoot(RationalFit fit, int n) {
-    return RationalFit.MINIMUM_STATE.equals(fit.form()) ? 1 : n;
   }
 
   /** Fit error at a flutter onset's reduced frequency above which the results say so (1 %). */
@@ -530,9 +510,8 @@ public final class StateSpaceMethod implements FlutterMethod {
     final RationalFit fit;
     final FlightPath path;
     final int n;
-    final int nl;
-    /** Lag states per lag root: n (Roger's form) or 1 (minimum state). */
-    final int perLag;
+    /** The fit's lag states: n per lag root (Roger's form) or 1 (minimum state). */
+    final LagRealisation lags;
     final List<String> names;
     final double[] omegaFloor;
     final double[] inVacuo;
@@ -550,8 +529,7 @@ public final class StateSpaceMethod implements FlutterMethod {
       this.fit = fit;
       this.path = path;
       this.n = sys.size();
-      this.nl = fit.lagCount();
-      this.perLag = lagStatesPerRoot(fit, n);
+      this.lags = fit.lagRealisation();
       this.names = sys.coordinateNames();
       this.inVacuo = new double[n];
       double minPositive = Double.POSITIVE_INFINITY;
@@ -572,7 +550,7 @@ public final class StateSpaceMethod implements FlutterMethod {
 
     Spectrum spectrum(double t) {
       FlightCondition fc = path.at(t);
-      DMatrixRMaj a = stateMatrix(sys, fit, fc.densityKgPerM3(), fc.speedTasMps());
+      DMatrixRMaj a = stateMatrix(sys, fit, lags, fc.densityKgPerM3(), fc.speedTasMps());
       int size = a.numRows;
       ZMatrixRMaj z = new ZMatrixRMaj(size, size);
       for (int i = 0; i < size * size; i++) {
@@ -596,10 +574,10 @@ public final class StateSpaceMethod implements FlutterMethod {
           xn += v[2 * i] * v[2 * i] + v[2 * i + 1] * v[2 * i + 1];
         }
         double worstLag = 0;
-        for (int l = 0; l < nl; l++) {
+        for (int l = 0; l < lags.lagCount(); l++) {
           double rn = 0;
-          for (int i = 0; i < perLag; i++) {
-            int row = 2 * n + l * perLag + i;
+          for (int i = 0; i < lags.states(l); i++) {
+            int row = 2 * n + lags.firstState(l) + i;
             rn += vec.getReal(row, c) * vec.getReal(row, c) + vec.getImag(row, c) * vec.getImag(row, c);
           }
           worstLag = Math.max(worstLag, rn);

@@ -21,7 +21,8 @@ import org.flexmargin.model.SensorSpec;
  * simulation, with the actuator kept apart so that its rate and position limits can be added.
  *
  * <p>States, in order: the aircraft of {@link AircraftPlant#stateSpace} (alpha, q, modal
- * coordinates and rates, aerodynamic lag states), the control law's paths, the hold and delay
+ * coordinates and rates, aerodynamic lag states: one per mode and lag root in Roger's form, one
+ * per lag root in the minimum-state form), the control law's paths, the hold and delay
  * ahead of the actuator (Padé, as in the sweep's closed-loop eigenvalues), and the actuator
  * (position, then rate for a second-order actuator). The actuator is realised here explicitly:
  * first order delta' = wa (u - delta); second order delta'' = wn^2 (u - delta) - 2 zeta wn
