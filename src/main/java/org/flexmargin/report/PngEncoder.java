@@ -42,7 +42,7 @@ final class PngEncoder {
     boolean alpha = image.getColorModel().hasAlpha();
     int channels = alpha ? 4 : 3;
     byte[] filtered = filteredRows(new Rows(image), width, height, channels);
-    ByteArrayOutputStream out = new ByteArrayOutputStream(filtered.length / 8 + 1024);
+    ByteArrayOutputStream out = new ByteArrayOutputStream();
     out.writeBytes(SIGNATURE);
     byte[] header = new byte[13];
     putInt(header, 0, width);
@@ -86,7 +86,7 @@ final class PngEncoder {
     try {
       deflater.setInput(data);
       deflater.finish();
-      ByteArrayOutputStream out = new ByteArrayOutputStream(data.length / 8 + 64);
+      ByteArrayOutputStream out = new ByteArrayOutputStream();
       byte[] buffer = new byte[64 * 1024];
       while (!deflater.finished()) {
         out.write(buffer, 0, deflater.deflate(buffer));
