@@ -30,9 +30,9 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * The PNG encoder against independent readers: the JDK's own PNG decoder ({@code ImageIO.read})
  * must return exactly the source pixels, and the chunk structure and CRCs are checked byte by byte
- * against the PNG specification (ISO/IEC 15948:2004 clauses 5.2 signature, 5.3 chunk layout, 11.2.2
- * IHDR) with {@link CRC32} and {@link Inflater} from {@code java.util.zip}. PNG is lossless, so
- * every comparison is exact.
+ * against the PNG specification (ISO/IEC 15948:2004 clauses 5.2 signature, 5.3 chunk layout,
+ * 11.2.2 IHDR; clause numbers and byte values from memory) with {@link CRC32} and {@link Inflater}
+ * from {@code java.util.zip}. PNG is lossless, so every comparison is exact.
  */
 class PngEncoderTest {
   @BeforeAll
@@ -116,8 +116,8 @@ class PngEncoderTest {
 
   @Test
   void theZlibStreamIsDeflatedAtTheFastestLevel() throws Exception {
-    // RFC 1950 section 2.2: FLEVEL (the top two bits of the second header byte) is 0 for the
-    // fastest compressor; the header as a big-endian 16-bit number is a multiple of 31
+    // RFC 1950 (zlib format) section 2.2, from memory: FLEVEL (the top two bits of the second
+    // header byte) is 0 for the fastest compressor; the header as a big-endian 16-bit number is a multiple of 31
     byte[] idat = chunks(PngEncoder.encode(drawing(200, 100, BufferedImage.TYPE_INT_RGB))).get(1).data();
     assertEquals(0x78, idat[0] & 0xFF, "deflate, 32 KiB window");
     assertEquals(0, (idat[1] & 0xFF) >>> 6, "FLEVEL: fastest");
