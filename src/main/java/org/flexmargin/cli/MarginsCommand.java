@@ -48,8 +48,7 @@ final class MarginsCommand implements Callable<Integer> {
           + "the loop on the Bode and Nichols charts and judged against the same modes and requirements.")
   Path measuredFile;
 
-  @Option(names = "--no-svg", description = "Write the charts as PNG only.")
-  boolean noSvg;
+  @Mixin ChartFileOptions chartFiles;
 
   @Mixin CommonOptions common;
 
@@ -72,7 +71,7 @@ final class MarginsCommand implements Callable<Integer> {
       tables.add(measured.frequencyHz());
     }
     Path written = ReportFolder.writeAtomically(target,
-        folder -> LoopFileReport.write(folder, file, results, tables, Version.get(), !noSvg));
+        folder -> LoopFileReport.write(folder, file, results, tables, Version.get(), chartFiles.svg));
     if (!common.quiet) {
       o.println("loop " + file.name() + " (" + file.loop().key().replace('_', ' ') + "): " + String.format(Locale.ROOT,
           "delay %.4g s, zero-order hold %s", file.delayS(), file.samplePeriodS() > 0

@@ -3,6 +3,7 @@ package org.flexmargin.cli;
 import org.flexmargin.model.InvalidInputException;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.SpeedAxisUnit;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Options of the HTML report and its charts (commands that write one: sweep, demo). */
@@ -11,8 +12,7 @@ final class ReportStyleOptions {
       description = "Speed axis of the report's charts: mps or kt (default: ${DEFAULT-VALUE}); tables show both.")
   String speedUnit = "mps";
 
-  @Option(names = "--no-svg", description = "Write the report's charts as PNG only (SVG copies are large).")
-  boolean noSvg;
+  @Mixin ChartFileOptions chartFiles = new ChartFileOptions();
 
   /** @return the report options; bad input (exit 2) for an unknown unit */
   ReportOptions reportOptions() {
@@ -21,6 +21,6 @@ final class ReportStyleOptions {
       case "kt" -> SpeedAxisUnit.KNOTS;
       default -> throw new InvalidInputException("--speed-unit", "mps or kt", "\"" + speedUnit + "\"");
     };
-    return new ReportOptions(unit, !noSvg);
+    return new ReportOptions(unit, chartFiles.svg);
   }
 }

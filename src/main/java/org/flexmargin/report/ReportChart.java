@@ -1,5 +1,7 @@
 package org.flexmargin.report;
 
+import java.awt.Graphics2D;
+import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
@@ -7,8 +9,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import javax.imageio.ImageIO;
-import org.knowm.xchart.BitmapEncoder;
 import org.knowm.xchart.XYChart;
 
 /**
@@ -33,18 +33,26 @@ public record ReportChart(String fileStem, String caption, XYChart chart, List<S
     notes = List.copyOf(notes);
   }
 
-  static {
-    // PNG bytes are encoded in memory: without this ImageIO buffers every image in a temporary
-    // file first (the same bytes, plus file-system work)
-    ImageIO.setUseCache(false);
+  /**
+   * Draws the chart on an opaque RGB image (as XChart's own bitmap export does) and encodes it
+   * with {@link PngEncoder}.
+   *
+   * @return the chart as PNG bytes, at its own pixel size
+   */
+  public byte[] png() {
+    return PngEncoder.encode(image());
   }
 
-  /**
-   * @return the chart as PNG bytes, at its own pixel size
-   * @throws IOException if encoding fails
-   */
-  public byte[] png() throws IOException {
-    return BitmapEncoder.getBitmapBytes(chart, BitmapEncoder.BitmapFormat.PNG);
+  /** @return the chart drawn on an opaque RGB image at its own pixel size */
+  BufferedImage image() {
+    BufferedImage image = new BufferedImage(chart.getWidth(), chart.getHeight(), BufferedImage.TYPE_INT_RGB);
+    Graphics2D g = image.createGraphics();
+    try {
+      chart.paint(g, chart.getWidth(), chart.getHeight());
+    } finally {
+      g.dispose();
+    }
+    return image;
   }
 
   /**

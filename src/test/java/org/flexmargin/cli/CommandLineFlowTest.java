@@ -100,18 +100,18 @@ class CommandLineFlowTest {
     assertEquals(0, r.code(), r.err());
     assertTrue(r.out().contains("estimated cost: 2 configuration(s) x 55 grid points, up to 8 modes"), r.out());
     CliRun help = run("check", "--help");
-    for (String ignored : List.of("--threads", "--speed-unit", "--no-svg", "--force", "--out")) {
+    for (String ignored : List.of("--threads", "--speed-unit", "--[no-]svg", "--force", "--out")) {
       assertFalse(listsOption(help.out(), ignored), "check does not use " + ignored + ":\n" + help.out());
     }
     CliRun quiet = run("check", DEMO, "--quiet");
     assertEquals(0, quiet.code());
     assertEquals("", quiet.out(), "--quiet leaves only errors");
     CliRun notch = run("notch-design", "--help");
-    for (String ignored : List.of("--threads", "--speed-unit", "--no-svg", "--force")) {
+    for (String ignored : List.of("--threads", "--speed-unit", "--[no-]svg", "--force")) {
       assertFalse(listsOption(notch.out(), ignored), "notch-design does not use " + ignored);
     }
     CliRun sweep = run("sweep", "--help");
-    for (String used : List.of("--threads", "--speed-unit", "--no-svg", "--force", "--requirements", "--out")) {
+    for (String used : List.of("--threads", "--speed-unit", "--[no-]svg", "--force", "--requirements", "--out")) {
       assertTrue(listsOption(sweep.out(), used), "sweep lists " + used);
     }
   }

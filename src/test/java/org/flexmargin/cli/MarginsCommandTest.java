@@ -6,8 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -21,7 +24,7 @@ class MarginsCommandTest {
   @Test
   void textbookLoopWritesItsMargins(@TempDir Path dir) throws Exception {
     Path out = dir.resolve("type1");
-    CliRun r = CliRun.of("margins", TYPE1, "--out", out.toString(), "--no-svg");
+    CliRun r = CliRun.of("margins", TYPE1, "--out", out.toString());
     assertEquals(FlexMargin.EXIT_OK, r.code(), r.err());
     assertTrue(r.out().contains("gain margin +9.54 dB"), r.out());
     JsonNode root = new ObjectMapper().readTree(out.resolve("results.json").toFile());
@@ -32,6 +35,26 @@ class MarginsCommandTest {
       assertTrue(Files.isRegularFile(out.resolve(f)), f);
     }
     assertTrue(Files.readString(out.resolve("report.html")).contains("Cautions"));
+    assertEquals(List.of(), svgFiles(out), "PNG only by default");
+  }
+
+  @Test
+  void svgCopiesOnlyWhenAsked(@TempDir Path dir) throws Exception {
+    Path out = dir.resolve("type1");
+    CliRun r = CliRun.of("margins", TYPE1, "--out", out.toString(), "--quiet", "--svg");
+    assertEquals(FlexMargin.EXIT_OK, r.code(), r.err());
+    assertEquals(List.of("bode-gain.svg", "bode-phase.svg", "nichols.svg"), svgFiles(out));
+    assertTrue(Files.readString(out.resolve("charts/nichols.svg")).contains("<svg"));
+    assertTrue(Files.readString(out.resolve("report.html")).contains("charts/nichols.svg"), "the page names the copy");
+    r = CliRun.of("margins", TYPE1, "--out", out.toString(), "--quiet", "--no-svg");
+    assertEquals(FlexMargin.EXIT_OK, r.code(), r.err());
+    assertEquals(List.of(), svgFiles(out));
+  }
+
+  private static List<String> svgFiles(Path out) throws IOException {
+    try (Stream<Path> s = Files.list(out.resolve("charts"))) {
+      return s.map(p -> p.getFileName().toString()).filter(n -> n.endsWith(".svg")).sorted().toList();
+    }
   }
 
   /**
