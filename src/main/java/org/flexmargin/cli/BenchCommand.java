@@ -23,16 +23,9 @@ import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.LoopSpec;
 import org.flexmargin.model.SpeedSweep;
-import java.util.List;
 import org.flexmargin.model.AnalysisCase;
-import org.flexmargin.report.ReportOptions;
-import org.flexmargin.report.ReportWriter;
-import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.ConfigurationModel;
-import org.flexmargin.sweep.Finding;
-import org.flexmargin.sweep.Findings;
-import org.flexmargin.sweep.SweepResult;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.ServoMargins;
 import picocli.CommandLine.Command;
@@ -146,17 +139,18 @@ final class BenchCommand implements Callable<Integer> {
   private void demo(PrintWriter out) {
     AnalysisCase demo = DemoCommand.bundledCase();
     int processors = Runtime.getRuntime().availableProcessors();
-    Timed cold = Timed.of(() -> writeReport(demo, processors));
-    out.printf(Locale.ROOT, "demo (2 configurations, 55 points, loop, clearance, report with SVG): first run in this "
-        + "JVM (with compilation) %.2f s wall, %.2f s CPU%n", cold.wallS(), cold.cpuS());
+    Timed cold = Timed.of(BenchCommand::runDemoCommand);
+    out.printf(Locale.ROOT, "demo (the demo command: 2 configurations, 55 points, loop, clearance, time-domain check, "
+        + "results and report, PNG charts): first run in this JVM (with compilation) %.2f s wall, %.2f s CPU%n",
+        cold.wallS(), cold.cpuS());
     for (int w = 0; w < 2; w++) {
-      writeReport(demo, processors);
+      runDemoCommand();
     }
-    Timed whole = Timed.of(() -> writeReport(demo, processors));
-    Timed report = Timed.of(() -> writeReport(null, processors));
-    out.printf(Locale.ROOT, "  after warm-up, %d threads: %.2f s wall, %.2f s CPU (of which report %.2f s wall, "
-        + "%.2f s CPU); peak resident memory of this process %.0f MB%n", processors, whole.wallS(), whole.cpuS(),
-        report.wallS(), report.cpuS(), peakRssMb());
+    Timed whole = Timed.of(BenchCommand::runDemoCommand);
+    Timed sweep = Timed.of(() -> new CaseSweep(processors).run(demo, n -> { }));
+    out.printf(Locale.ROOT, "  after warm-up, %d threads: %.2f s wall, %.2f s CPU (of which the sweep %.2f s wall, "
+        + "%.2f s CPU; time-domain check, results and report the rest); peak resident memory of this process "
+        + "%.0f MB%n", processors, whole.wallS(), whole.cpuS(), sweep.wallS(), sweep.cpuS(), peakRssMb());
     double oneThread = 0;
     for (int t : new int[] {1, 2, 4}) {
       Timed s = Timed.of(() -> new CaseSweep(t).run(demo, n -> { }));
@@ -178,29 +172,17 @@ final class BenchCommand implements Callable<Integer> {
             / (counts[1] - counts[0]) * 1e3);
   }
 
-  /** Sweeps the case (or reuses the last result when null) and writes results and report to a scratch folder. */
-  private SweepResult lastDemo;
-
-  private void writeReport(AnalysisCase c, int threads) {
-    CaseSweep sweep = new CaseSweep(threads);
-    if (c != null) {
-      lastDemo = sweep.run(c, n -> { });
-    }
-    SweepResult r = lastDemo;
+  /** Runs {@code flexmargin demo --quiet} in this JVM into a scratch folder, as a user would. */
+  private static void runDemoCommand() {
     java.nio.file.Path dir = null;
     try {
       dir = java.nio.file.Files.createTempDirectory("flexmargin-bench");
-      java.nio.file.Path folder = dir;
-      List<Finding> findings = Findings.of(r, new PlannedPath(r.analysisCase().sweep()).at(0));
-      sweep.inPool(() -> {
-        try {
-          ResultFiles.write(folder, r, findings, Version.get());
-          ReportWriter.write(folder, r, findings, Version.get(), ReportOptions.defaults());
-        } catch (java.io.IOException e) {
-          throw new java.io.UncheckedIOException(e);
-        }
-        return folder;
-      });
+      java.io.StringWriter sink = new java.io.StringWriter();
+      int code = FlexMargin.execute(new String[] {"demo", "--quiet", "--out", dir.resolve("demo").toString()},
+          new PrintWriter(sink), new PrintWriter(sink));
+      if (code != FlexMargin.EXIT_OK && code != FlexMargin.EXIT_REQUIREMENTS_VIOLATED) {
+        throw new IllegalStateException("the demo ended with exit code " + code + ": " + sink);
+      }
     } catch (java.io.IOException e) {
       throw new java.io.UncheckedIOException(e);
     } finally {
