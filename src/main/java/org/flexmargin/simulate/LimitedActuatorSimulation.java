@@ -2,6 +2,7 @@ package org.flexmargin.simulate;
 
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
+import org.ejml.dense.row.CommonOps_DDRM;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince54Integrator;
 import org.apache.commons.math3.ode.sampling.FixedStepHandler;
@@ -45,92 +46,32 @@ public final class LimitedActuatorSimulation {
       List<DoubleUnaryOperator> inputs, double[] initialState) {
     var system = spec.system();
     int n = system.stateCount();
-    int m = system.inputCount();
     int p = system.outputCount();
-    double[] a = system.a().data;
-    double[] b = system.b().data;
-    double[] c = system.c().data;
-    double[] d = system.d().data;
-    double[] u = new double[m];
-    double rateLimit = limits.rateLimitRadPerS();
-    double posLimit = limits.positionLimitRad();
-    int pos = spec.positionState();
-    int rateState = spec.rateState();
-    int cmd = spec.commandOutput();
-    double w = spec.omegaRadPerS();
-    double zeta = spec.dampingRatio();
-    double[] achievedRate = new double[1];
-    double[] work = new double[n];
-    double[] sampleWork = new double[n];
-    FirstOrderDifferentialEquations ode = new FirstOrderDifferentialEquations() {
-      @Override
-      public int getDimension() {
-        return n;
-      }
-
-      @Override
-      public void computeDerivatives(double t, double[] state, double[] dx) {
-        double[] x = atStop(state, pos, posLimit, work);
-        LinearSimulation.sample(inputs, t, u);
-        for (int i = 0; i < n; i++) {
-          double s = 0;
-          int base = i * n;
-          for (int j = 0; j < n; j++) {
-            s += a[base + j] * x[j];
-          }
-          for (int j = 0; j < m; j++) {
-            s += b[i * m + j] * u[j];
-          }
-          dx[i] = s;
-        }
-        double command = 0;
-        for (int j = 0; j < n; j++) {
-          command += c[cmd * n + j] * x[j];
-        }
-        for (int j = 0; j < m; j++) {
-          command += d[cmd * m + j] * u[j];
-        }
-        command = clip(command, posLimit);
-        double delta = x[pos];
-        double rate;
-        if (rateState < 0) {
-          rate = clip(w * (command - delta), rateLimit);
-        } else {
-          double r = x[rateState];
-          double acc = w * w * (command - delta) - 2 * zeta * w * r;
-          if ((r >= rateLimit && acc > 0) || (r <= -rateLimit && acc < 0)) {
-            acc = 0;
-          }
-          dx[rateState] = acc;
-          rate = clip(r, rateLimit);
-        }
-        if ((delta >= posLimit && rate > 0) || (delta <= -posLimit && rate < 0)) {
-          rate = 0;
-        }
-        dx[pos] = rate;
-        achievedRate[0] = rate;
-      }
-    };
+    LimitedDynamics ode = new LimitedDynamics(spec, limits, inputs);
     double[] times = new double[steps + 1];
     double[][] y = new double[p][steps + 1];
     int[] count = {0};
-    double[] dxBuffer = new double[n];
+    double[] c = system.c().data;
+    double[] d = system.d().data;
+    double[] sampleWork = new double[n];
+    double[] u = new double[system.inputCount()];
     StepHandler sampler = new StepNormalizer(outputStepS, new FixedStepHandler() {
       @Override
       public void init(double t0, double[] y0, double t) {}
 
       @Override
       public void handleStep(double t, double[] state, double[] xDot, boolean isLast) {
-        double[] x = atStop(state, pos, posLimit, sampleWork);
+        double[] x = atStop(state, ode.pos, ode.posLimit, sampleWork);
         int k = count[0];
         if (k > steps) {
           return;
         }
         times[k] = k * outputStepS;
-        ode.computeDerivatives(t, x, dxBuffer);
+        LinearSimulation.sample(inputs, t, u);
+        double rate = ode.actuator(x, u, null);
         LinearSimulation.outputs(c, d, x, u, y, k);
         if (spec.rateOutput() >= 0) {
-          y[spec.rateOutput()][k] = achievedRate[0];
+          y[spec.rateOutput()][k] = rate;
         }
         count[0]++;
       }
@@ -166,6 +107,94 @@ public final class LimitedActuatorSimulation {
 
   static double clip(double v, double limit) {
     return v > limit ? limit : (v < -limit ? -limit : v);
+  }
+
+  /**
+   * The right-hand side: the linear rows through their nonzero entries ({@link SparseRows}), no
+   * allocation per call, then the actuator's rows with their limits.
+   */
+  private static final class LimitedDynamics implements FirstOrderDifferentialEquations {
+    private final int n;
+    private final SparseRows a;
+    private final SparseRows b;
+    private final SparseRows command;
+    private final SparseRows commandFeedthrough;
+    private final List<DoubleUnaryOperator> inputs;
+    private final double[] u;
+    private final double[] work;
+    private final double rateLimit;
+    private final double posLimit;
+    private final int pos;
+    private final int rateState;
+    private final double w;
+    private final double zeta;
+
+    LimitedDynamics(LimitedActuatorSystem spec, ActuatorLimits limits, List<DoubleUnaryOperator> inputs) {
+      var system = spec.system();
+      this.n = system.stateCount();
+      this.a = SparseRows.of(system.a());
+      this.b = SparseRows.of(system.b());
+      int cmd = spec.commandOutput();
+      this.command = SparseRows.of(CommonOps_DDRM.extractRow(system.c(), cmd, null));
+      this.commandFeedthrough = SparseRows.of(CommonOps_DDRM.extractRow(system.d(), cmd, null));
+      this.inputs = inputs;
+      this.u = new double[system.inputCount()];
+      this.work = new double[n];
+      this.rateLimit = limits.rateLimitRadPerS();
+      this.posLimit = limits.positionLimitRad();
+      this.pos = spec.positionState();
+      this.rateState = spec.rateState();
+      this.w = spec.omegaRadPerS();
+      this.zeta = spec.dampingRatio();
+    }
+
+    @Override
+    public int getDimension() {
+      return n;
+    }
+
+    @Override
+    public void computeDerivatives(double t, double[] state, double[] dx) {
+      double[] x = atStop(state, pos, posLimit, work);
+      LinearSimulation.sample(inputs, t, u);
+      for (int i = 0; i < n; i++) {
+        dx[i] = b.rowTimes(i, u, a.rowTimes(i, x, 0));
+      }
+      dx[pos] = actuator(x, u, dx);
+    }
+
+    /**
+     * The actuator with its limits: the command clipped to the position limit, the rate (first
+     * order) or the rate state's derivative (second order, written to dx) held at the rate limit,
+     * no motion into a stop.
+     *
+     * @param x the state, position at most at its stop
+     * @param inputs the inputs at the same time
+     * @param dx the derivative, for a second-order actuator's rate state; null to skip it
+     * @return the achieved rate delta' (rad/s)
+     */
+    double actuator(double[] x, double[] inputs, double[] dx) {
+      double cmd = clip(commandFeedthrough.rowTimes(0, inputs, command.rowTimes(0, x, 0)), posLimit);
+      double delta = x[pos];
+      double rate;
+      if (rateState < 0) {
+        rate = clip(w * (cmd - delta), rateLimit);
+      } else {
+        double r = x[rateState];
+        double acc = w * w * (cmd - delta) - 2 * zeta * w * r;
+        if ((r >= rateLimit && acc > 0) || (r <= -rateLimit && acc < 0)) {
+          acc = 0;
+        }
+        if (dx != null) {
+          dx[rateState] = acc;
+        }
+        rate = clip(r, rateLimit);
+      }
+      if ((delta >= posLimit && rate > 0) || (delta <= -posLimit && rate < 0)) {
+        rate = 0;
+      }
+      return rate;
+    }
   }
 
   /** Accepted-step statistics. */
