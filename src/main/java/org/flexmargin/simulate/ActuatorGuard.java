@@ -3,6 +3,7 @@ package org.flexmargin.simulate;
 import java.util.ArrayList;
 import java.util.List;
 import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.CommonOps_DDRM;
 
 /**
  * Whether an actuator with limits stays linear over a step: every limited quantity (the command
@@ -19,25 +20,31 @@ final class ActuatorGuard {
   /** Fraction of each limit kept clear (-). */
   static final double MARGIN = 0.05;
 
-  private final double[][] rowX;
-  private final double[][] rowU;
-  private final double[][] slopeX;
-  private final double[][] slopeU;
+  private final SparseRows rowX;
+  private final SparseRows rowU;
+  private final SparseRows slopeX;
+  private final SparseRows slopeU;
   private final double[] limit;
 
   private ActuatorGuard(List<double[]> rowX, List<double[]> rowU, List<Double> limit, DMatrixRMaj a,
       DMatrixRMaj b) {
     int q = limit.size();
-    this.rowX = rowX.toArray(new double[0][]);
-    this.rowU = rowU.toArray(new double[0][]);
     this.limit = new double[q];
-    this.slopeX = new double[q][];
-    this.slopeU = new double[q][];
+    DMatrixRMaj hx = new DMatrixRMaj(q, a.numCols);
+    DMatrixRMaj hu = new DMatrixRMaj(q, b.numCols);
     for (int i = 0; i < q; i++) {
       this.limit[i] = limit.get(i);
-      this.slopeX[i] = times(this.rowX[i], a);
-      this.slopeU[i] = times(this.rowX[i], b);
+      System.arraycopy(rowX.get(i), 0, hx.data, i * a.numCols, a.numCols);
+      System.arraycopy(rowU.get(i), 0, hu.data, i * b.numCols, b.numCols);
     }
+    DMatrixRMaj ha = new DMatrixRMaj(q, a.numCols);
+    DMatrixRMaj hb = new DMatrixRMaj(q, b.numCols);
+    CommonOps_DDRM.mult(hx, a, ha);
+    CommonOps_DDRM.mult(hx, b, hb);
+    this.rowX = SparseRows.of(hx);
+    this.rowU = SparseRows.of(hu);
+    this.slopeX = SparseRows.of(ha);
+    this.slopeU = SparseRows.of(hb);
   }
 
   /**
@@ -103,7 +110,7 @@ final class ActuatorGuard {
    */
   boolean inside(double[] x, double[] u) {
     for (int i = 0; i < limit.length; i++) {
-      if (!(Math.abs(dot(rowX[i], x) + dot(rowU[i], u)) <= (1 - MARGIN) * limit[i])) {
+      if (!(Math.abs(value(i, x, u)) <= (1 - MARGIN) * limit[i])) {
         return false;
       }
     }
@@ -124,10 +131,10 @@ final class ActuatorGuard {
   boolean insideOver(double[] x0, double[] u0, double[] du0, double[] x1, double[] u1, double[] du1,
       double periodS) {
     for (int i = 0; i < limit.length; i++) {
-      double g0 = dot(rowX[i], x0) + dot(rowU[i], u0);
-      double g1 = dot(rowX[i], x1) + dot(rowU[i], u1);
-      double d0 = periodS * (dot(slopeX[i], x0) + dot(slopeU[i], u0) + dot(rowU[i], du0));
-      double d1 = periodS * (dot(slopeX[i], x1) + dot(slopeU[i], u1) + dot(rowU[i], du1));
+      double g0 = value(i, x0, u0);
+      double g1 = value(i, x1, u1);
+      double d0 = periodS * slopeU.rowTimes(i, u0, slopeX.rowTimes(i, x0, rowU.rowTimes(i, du0, 0)));
+      double d1 = periodS * slopeU.rowTimes(i, u1, slopeX.rowTimes(i, x1, rowU.rowTimes(i, du1, 0)));
       if (!(maxAbsCubic(g0, d0, g1, d1) <= (1 - MARGIN) * limit[i])) {
         return false;
       }
@@ -146,28 +153,26 @@ final class ActuatorGuard {
     // p'(s) = d0 + 2 c2 s + 3 c3 s^2
     double qa = 3 * c3;
     double qb = 2 * c2;
-    double[] roots;
     if (qa == 0) {
-      roots = qb == 0 ? new double[0] : new double[] {-d0 / qb};
-    } else {
-      double disc = qb * qb - 4 * qa * d0;
-      roots = disc < 0 ? new double[0]
-          : new double[] {(-qb + Math.sqrt(disc)) / (2 * qa), (-qb - Math.sqrt(disc)) / (2 * qa)};
+      return qb == 0 ? max : Math.max(max, interior(g0, d0, c2, c3, -d0 / qb));
     }
-    for (double s : roots) {
-      if (s > 0 && s < 1) {
-        max = Math.max(max, Math.abs(g0 + s * (d0 + s * (c2 + s * c3))));
-      }
+    double disc = qb * qb - 4 * qa * d0;
+    if (disc < 0) {
+      return max;
     }
-    return max;
+    double root = Math.sqrt(disc);
+    max = Math.max(max, interior(g0, d0, c2, c3, (-qb + root) / (2 * qa)));
+    return Math.max(max, interior(g0, d0, c2, c3, (-qb - root) / (2 * qa)));
   }
 
-  private static double dot(double[] a, double[] b) {
-    double s = 0;
-    for (int j = 0; j < a.length; j++) {
-      s += a[j] * b[j];
-    }
-    return s;
+  /** @return |p(s)| for s strictly inside (0, 1), else 0 */
+  private static double interior(double g0, double d0, double c2, double c3, double s) {
+    return s > 0 && s < 1 ? Math.abs(g0 + s * (d0 + s * (c2 + s * c3))) : 0.0;
+  }
+
+  /** @return limited quantity i: h x + e u */
+  private double value(int i, double[] x, double[] u) {
+    return rowU.rowTimes(i, u, rowX.rowTimes(i, x, 0));
   }
 
   private static double[] row(DMatrixRMaj m, int i) {
@@ -180,18 +185,5 @@ final class ActuatorGuard {
     double[] r = new double[n];
     r[i] = 1;
     return r;
-  }
-
-  /** @return r M (row vector times matrix) */
-  private static double[] times(double[] r, DMatrixRMaj m) {
-    double[] out = new double[m.numCols];
-    for (int i = 0; i < m.numRows; i++) {
-      if (r[i] != 0) {
-        for (int j = 0; j < m.numCols; j++) {
-          out[j] += r[i] * m.get(i, j);
-        }
-      }
-    }
-    return out;
   }
 }

@@ -343,7 +343,8 @@ public final class LimitedActuatorSimulation {
     private final List<DoubleUnaryOperator> inputs;
     private final DormandPrince54Integrator integrator;
     private final StepStatistics stats = new StepStatistics();
-    private final double[][] uNode;
+    private final double[] uNode;
+    private final double[] node;
     private final double[] uStart;
     private final double[] uEnd;
     private final double[] duStart;
@@ -361,7 +362,8 @@ public final class LimitedActuatorSimulation {
       this.inputs = inputs;
       this.integrator = integrator(dt);
       integrator.addStepHandler(stats);
-      this.uNode = new double[3][m];
+      this.uNode = new double[3 * m];
+      this.node = new double[m];
       this.uStart = new double[m];
       this.uEnd = new double[m];
       this.duStart = new double[m];
@@ -415,14 +417,16 @@ public final class LimitedActuatorSimulation {
       if (!prepared.guard.inside(x, uStart)) {
         return false;
       }
+      int m = uStart.length;
       for (int q = 0; q < 3; q++) {
-        LinearSimulation.sample(inputs, t + QuadraticInputDiscretization.NODES[q] * dt, uNode[q]);
+        LinearSimulation.sample(inputs, t + QuadraticInputDiscretization.NODES[q] * dt, node);
+        System.arraycopy(node, 0, uNode, q * m, m);
       }
       LinearSimulation.sample(inputs, t + dt, uEnd);
-      for (int j = 0; j < uStart.length; j++) {
+      for (int j = 0; j < m; j++) {
         double size = Math.max(Math.abs(uStart[j]), Math.abs(uEnd[j]));
         for (int q = 0; q < 3; q++) {
-          column[q] = uNode[q][j];
+          column[q] = uNode[q * m + j];
           size = Math.max(size, Math.abs(column[q]));
         }
         double tolerance = INPUT_FIT * size;

@@ -28,9 +28,9 @@ final class QuadraticInputDiscretization {
   private final int n;
   private final int m;
   private final double[] ad;
-  private final double[][] gamma;
+  private final double[] gamma;
 
-  private QuadraticInputDiscretization(int n, int m, double[] ad, double[][] gamma) {
+  private QuadraticInputDiscretization(int n, int m, double[] ad, double[] gamma) {
     this.n = n;
     this.m = m;
     this.ad = ad;
@@ -61,11 +61,15 @@ final class QuadraticInputDiscretization {
     for (int p = 0; p < 3; p++) {
       power[p] = CommonOps_DDRM.extract(e, 0, n, n + p * m, n + (p + 1) * m).data;
     }
-    double[][] gamma = new double[3][n * m];
+    // gamma, row i: G0[i, :], G1[i, :], G2[i, :] side by side, against the inputs node by node
+    double[] gamma = new double[n * 3 * m];
     for (int k = 0; k < 3; k++) {
       double[] coef = lagrange(k);
-      for (int i = 0; i < n * m; i++) {
-        gamma[k][i] = coef[0] * power[0][i] + coef[1] * power[1][i] + 2 * coef[2] * power[2][i];
+      for (int i = 0; i < n; i++) {
+        for (int j = 0; j < m; j++) {
+          int at = i * m + j;
+          gamma[i * 3 * m + k * m + j] = coef[0] * power[0][at] + coef[1] * power[1][at] + 2 * coef[2] * power[2][at];
+        }
       }
     }
     return new QuadraticInputDiscretization(n, m, CommonOps_DDRM.extract(e, 0, n, 0, n).data, gamma);
@@ -122,22 +126,29 @@ final class QuadraticInputDiscretization {
    * x[k+1] = Ad x + sum over nodes of Gk u(node k).
    *
    * @param x the state at the start of the step (not modified)
-   * @param u u[k][j]: input j at node k
+   * @param u the inputs node by node: u[k m + j] is input j at node k
    * @param next receives the state at the end of the step (not x)
    */
-  void step(double[] x, double[][] u, double[] next) {
+  void step(double[] x, double[] u, double[] next) {
+    int w = 3 * m;
+    int blocks = n - n % 4;
     for (int i = 0; i < n; i++) {
       double s = 0;
       int row = i * n;
-      for (int j = 0; j < n; j++) {
+      int j = 0;
+      // four terms a pass (fewer loop tests), added in column order as a plain loop would
+      for (; j < blocks; j += 4) {
+        s += ad[row + j] * x[j];
+        s += ad[row + j + 1] * x[j + 1];
+        s += ad[row + j + 2] * x[j + 2];
+        s += ad[row + j + 3] * x[j + 3];
+      }
+      for (; j < n; j++) {
         s += ad[row + j] * x[j];
       }
-      for (int k = 0; k < 3; k++) {
-        double[] g = gamma[k];
-        double[] uk = u[k];
-        for (int j = 0; j < m; j++) {
-          s += g[i * m + j] * uk[j];
-        }
+      int g = i * w;
+      for (int k = 0; k < w; k++) {
+        s += gamma[g + k] * u[k];
       }
       next[i] = s;
     }

@@ -38,7 +38,7 @@ class ExactStepPartsTest {
       u[k][0] = c[0] + c[1] * t + c[2] * t * t;
     }
     double[] next = new double[1];
-    q.step(new double[] {x0}, u, next);
+    q.step(new double[] {x0}, new double[] {u[0][0], u[1][0], u[2][0]}, next);
     // tolerance: rounding of the Pade exponential and of the node combination
     assertEquals(expected, next[0], 1e-14);
   }
