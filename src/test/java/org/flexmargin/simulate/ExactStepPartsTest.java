@@ -44,6 +44,29 @@ class ExactStepPartsTest {
   }
 
   @Test
+  void quadraticInputStepKeepsTwoInputsApart() {
+    // x' = a x + u1 + 2 u2 with u1 = 1 and u2 = t (closed forms as above):
+    //   x(T) = e^{aT} x0 + (e^{aT} - 1) / a + 2 (e^{aT} - 1 - aT) / a^2
+    double a = -2.0;
+    double period = 0.3;
+    double e = Math.exp(a * period);
+    double expected = e * 0.2 + (e - 1) / a + 2 * (e - 1 - a * period) / (a * a);
+    QuadraticInputDiscretization q = QuadraticInputDiscretization.of(new DMatrixRMaj(new double[][] {{a}}),
+        new DMatrixRMaj(new double[][] {{1, 2}}), period);
+    double[] u = new double[6];
+    for (int k = 0; k < 3; k++) {
+      u[2 * k] = 1;
+      u[2 * k + 1] = QuadraticInputDiscretization.NODES[k] * period;
+    }
+    double[] next = new double[1];
+    q.step(new double[] {0.2}, u, next);
+    // tolerance: rounding of the Pade exponential and of the node combination
+    assertEquals(expected, next[0], 1e-14);
+    assertThrows(IllegalArgumentException.class, () -> QuadraticInputDiscretization.of(new DMatrixRMaj(1, 1),
+        new DMatrixRMaj(1, 1), Double.POSITIVE_INFINITY));
+  }
+
+  @Test
   void quadraticFitReproducesItsPolynomialAndSlope() {
     // u(s) = 2 - s + 3 s^2: u(0) = 2, u(1) = 4, u'(0) = -1, u'(1) = 5
     double[] v = new double[3];
@@ -67,6 +90,16 @@ class ExactStepPartsTest {
     assertEquals(2 / (3 * Math.sqrt(3)), ActuatorGuard.maxAbsCubic(0, 1, 0, -2), 1e-15);
     // p = -2 s^2 + ... : negative interior extreme: p = -s (1 - s) scaled by 3 -> |min| = 3/4
     assertEquals(0.75, ActuatorGuard.maxAbsCubic(0, -3, 0, 3), 1e-15);
+    // p = -4 s^3 + 5 s^2 - s: p(0) = p(1) = 0, p'(0) = -1, p'(1) = -3; p' = 0 at s = (10 +/- sqrt 52) / 24,
+    // the larger |p| at s = (10 + sqrt 52) / 24 (the second root of p' as the bound writes them)
+    double s1 = (10 + Math.sqrt(52)) / 24;
+    assertEquals(-4 * s1 * s1 * s1 + 5 * s1 * s1 - s1, ActuatorGuard.maxAbsCubic(0, -1, 0, -3), 1e-15);
+    // its mirror -p(1 - s) = -4 s^3 + 7 s^2 - 3 s: p'(0) = -3, p'(1) = -1, the extreme at 1 - s1
+    // (the first root)
+    double s2 = 1 - s1;
+    assertEquals(Math.abs(-4 * s2 * s2 * s2 + 7 * s2 * s2 - 3 * s2), ActuatorGuard.maxAbsCubic(0, -3, 0, -1), 1e-15);
+    // p = s^3 + s + 1: p' = 3 s^2 + 1 never vanishes, largest at the end, p(1) = 3
+    assertEquals(3, ActuatorGuard.maxAbsCubic(1, 1, 3, 4), 1e-15);
     // monotone p = 1 + 2 s: largest at the end
     assertEquals(3, ActuatorGuard.maxAbsCubic(1, 2, 3, 2), 1e-15);
     // a stationary point outside [0, 1] is ignored: p = s^2 - 3 s on [0, 1] has |p| largest at s = 1
@@ -95,6 +128,15 @@ class ExactStepPartsTest {
     // input slopes +100 and -100 1/s at the ends: the rate is 9 at both ends but bulges to about 10
     assertFalse(guard.insideOver(new double[] {0}, new double[] {0.45}, new double[] {100}, new double[] {0},
         new double[] {0.45}, new double[] {-100}, 0.002));
+    // a command from the state and the second input: command = x1 + u2, rate 20 (command - x0)
+    StateSpace two = StateSpace.of(new double[][] {{-20, 20}, {0, -1}}, new double[][] {{0, 20}, {1, 0}},
+        new double[][] {{1, 0}, {0, 1}}, new double[][] {{0, 0}, {0, 1}});
+    ActuatorGuard g2 = ActuatorGuard.of(new LimitedActuatorSystem(two, 0, -1, 20, 0, 1, -1),
+        new ActuatorLimits(10, 1));
+    assertTrue(g2.inside(new double[] {0, 0.25}, new double[] {7, 0.2}), "rate 9");
+    assertFalse(g2.inside(new double[] {0, 0.28}, new double[] {0, 0.2}), "rate 9.6");
+    assertFalse(g2.inside(new double[] {0, 0}, new double[] {0, 0.96}), "command 0.96 from the input");
+    assertFalse(g2.inside(new double[] {0.94, 0.96}, new double[] {0, 0}), "command 0.96 from the state");
     // no finite limit: nothing to guard
     assertTrue(ActuatorGuard.of(lag, new ActuatorLimits(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY))
         .inside(new double[] {50}, new double[] {-50}));
