@@ -5,12 +5,14 @@ import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
+import org.flexmargin.loop.Eigenvalues;
 import org.flexmargin.loop.SisoFrequencyFunction;
 import org.flexmargin.loop.StateSpace;
 
 /**
  * Runs a {@link SimulationScenario} at a {@link SimulationPoint}: the pilot input and each
- * 1-cosine gust (exact discretisation when the actuator has no limits, Dormand-Prince otherwise),
+ * 1-cosine gust (exact discretisation when the actuator has no limits; with limits, exact steps
+ * while the actuator is clear of them and Dormand-Prince near and at them),
  * continuous turbulence (linear: exact RMS beside the simulated one), and the rate-limit
  * limit-cycle prediction on the exact loop with its check by simulation. Stateless.
  */
@@ -28,7 +30,8 @@ public final class AircraftSimulation {
    */
   public static SimulationResult run(SimulationPoint point, SimulationScenario scenario) {
     AircraftSimulationModel model = point.model(scenario.closure(), scenario.penetration(), scenario.liftGrowth());
-    double maxRe = model.system().eigenvalues().maxRealPart();
+    Eigenvalues eigenvalues = model.system().eigenvalues();
+    double maxRe = eigenvalues.maxRealPart();
     List<String> notes = new ArrayList<>(point.servo().plant().assumptions());
     notes.add("aerodynamics for the time domain: " + point.fitDescription());
     notes.addAll(point.fitWarnings());
@@ -48,13 +51,16 @@ public final class AircraftSimulation {
     }
     boolean limited = !scenario.limits().none();
     int steps = scenario.steps();
+    LimitedActuatorSimulation.Prepared prepared = limited
+        ? LimitedActuatorSimulation.prepare(model.limited(), scenario.limits(), scenario.stepS(), eigenvalues)
+        : null;
     TimeHistory pilot = null;
     IntegrationDiagnostics pilotDiag = null;
     if (scenario.pilotInput() != null) {
       InputSignal in = scenario.pilotInput();
       if (limited) {
-        LimitedActuatorSimulation.Result r = LimitedActuatorSimulation.run(model.limited(), scenario.limits(),
-            scenario.stepS(), steps, List.of(in::value, t -> 0.0), null);
+        LimitedActuatorSimulation.Result r = LimitedActuatorSimulation.run(prepared, steps,
+            List.of(in::value, t -> 0.0), null);
         pilot = r.history();
         pilotDiag = r.diagnostics();
       } else {
@@ -71,8 +77,7 @@ public final class AircraftSimulation {
             0.1);
         List<DoubleUnaryOperator> inputs = List.of(t -> 0.0, g::value);
         TimeHistory hist = limited
-            ? LimitedActuatorSimulation.run(model.limited(), scenario.limits(), scenario.stepS(), steps, inputs, null)
-                .history()
+            ? LimitedActuatorSimulation.run(prepared, steps, inputs, null).history()
             : LinearSimulation.run(model.system(), disc, steps, inputs, null, null);
         SimulationResult.GustPeak peak = peakOf(h, hist);
         peaks.add(peak);
@@ -110,7 +115,7 @@ public final class AircraftSimulation {
       cycles.addAll(RateLimitCycle.predict(loop, scenario.limits().rateLimitRadPerS(), 2 * Math.PI * CYCLE_MIN_HZ,
           2 * Math.PI * CYCLE_MAX_HZ, 600));
       for (RateLimitCycle.Prediction p : cycles) {
-        checks.add(maxRe < 0 ? check(model, scenario, p)
+        checks.add(maxRe < 0 ? check(model, scenario, p, eigenvalues)
             : "not checked by simulation: the linear loop is already unstable at this point");
       }
       notes.add("limit-cycle prediction: rate limiter at the actuator command, the rest of the loop (actuator "
@@ -125,7 +130,8 @@ public final class AircraftSimulation {
    * predicted amplitude (injected at the elevator command) and compares the free oscillation of
    * the elevator command afterwards.
    */
-  private static String check(AircraftSimulationModel model, SimulationScenario scenario, RateLimitCycle.Prediction p) {
+  private static String check(AircraftSimulationModel model, SimulationScenario scenario, RateLimitCycle.Prediction p,
+      Eigenvalues eigenvalues) {
     double[] after = new double[2];
     double[] factors = {0.7, 1.3};
     double period = 2 * Math.PI / p.omegaRadPerS();
@@ -134,11 +140,12 @@ public final class AircraftSimulation {
     double total = burst + Math.max(12 * period, 2.0);
     int steps = (int) Math.ceil(total / dt);
     int cmd = model.system().outputNames().indexOf(AircraftSimulationModel.ELEVATOR_COMMAND);
+    LimitedActuatorSimulation.Prepared prepared = LimitedActuatorSimulation.prepare(model.limited(), scenario.limits(),
+        dt, eigenvalues);
     for (int i = 0; i < 2; i++) {
       double a = factors[i] * p.amplitude();
       DoubleUnaryOperator in = t -> t < burst ? a * Math.sin(p.omegaRadPerS() * t) : 0.0;
-      TimeHistory h = LimitedActuatorSimulation.run(model.limited(), scenario.limits(), dt, steps,
-          List.of(in, t -> 0.0), null).history();
+      TimeHistory h = LimitedActuatorSimulation.run(prepared, steps, List.of(in, t -> 0.0), null).history();
       double[] u = h.values()[cmd];
       double max = 0;
       for (int k = (int) (steps - 3 * period / dt); k <= steps; k++) {

@@ -27,7 +27,7 @@ class AircraftLimitsTest {
     double dt = 0.002;
     int steps = 500;
     TimeHistory exact = LinearSimulation.run(MODEL.system(), dt, steps, List.of(DOUBLET, t -> 0.0), null, null);
-    LimitedActuatorSimulation.Result dp = LimitedActuatorSimulation.run(MODEL.limited(),
+    LimitedActuatorSimulation.Result dp = LimitedActuatorSimulation.integrated(MODEL.limited(),
         new ActuatorLimits(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY), dt, steps, List.of(DOUBLET, t -> 0.0),
         null);
     for (String name : List.of("sensor_normal_accel_g", AircraftSimulationModel.ELEVATOR,
