@@ -295,9 +295,13 @@ final class SimulateCommand implements Callable<Integer> {
       s.add(peaks(r.pilot()));
       if (r.pilotDiagnostics() != null) {
         var d = r.pilotDiagnostics();
-        s.add(String.format(Locale.ROOT, "  Dormand-Prince: %d steps (%.2e to %.2e s, mean %.2e s), %d evaluations, "
-            + "tolerances %.0e relative / %.0e absolute", d.acceptedSteps(), d.smallestStepS(), d.largestStepS(),
-            d.meanStepS(), d.evaluations(), d.relativeTolerance(), d.absoluteTolerance()));
+        s.add(d.acceptedSteps() == 0
+            ? String.format(Locale.ROOT, "  %d exact steps (the actuator stayed clear of its limits), no integrated "
+                + "step", d.exactSteps())
+            : String.format(Locale.ROOT, "  %d exact steps clear of the actuator's limits; Dormand-Prince near and at "
+                + "them: %d steps (%.2e to %.2e s, mean %.2e s), %d evaluations, tolerances %.0e relative / %.0e "
+                + "absolute", d.exactSteps(), d.acceptedSteps(), d.smallestStepS(), d.largestStepS(), d.meanStepS(),
+                d.evaluations(), d.relativeTolerance(), d.absoluteTolerance()));
       }
     }
     if (!r.gusts().isEmpty()) {

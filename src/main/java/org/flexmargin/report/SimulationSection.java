@@ -43,7 +43,8 @@ final class SimulationSection implements ReportSection {
   @Override
   public void writeBody(XhtmlWriter w) {
     w.element("p", comparison.description() + ". The aircraft, loop and Roger fit are those of the closed-loop "
-        + "sweep; with a rate limit the actuator is integrated by Dormand-Prince (docs/simulation.md). The linear "
+        + "sweep; with a rate limit, steps on which the actuator stays clear of its limits are taken exactly and the "
+        + "others integrated by Dormand-Prince (docs/simulation.md). The linear "
         + "margins above hold only while the elevator stays inside its rate limit.");
     w.open("table", "class", "per-speed compact");
     w.open("thead").open("tr");

@@ -41,6 +41,17 @@ class SimulateCommandTest {
   }
 
   @Test
+  void theIntegratorLineCountsExactAndIntegratedSteps(@TempDir Path tmp) {
+    // the demo's actuator has a 60 deg/s rate limit that a one-degree doublet at 60 m/s EAS reaches:
+    // most steps are exact, the ones at the limit integrated, and the line says both
+    String[] r = run("simulate", "mode-tables/demo/demo-case.json", "--speed-eas", "60", "--duration-s", "1.5",
+        "--out", tmp.resolve("sim").toString());
+    assertEquals("0", r[0], r[2]);
+    assertTrue(r[1].matches("(?s).*\\n  \\d+ exact steps clear of the actuator's limits; Dormand-Prince near and at "
+        + "them: [1-9]\\d* steps .*"), r[1]);
+  }
+
+  @Test
   void badOptionGivesExitTwoAndWritesNothing(@TempDir Path tmp) {
     Path out = tmp.resolve("sim");
     String[] r = run("simulate", "mode-tables/demo/demo-case.json", "--input", "wiggle", "--out", out.toString());
