@@ -13,7 +13,8 @@ import org.ejml.data.DMatrixRMaj;
  *       hqr in Wilkinson &amp; Reinsch, <i>Handbook for Automatic Computation</i> Vol. II, 1971;
  *       Golub &amp; Van Loan, <i>Matrix Computations</i>, 4th ed., Algorithms 7.5.1-7.5.2) with
  *       deflation at negligible sub-diagonal entries. Because no Schur vectors are wanted, each
- *       sweep only updates the active diagonal block.
+ *       sweep only updates the active diagonal block. When the trailing 2 x 2 block has real
+ *       eigenvalues, the one nearer the last diagonal entry is used as a double shift.
  * </ol>
  *
  * <p>An ad hoc exceptional shift every {@value #EXCEPTIONAL_PERIOD}th iteration on the same
@@ -150,17 +151,37 @@ public final class RealEigenvalues {
    */
   private int activeTop(int n, int hi, double norm) {
     for (int l = hi; l > 0; l--) {
-      double sub = Math.abs(h[l * n + l - 1]);
-      double s = Math.abs(h[(l - 1) * n + l - 1]) + Math.abs(h[l * n + l]);
-      if (s == 0) {
-        s = norm;
-      }
-      if (sub <= EPS * s) {
+      if (negligible(h[l * n + l - 1], h[(l - 1) * n + l - 1], h[(l - 1) * n + l], h[l * n + l],
+          norm)) {
         h[l * n + l - 1] = 0;
         return l;
       }
     }
     return 0;
+  }
+
+  /**
+   * Whether the sub-diagonal entry c of the diagonal block [[a, b], [c, d]] can be set to zero.
+   * Either it is below round-off of its diagonal neighbours (the test of hqr), or it is below
+   * round-off of the matrix norm (a backward-stable perturbation) and changes the eigenvalues
+   * of the block, by about b c / (a - d), only at round-off of d (the criterion of Ahues &amp;
+   * Tisseur, LAPACK Working Note 122, 1997). The second test deflates the nearly repeated
+   * eigenvalues of strongly non-normal blocks, where the first can stall above round-off.
+   *
+   * @param c sub-diagonal entry
+   * @param a diagonal entry above-left of c
+   * @param b super-diagonal entry (mirror of c)
+   * @param d diagonal entry right of c
+   * @param norm largest entry of the Hessenberg matrix
+   */
+  static boolean negligible(double c, double a, double b, double d, double norm) {
+    double sub = Math.abs(c);
+    double s = Math.abs(a) + Math.abs(d);
+    if (s == 0) {
+      s = norm;
+    }
+    return sub <= EPS * s
+        || sub <= EPS * norm && sub * Math.abs(b) <= EPS * Math.abs(d) * Math.abs(a - d);
   }
 
   /** Eigenvalues of the trailing 2 x 2 block at rows hi-1, hi into wr, wi. */
@@ -214,6 +235,17 @@ public final class RealEigenvalues {
       s11 = h[(hi - 1) * n + hi - 1];
       s22 = h[hi * n + hi];
       s12s21 = h[(hi - 1) * n + hi] * h[hi * n + hi - 1];
+      double p = 0.5 * (s11 - s22);
+      double q = p * p + s12s21;
+      if (q >= 0) {
+        // two real shifts: use the one nearer h[hi][hi] twice. Two distinct real shifts cannot
+        // separate a window holding two copies of a nearly repeated pair (they stall); one
+        // repeated shift converges to a single eigenvalue or one tight cluster at a time.
+        double z = p + Math.copySign(Math.sqrt(q), p);
+        s11 = z == 0 ? s22 : s22 - s12s21 / z;
+        s22 = s11;
+        s12s21 = 0;
+      }
     }
     // first column of (H - s1 I)(H - s2 I), written to limit cancellation
     double h00 = h[l * n + l];

@@ -11,6 +11,7 @@ import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
 import org.ejml.data.Complex_F64;
 import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.CommonOps_DDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 import org.junit.jupiter.api.Test;
@@ -217,6 +218,67 @@ class RealEigenvaluesTest {
     RealEigenvaluesResult r = RealEigenvalues.of(a);
     assertTrue(EigenvalueMatch.maxDistance(r, d, new double[n]) < 1e-12,
         "distance " + EigenvalueMatch.maxDistance(r, d, new double[n]));
+  }
+
+  @ParameterizedTest
+  @ValueSource(doubles = {1e-6, 1e-9})
+  void twoNearlyRepeatedPairsInAStronglyNonNormalMatrixConverge(double delta) {
+    // A = S T S^-1, T upper triangular with diagonal (-30, -15, -30 + delta, -15 + delta) and
+    // entries ~100 above it: two copies of a pair of distinct real eigenvalues, as the lag
+    // states of aerodynamic approximations produce. Two distinct real shifts cannot separate the
+    // copies; the iteration must still converge.
+    double[] diag = {-30, -15, -30 + delta, -15 + delta};
+    Random rnd = new Random(0);
+    DMatrixRMaj t = diagonal(diag);
+    for (int i = 0; i < 4; i++) {
+      for (int j = i + 1; j < 4; j++) {
+        t.set(i, j, 100 * rnd.nextGaussian());
+      }
+    }
+    DMatrixRMaj sim = CommonOps_DDRM.identity(4);
+    for (int i = 0; i < 16; i++) {
+      sim.data[i] += 0.5 * rnd.nextGaussian();
+    }
+    DMatrixRMaj inv = sim.copy();
+    assertTrue(CommonOps_DDRM.invert(inv));
+    DMatrixRMaj a = new DMatrixRMaj(4, 4);
+    CommonOps_DDRM.mult(sim, CommonOps_DDRM.mult(t, inv, null), a);
+    RealEigenvaluesResult r = RealEigenvalues.of(a);
+    assertTrue(r.converged());
+    // each copy: a nearly defective pair moves by about sqrt(perturbation x coupling),
+    // sqrt(4 eps * 165 * 100) ~ 4e-6 (Golub & Van Loan sec. 7.2.2); the pair's mean is well
+    // conditioned (~eps ||A|| cond(S)^2 ~ 1e-12)
+    for (double centre : new double[] {-30 + delta / 2, -15 + delta / 2}) {
+      double sum = 0;
+      int near = 0;
+      for (int i = 0; i < 4; i++) {
+        double d = Math.hypot(r.real()[i] - centre, r.imag()[i]);
+        if (d < 1) {
+          assertTrue(d < 1e-4, "distance " + d);
+          sum += r.real()[i];
+          near++;
+        }
+      }
+      assertEquals(2, near);
+      assertEquals(centre, sum / 2, 1e-9);
+    }
+  }
+
+  @Test
+  void negligibleSubDiagonalFollowsTheNeighbourAndTheEigenvaluePerturbationTests() {
+    // hqr test: |c| <= eps (|a| + |d|) = 2.2e-16 * 45 = 1.0e-14
+    assertTrue(RealEigenvalues.negligible(9e-15, -15, 100, -30, 1e3));
+    assertFalse(RealEigenvalues.negligible(1.1e-14, -15, 100, -30, 1e3));
+    // Ahues-Tisseur: |c| = 1e-13 <= eps ||H|| = 2.2e-13 and |b c| = 5e-15 <= eps |d| |a - d|
+    // = 2.2e-16 * 30 * 15 = 9.9e-14: negligible although above the hqr test
+    assertTrue(RealEigenvalues.negligible(1e-13, -15, 0.05, -30, 1e3));
+    // ... but not with a large mirror entry (|b c| = 1e-12 > 9.9e-14)
+    assertFalse(RealEigenvalues.negligible(1e-13, -15, 10, -30, 1e3));
+    // ... nor when the entry is above round-off of the matrix norm (eps * 100 = 2.2e-14)
+    assertFalse(RealEigenvalues.negligible(1e-13, -15, 0.05, -30, 100));
+    // zero diagonal neighbours: measured against the matrix norm instead
+    assertTrue(RealEigenvalues.negligible(1e-20, 0, 1, 0, 1));
+    assertFalse(RealEigenvalues.negligible(1e-10, 0, 1, 0, 1));
   }
 
   @Test
