@@ -191,10 +191,8 @@ public final class RealEigenvalues {
     double b = h[r + 1];
     double c = h[r + n];
     double d = h[r + n + 1];
+    // c != 0 (else the block would have been split), so sc > 0
     double sc = Math.max(Math.max(Math.abs(a), Math.abs(b)), Math.max(Math.abs(c), Math.abs(d)));
-    if (sc == 0) {
-      return;
-    }
     a /= sc;
     b /= sc;
     c /= sc;

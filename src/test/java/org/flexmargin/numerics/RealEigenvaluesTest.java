@@ -51,6 +51,17 @@ class RealEigenvaluesTest {
   }
 
   @ParameterizedTest
+  @ValueSource(ints = {30, 135, 300})
+  void randomMatricesNeedAboutTwoSweepsPerEigenvalue(int n) {
+    // Golub & Van Loan, Matrix Computations (sec. 7.5.6, from memory): on average about two
+    // Francis sweeps per deflated 1 x 1 or 2 x 2 block; n blocks at most. A bound of 3 n sweeps
+    // fails if a wrong shift turns the quadratic convergence into linear convergence.
+    RealEigenvaluesResult r = RealEigenvalues.of(gaussian(n, 4000L + n));
+    assertTrue(r.converged());
+    assertTrue(r.iterations() <= 3 * n, r.iterations() + " sweeps for order " + n);
+  }
+
+  @ParameterizedTest
   @ValueSource(ints = {1, 2, 3, 6, 17, 40, 100})
   void randomMatricesAgreeWithCommonsMath(int n) {
     DMatrixRMaj a = gaussian(n, 77L * n);
@@ -276,6 +287,10 @@ class RealEigenvaluesTest {
     assertFalse(RealEigenvalues.negligible(1e-13, -15, 10, -30, 1e3));
     // ... nor when the entry is above round-off of the matrix norm (eps * 100 = 2.2e-14)
     assertFalse(RealEigenvalues.negligible(1e-13, -15, 0.05, -30, 100));
+    // nearly equal neighbours a = -30, d = -30.1: hqr bound eps * 60.1 = 1.3e-14 < |c| = 2e-14;
+    // |b c| against eps |d| |a - d| = 2.2e-16 * 30.1 * 0.1 = 6.7e-16: b = 0.01 passes, b = 1 not
+    assertTrue(RealEigenvalues.negligible(2e-14, -30, 0.01, -30.1, 1e3));
+    assertFalse(RealEigenvalues.negligible(2e-14, -30, 1, -30.1, 1e3));
     // zero diagonal neighbours: measured against the matrix norm instead
     assertTrue(RealEigenvalues.negligible(1e-20, 0, 1, 0, 1));
     assertFalse(RealEigenvalues.negligible(1e-10, 0, 1, 0, 1));
