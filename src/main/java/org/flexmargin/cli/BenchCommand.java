@@ -6,6 +6,9 @@ import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
+import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 import org.flexmargin.aero.RationalFit;
 import org.flexmargin.aero.RogerApproximation;
 import org.flexmargin.ase.RationalAerodynamics;
@@ -246,12 +249,15 @@ final class BenchCommand implements Callable<Integer> {
     PlannedPath path = path();
     int states = ServoMargins.loopAt(model, cfg, loop, path.at(0)).closedLoop(rational).stateCount();
     for (int w = 0; w < 20; w++) {
-      ServoMargins.loopAt(model, cfg, loop, path.at(w % speeds)).closedLoop(rational).eigenvalues();
+      StateSpace cl = ServoMargins.loopAt(model, cfg, loop, path.at(w % speeds)).closedLoop(rational);
+      cl.eigenvalues();
+      ejmlEigenvalues(cl.a());
     }
     resetPeaks();
     long t0 = System.nanoTime();
     double buildSeconds = 0;
     double trackSeconds = 0;
+    double ejmlSeconds = 0;
     int tracked = 0;
     double[] previous = null;
     for (int p = 0; p < speeds; p++) {
@@ -259,6 +265,9 @@ final class BenchCommand implements Callable<Integer> {
       StateSpace cl = ServoMargins.loopAt(model, cfg, loop, path.at(p)).closedLoop(rational);
       buildSeconds += (System.nanoTime() - b0) * 1e-9;
       Eigenvalues e = cl.eigenvalues();
+      long j0 = System.nanoTime();
+      ejmlEigenvalues(cl.a());
+      ejmlSeconds += (System.nanoTime() - j0) * 1e-9;
       if (previous != null) {
         long k0 = System.nanoTime();
         tracked += NearestEigenvalue.near(cl.a(), previous[0], previous[1]).converged() ? 1 : 0;
@@ -266,20 +275,33 @@ final class BenchCommand implements Callable<Integer> {
       }
       previous = leastStable(e);
     }
-    double total = (System.nanoTime() - t0) * 1e-9 - trackSeconds;
+    double total = (System.nanoTime() - t0) * 1e-9 - trackSeconds - ejmlSeconds;
     double full = (total - buildSeconds) / speeds;
+    double ejml = ejmlSeconds / speeds;
     double one = trackSeconds / (speeds - 1);
     out.printf(Locale.ROOT,
         "closed-loop eigenvalues: %d modes, %d lags, %d states: %.1f ms per speed (%.1f ms assembly, "
-            + "%.1f ms EJML real eigen-decomposition, O(n^3)), %d speeds in %.2f s; peak heap %.0f MB%n",
+            + "%.1f ms balanced double-shift QR eigenvalues, O(n^3)), %d speeds in %.2f s; peak heap %.0f MB%n",
         modeCount, lags, states, total / speeds * 1e3, buildSeconds / speeds * 1e3,
         full * 1e3, speeds, total, peakHeapMb());
+    out.printf(Locale.ROOT,
+        "  eigenvalues of the same matrices: EJML general eigen-decomposition %.1f ms per speed, "
+            + "balanced double-shift QR %.1f ms per speed (%.1fx faster)%n",
+        ejml * 1e3, full * 1e3, ejml / full);
     out.printf(Locale.ROOT,
         "  one root tracked from the previous speed (shifted inverse iteration, as each onset refinement step "
             + "now does): %.2f ms per speed vs %.1f ms for the full solve (%.1fx faster; settled at %d of %d "
             + "speeds); the %d roots of the upper half plane tracked one by one would cost about %.0f ms, so "
             + "grid points keep the full solve%n",
         one * 1e3, full * 1e3, full / one, tracked, speeds - 1, (states + 1) / 2, (states + 1) / 2 * one * 1e3);
+  }
+
+  /** EJML's general real eigen-decomposition, eigenvalues only: the reference timing. */
+  private static void ejmlEigenvalues(DMatrixRMaj a) {
+    EigenDecomposition_F64<DMatrixRMaj> eig = DecompositionFactory_DDRM.eig(a.numRows, false);
+    if (!eig.decompose(a)) {
+      throw new ArithmeticException("EJML eigen-decomposition of the " + a.numRows + "-state matrix failed");
+    }
   }
 
   /** @return {re, im} of the eigenvalue with the largest real part (upper half plane) */

@@ -3,15 +3,14 @@ package org.flexmargin.loop;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import org.ejml.data.Complex_F64;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
-import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.dense.row.factory.LinearSolverFactory_ZDRM;
-import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.flexmargin.model.InvalidInputException;
+import org.flexmargin.numerics.RealEigenvalues;
+import org.flexmargin.numerics.RealEigenvaluesResult;
 
 /**
  * Immutable continuous-time linear time-invariant system
@@ -395,29 +394,21 @@ public final class StateSpace {
   }
 
   /**
-   * Eigenvalues of A (the poles, counting any that are uncontrollable or unobservable) from
-   * EJML's real general eigen-decomposition (Hessenberg reduction and double-shift QR).
+   * Eigenvalues of A (the poles, counting any that are uncontrollable or unobservable) by
+   * balancing, Hessenberg reduction and Francis double-shift QR ({@link RealEigenvalues}).
    *
-   * @return eigenvalues in rad/s, in the order EJML returns them
-   * @throws ArithmeticException if the QR iteration fails
+   * @return eigenvalues in rad/s, complex ones in conjugate pairs (positive imaginary part
+   *     first), in the order the QR iteration deflates them along the diagonal
+   * @throws ArithmeticException if the QR iteration does not converge
    */
   public Eigenvalues eigenvalues() {
     int n = stateCount();
-    double[] re = new double[n];
-    double[] im = new double[n];
-    if (n == 0) {
-      return new Eigenvalues(re, im);
+    RealEigenvaluesResult r = new RealEigenvalues().solve(a);
+    if (!r.converged()) {
+      throw new ArithmeticException("eigenvalues of the " + n + "-state matrix: the QR iteration "
+          + "did not converge in " + r.iterations() + " sweeps");
     }
-    EigenDecomposition_F64<DMatrixRMaj> eig = DecompositionFactory_DDRM.eig(n, false);
-    if (!eig.decompose(a.copy())) {
-      throw new ArithmeticException("eigen-decomposition of the " + n + "-state matrix failed");
-    }
-    for (int k = 0; k < n; k++) {
-      Complex_F64 ev = eig.getEigenvalue(k);
-      re[k] = ev.real;
-      im[k] = ev.imaginary;
-    }
-    return new Eigenvalues(re, im);
+    return new Eigenvalues(r.real(), r.imag());
   }
 
   /**
