@@ -120,7 +120,9 @@ public final class ClosedLoopSweep {
           roots.add(new ClosedLoopRoot(re[p][i], im[p][i], label(re[p][i], im[p][i], openLoop, p, sp)));
         }
       }
-      roots.sort(Comparator.comparingDouble(ClosedLoopRoot::imagRadPerS));
+      // by frequency, then real part: the listing does not depend on the order the solver found
+      // the roots in (real roots share the frequency 0)
+      roots.sort(Comparator.comparingDouble(ClosedLoopRoot::imagRadPerS).thenComparingDouble(ClosedLoopRoot::realPerS));
       points.add(new ClosedLoopPoint(p, fc, roots, n));
     }
     List<FlutterCrossing> crossings = new ArrayList<>();

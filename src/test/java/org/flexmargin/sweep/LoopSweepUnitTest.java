@@ -204,6 +204,19 @@ class LoopSweepUnitTest {
     }
     // the exact-loop refinements follow the same order
     assertEquals(2, r.refinements().size());
+    // each point lists its roots by frequency, then by real part (real roots share frequency 0),
+    // whatever order the eigen-solver found them in; this model has several real roots (lags)
+    for (ClosedLoopPoint p : r.points()) {
+      List<ClosedLoopRoot> roots = p.roots();
+      long real = roots.stream().filter(q -> q.imagRadPerS() == 0).count();
+      assertTrue(real >= 2, "real roots at " + p.condition() + ": " + real);
+      for (int i = 1; i < roots.size(); i++) {
+        ClosedLoopRoot a = roots.get(i - 1);
+        ClosedLoopRoot b = roots.get(i);
+        assertTrue(a.imagRadPerS() < b.imagRadPerS()
+            || (a.imagRadPerS() == b.imagRadPerS() && a.realPerS() <= b.realPerS()), "at " + p.condition() + ": " + roots);
+      }
+    }
     assertEquals("bend", r.refinements().get(0).rational().branchName());
     assertEquals("twist", r.refinements().get(1).rational().branchName());
   }
