@@ -8,8 +8,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.apache.commons.math3.complex.Complex;
-import org.apache.commons.math3.linear.EigenDecomposition;
-import org.apache.commons.math3.linear.MatrixUtils;
 import org.ejml.data.DMatrixRMaj;
 import org.flexmargin.aero.FitError;
 import org.flexmargin.aero.LagRealisation;
@@ -31,6 +29,7 @@ import org.flexmargin.model.SensorKind;
 import org.flexmargin.model.SensorSpec;
 import org.flexmargin.model.ShapeValue;
 import org.flexmargin.structure.StructuralModel;
+import org.flexmargin.numerics.ReferenceEigenvalues;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -98,20 +97,6 @@ class MinimumStatePlantTest {
     return new ServoLoop(plant, FlightControlLaw.of(loop, plant.condition().dynamicPressurePa()));
   }
 
-  private static List<Complex> eigenvalues(DMatrixRMaj a) {
-    double[][] rows = new double[a.numRows][a.numCols];
-    for (int i = 0; i < a.numRows; i++) {
-      for (int j = 0; j < a.numCols; j++) {
-        rows[i][j] = a.get(i, j);
-      }
-    }
-    EigenDecomposition e = new EigenDecomposition(MatrixUtils.createRealMatrix(rows));
-    List<Complex> out = new ArrayList<>();
-    for (int i = 0; i < a.numRows; i++) {
-      out.add(new Complex(e.getRealEigenvalue(i), e.getImagEigenvalue(i)));
-    }
-    return out;
-  }
 
   @Test
   void oneLagStatePerLagRoot() {
@@ -169,8 +154,8 @@ class MinimumStatePlantTest {
    * (open loop), 1.7e-11 (closed loop, the notch's lightly damped pair).
    */
   private static void assertSameRootsPlusLagPoles(DMatrixRMaj small, DMatrixRMaj full, double speed) {
-    List<Complex> fewer = eigenvalues(small);
-    List<Complex> rest = new ArrayList<>(eigenvalues(full));
+    List<Complex> fewer = ReferenceEigenvalues.of(small);
+    List<Complex> rest = new ArrayList<>(ReferenceEigenvalues.of(full));
     double radius = rest.stream().mapToDouble(Complex::abs).max().orElseThrow();
     for (Complex s : fewer) {
       Complex nearest = rest.stream().min((x, y) -> Double.compare(x.subtract(s).abs(), y.subtract(s).abs()))

@@ -7,8 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.complex.Complex;
-import org.apache.commons.math3.linear.EigenDecomposition;
-import org.apache.commons.math3.linear.MatrixUtils;
 import org.ejml.data.DMatrixRMaj;
 import org.flexmargin.aero.MinimumStateApproximation;
 import org.flexmargin.aero.RationalFit;
@@ -16,6 +14,7 @@ import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.sweep.PlannedPath;
+import org.flexmargin.numerics.ReferenceEigenvalues;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -35,20 +34,6 @@ class MinimumStateRealisationTest {
         f.errorThreshold(), f.warnings(), f.sourceDescription(), RationalFit.ROGER);
   }
 
-  private static List<Complex> eigenvalues(DMatrixRMaj a) {
-    double[][] rows = new double[a.numRows][a.numCols];
-    for (int i = 0; i < a.numRows; i++) {
-      for (int j = 0; j < a.numCols; j++) {
-        rows[i][j] = a.get(i, j);
-      }
-    }
-    EigenDecomposition e = new EigenDecomposition(MatrixUtils.createRealMatrix(rows));
-    List<Complex> out = new ArrayList<>();
-    for (int i = 0; i < a.numRows; i++) {
-      out.add(new Complex(e.getRealEigenvalue(i), e.getImagEigenvalue(i)));
-    }
-    return out;
-  }
 
   @Test
   void oneLagStatePerRootGivesTheRootsOfTheFullRealisation() {
@@ -67,8 +52,8 @@ class MinimumStateRealisationTest {
     DMatrixRMaj full = StateSpaceMethod.stateMatrix(sys, asRogerForm(ms), rho, v);
     assertEquals(2 * n + 3, small.numRows);
     assertEquals(n * (2 + 3), full.numRows);
-    List<Complex> fewer = eigenvalues(small);
-    List<Complex> all = eigenvalues(full);
+    List<Complex> fewer = ReferenceEigenvalues.of(small);
+    List<Complex> all = ReferenceEigenvalues.of(full);
     double radius = all.stream().mapToDouble(Complex::abs).max().orElseThrow();
     for (Complex s : fewer) {
       double nearest = all.stream().mapToDouble(t -> t.subtract(s).abs()).min().orElseThrow();

@@ -10,8 +10,6 @@ import java.util.Comparator;
 import java.util.List;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.complex.Complex;
-import org.apache.commons.math3.linear.EigenDecomposition;
-import org.apache.commons.math3.linear.MatrixUtils;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.aero.AeroSource;
@@ -30,6 +28,7 @@ import org.flexmargin.model.TypicalSection;
 import org.flexmargin.structure.BuiltInStructures;
 import org.flexmargin.sweep.ConfigurationModel;
 import org.flexmargin.sweep.PlannedPath;
+import org.flexmargin.numerics.ReferenceEigenvalues;
 import org.junit.jupiter.api.Test;
 
 /** Validation of {@link StateSpaceMethod}: the state-space (rational-fit) flutter method. */
@@ -212,17 +211,7 @@ class StateSpaceMethodTest {
 
   /** Eigenvalues of a real matrix by Commons Math (an independent eigen-solver), sorted. */
   private static List<Complex> eigenvalues(DMatrixRMaj a) {
-    double[][] rows = new double[a.numRows][a.numCols];
-    for (int i = 0; i < a.numRows; i++) {
-      for (int j = 0; j < a.numCols; j++) {
-        rows[i][j] = a.get(i, j);
-      }
-    }
-    EigenDecomposition e = new EigenDecomposition(MatrixUtils.createRealMatrix(rows));
-    List<Complex> out = new ArrayList<>();
-    for (int i = 0; i < a.numRows; i++) {
-      out.add(new Complex(e.getRealEigenvalue(i), e.getImagEigenvalue(i)));
-    }
+    List<Complex> out = ReferenceEigenvalues.of(a);
     out.sort(Comparator.comparingDouble(Complex::getReal).thenComparingDouble(Complex::getImaginary));
     return out;
   }
