@@ -1,5 +1,6 @@
 package org.flexmargin.aero;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.ejml.data.DMatrixRMaj;
@@ -203,7 +204,7 @@ public final class MinimumStateApproximation {
     }
     double last = history[it - 1];
     return new Convergence(it, converged, total > 0 ? Math.sqrt(last / total) : 0.0, decrease,
-        java.util.Arrays.copyOf(history, it));
+        Arrays.copyOf(history, it));
   }
 
   /**

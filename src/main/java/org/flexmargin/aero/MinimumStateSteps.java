@@ -1,5 +1,6 @@
 package org.flexmargin.aero;
 
+import java.util.Arrays;
 import java.util.Locale;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
@@ -34,8 +35,11 @@ import org.flexmargin.model.InvalidInputException;
  * pseudo-inverse, which gives the least-norm solution. Not thread-safe: one per fit.
  */
 final class MinimumStateSteps {
+  /** Coordinates n (count). */
   private final int n;
+  /** Lag roots nL (count). */
   private final int nl;
+  /** Equations per element, 2 nk (count). */
   private final int rows;
   /** Projected rows X of element i n + j: 2 nk rows of nL, row-major (dimensionless, weighted). */
   private final double[][] x;
@@ -53,11 +57,15 @@ final class MinimumStateSteps {
   /** Sum of the squared weighted targets: the weighted residual with every coefficient zero. */
   private final double targetSquares;
 
+  /** Normal equations being built, nL x nL (dimensionless after scaling). */
   private final DMatrixRMaj normal;
   /** Copy of {@link #normal} that the Cholesky factorisation overwrites. */
   private final DMatrixRMaj factor;
+  /** Right side of the normal equations, nL. */
   private final DMatrixRMaj right;
+  /** Their solution, nL: a column of E or a row of D. */
   private final DMatrixRMaj solution;
+  /** Scaling of the normal equations to a unit diagonal, 1 / sqrt(N_pp) (reciprocal units of N_pp). */
   private final double[] scale;
   private final LinearSolverDense<DMatrixRMaj> cholesky;
   private LinearSolverDense<DMatrixRMaj> pseudoInverse;
@@ -276,8 +284,8 @@ final class MinimumStateSteps {
   }
 
   private void clear() {
-    java.util.Arrays.fill(normal.data, 0);
-    java.util.Arrays.fill(right.data, 0);
+    Arrays.fill(normal.data, 0);
+    Arrays.fill(right.data, 0);
   }
 
   /** Adds element el's equations with the fixed factor f: M .* f f^T and f .* h. */
