@@ -1,12 +1,11 @@
 package org.flexmargin.aero;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
-import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
-import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.flexmargin.model.FitWeighting;
 import org.flexmargin.model.InvalidInputException;
 
@@ -31,14 +30,29 @@ import org.flexmargin.model.InvalidInputException;
  * each equation of element (i, j) is weighted by 1 / max<sub>k</sub> |Q<sub>ij</sub>| (at least
  * 1e-3 of the largest element), so that small elements are fitted to the same relative accuracy as
  * large ones; the weighted fit offers the others. D starts from the dominant singular
- * pairs of a Roger fit with the same lag roots (one unit entry per lag root where that fit is ill-posed). Each half-step cannot increase the weighted residual; iterations stop when it falls by less
- * than 1e-12 relative, or after {@value #MAX_ITERATIONS}.
+ * pairs of a Roger fit with the same lag roots (one unit entry per lag root where that fit is
+ * ill-posed). A<sub>1</sub> and A<sub>2</sub> are eliminated per element once, so that each
+ * half-step solves only nL x nL normal equations per column or row ({@link MinimumStateSteps}).
+ *
+ * <p>Stop rule: each half-step cannot increase the weighted residual sum of squares S, so S falls
+ * monotonically; the iterations stop when S has fallen by no more than
+ * {@value #STOP_RELATIVE_DECREASE} of itself over the last {@value #STOP_WINDOW} iterations (the
+ * weighted RMS error then changes by under 5e-7 relative per {@value #STOP_WINDOW} iterations, far
+ * below the 1e-3 to which fit errors are quoted), or when S is round-off (1e-28 of that of Q - A0,
+ * an RMS error of 1e-14), or after {@value #MAX_ITERATIONS}. A window rather than one iteration,
+ * because alternating least squares can creep slowly along a shallow valley before falling again.
+ * Reaching the limit is said in the fit's warnings, with the weighted error and its last decrease.
  */
 public final class MinimumStateApproximation {
 
   /** Most alternating least-squares iterations. */
   static final int MAX_ITERATIONS = 400;
-  private static final double STOP_RELATIVE_CHANGE = 1e-12;
+  /** Iterations over which the decrease of the weighted residual is measured. */
+  static final int STOP_WINDOW = 10;
+  /** Relative decrease of the weighted residual sum of squares over the window that stops. */
+  static final double STOP_RELATIVE_DECREASE = 1e-6;
+  /** Weighted residual sum of squares, relative to that of Q - A0, that is round-off: stops. */
+  private static final double ROUND_OFF_SQUARES = 1e-28;
   /** Elements smaller than this fraction of the largest are weighted as that size. */
   private static final double WEIGHT_FLOOR = 1e-3;
 
@@ -91,6 +105,15 @@ public final class MinimumStateApproximation {
    */
   public static RationalFit fit(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
       double errorThreshold, FitWeighting weighting) {
+    return fitWithConvergence(source, reducedFrequencies, lagRoots, errorThreshold, weighting).fit();
+  }
+
+  /**
+   * As {@link #fit(AeroSource, double[], double[], double, FitWeighting)}, with how the iterations
+   * ended.
+   */
+  static Result fitWithConvergence(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
+      double errorThreshold, FitWeighting weighting) {
     if (source == null) {
       throw new InvalidInputException("rfa.source", "aerodynamic data", "none");
     }
@@ -121,17 +144,16 @@ public final class MinimumStateApproximation {
         RogerApproximation.frequencyWeights(data, a0, weighting));
     double[][] d = pr.initialD(source, errorThreshold, lags);
     double[][] e = new double[nl][n];
+    Convergence convergence = iterate(pr.steps(), d, e, MAX_ITERATIONS);
+    if (!convergence.converged()) {
+      warnings.add(String.format(Locale.ROOT,
+          "minimum-state fit stopped at the iteration limit %d: weighted fit error %.3g still falling by %.3g "
+              + "relative over the last %d iterations",
+          convergence.iterations(), convergence.weightedError(), convergence.lastDecrease(), STOP_WINDOW));
+    }
     double[][] a1 = new double[n][n];
     double[][] a2 = new double[n][n];
-    double last = Double.POSITIVE_INFINITY;
-    for (int it = 0; it < MAX_ITERATIONS; it++) {
-      pr.solveColumns(d, a1, a2, e);
-      double r = pr.solveRows(e, a1, a2, d);
-      if (Double.isFinite(last) && last - r <= STOP_RELATIVE_CHANGE * last) {
-        break;
-      }
-      last = r;
-    }
+    pr.steps().velocityAndAcceleration(d, e, a1, a2, new double[nl]);
     double[][][] coefficients = new double[nl + 3][][];
     coefficients[0] = a0;
     coefficients[1] = a1;
@@ -145,8 +167,85 @@ public final class MinimumStateApproximation {
       }
       coefficients[l + 3] = m;
     }
-    return RogerApproximation.measured(source, lags, coefficients, ks, data, errorThreshold, warnings,
+    RationalFit fit = RogerApproximation.measured(source, lags, coefficients, ks, data, errorThreshold, warnings,
         RationalFit.MINIMUM_STATE);
+    return new Result(fit, convergence);
+  }
+
+  /**
+   * Alternating least squares from D until the stop rule of the class description or {@code limit}
+   * iterations.
+   *
+   * @param steps the half-steps
+   * @param d D, the start; overwritten with the last
+   * @param e E, overwritten with the last
+   * @param limit most iterations
+   * @return how it stopped
+   */
+  static Convergence iterate(MinimumStateSteps steps, double[][] d, double[][] e, int limit) {
+    int nl = e.length;
+    double[] work = new double[nl];
+    double[] history = new double[limit];
+    double total = steps.targetSquares();
+    int it = 0;
+    boolean converged = false;
+    double decrease = Double.NaN;
+    while (it < limit && !converged) {
+      steps.solveColumns(d, e);
+      steps.solveRows(e, d, work);
+      history[it] = steps.residual(d, e, work);
+      if (it >= STOP_WINDOW) {
+        double before = history[it - STOP_WINDOW];
+        decrease = before > 0 ? (before - history[it]) / before : 0.0;
+        converged = decrease <= STOP_RELATIVE_DECREASE;
+      }
+      converged |= history[it] <= ROUND_OFF_SQUARES * total;
+      it++;
+    }
+    double last = history[it - 1];
+    return new Convergence(it, converged, total > 0 ? Math.sqrt(last / total) : 0.0, decrease,
+        Arrays.copyOf(history, it));
+  }
+
+  /**
+   * How the alternating least squares ended.
+   *
+   * @param iterations iterations done, 1 to the limit
+   * @param converged whether the stop rule (rather than the limit) ended them
+   * @param weightedError weighted fit error, relative: sqrt(weighted residual sum of squares / that
+   *     of Q - A0), dimensionless
+   * @param lastDecrease relative decrease of the weighted residual sum of squares over the last
+   *     {@value #STOP_WINDOW} iterations (dimensionless), NaN when fewer were done
+   * @param history weighted residual sum of squares after each iteration (squared force coefficient
+   *     units times the squared weights)
+   */
+  record Convergence(int iterations, boolean converged, double weightedError, double lastDecrease,
+      double[] history) {
+    Convergence {
+      if (iterations < 1 || history == null || history.length != iterations || !(weightedError >= 0)) {
+        throw new IllegalArgumentException("iterations " + iterations + ", weighted error " + weightedError);
+      }
+      history = history.clone();
+    }
+
+    @Override
+    public double[] history() {
+      return history.clone();
+    }
+  }
+
+  /**
+   * A fit and how its iterations ended.
+   *
+   * @param fit the fit
+   * @param convergence the iterations
+   */
+  record Result(RationalFit fit, Convergence convergence) {
+    Result {
+      if (fit == null || convergence == null) {
+        throw new IllegalArgumentException("fit and convergence are required");
+      }
+    }
   }
 
   /** The weighted least-squares data: Q(ik) - A0 and the lag functions p / (p + beta). */
@@ -164,6 +263,7 @@ public final class MinimumStateApproximation {
     private final double[][] weight;
     /** frequency weight at k r of element (i, j), or null when every one is 1. */
     private final double[][][] frequencyWeight;
+    private MinimumStateSteps steps;
 
     Problem(int n, double[] ks, double[] lags, double[][] a0, double[][] data, boolean uniform,
         double[][][] frequencyWeight) {
@@ -251,95 +351,20 @@ public final class MinimumStateApproximation {
       return d;
     }
 
-    /**
-     * With D fixed, per column j: unknowns A1[:, j], A2[:, j], E[:, j].
-     */
-    void solveColumns(double[][] d, double[][] a1, double[][] a2, double[][] e) {
-      int unknowns = 2 * n + nl;
-      LinearSolverDense<DMatrixRMaj> ls = LinearSolverFactory_DDRM.leastSquares(2 * nk * n, unknowns);
-      for (int j = 0; j < n; j++) {
-        DMatrixRMaj a = new DMatrixRMaj(2 * nk * n, unknowns);
-        DMatrixRMaj b = new DMatrixRMaj(2 * nk * n, 1);
+    /** @return the reduced half-steps of these data (built on first use) */
+    MinimumStateSteps steps() {
+      if (steps == null) {
+        double[][][] w = new double[nk][n][n];
         for (int r = 0; r < nk; r++) {
-          double k = ks[r];
           for (int i = 0; i < n; i++) {
-            double w = weight(r, i, j);
-            int re = 2 * (r * n + i);
-            a.set(re, n + i, -k * k * w); // A2[i][j]
-            a.set(re + 1, i, k * w); // A1[i][j]
-            for (int l = 0; l < nl; l++) {
-              a.set(re, 2 * n + l, d[i][l] * lagRe[r][l] * w);
-              a.set(re + 1, 2 * n + l, d[i][l] * lagIm[r][l] * w);
+            for (int j = 0; j < n; j++) {
+              w[r][i][j] = weight(r, i, j);
             }
-            b.set(re, 0, targetRe[r][i][j] * w);
-            b.set(re + 1, 0, targetIm[r][i][j] * w);
           }
         }
-        DMatrixRMaj x = solve(ls, a, b, unknowns);
-        for (int i = 0; i < n; i++) {
-          a1[i][j] = x.get(i);
-          a2[i][j] = x.get(n + i);
-        }
-        for (int l = 0; l < nl; l++) {
-          e[l][j] = x.get(2 * n + l);
-        }
+        steps = new MinimumStateSteps(ks, lagRe, lagIm, targetRe, targetIm, w);
       }
-    }
-
-    /**
-     * With E fixed, per row i: unknowns A1[i, :], A2[i, :], D[i, :].
-     *
-     * @return the weighted residual sum of squares after the step
-     */
-    double solveRows(double[][] e, double[][] a1, double[][] a2, double[][] d) {
-      int unknowns = 2 * n + nl;
-      LinearSolverDense<DMatrixRMaj> ls = LinearSolverFactory_DDRM.leastSquares(2 * nk * n, unknowns);
-      double residual = 0;
-      for (int i = 0; i < n; i++) {
-        DMatrixRMaj a = new DMatrixRMaj(2 * nk * n, unknowns);
-        DMatrixRMaj b = new DMatrixRMaj(2 * nk * n, 1);
-        for (int r = 0; r < nk; r++) {
-          double k = ks[r];
-          for (int j = 0; j < n; j++) {
-            double w = weight(r, i, j);
-            int re = 2 * (r * n + j);
-            a.set(re, n + j, -k * k * w);
-            a.set(re + 1, j, k * w);
-            for (int l = 0; l < nl; l++) {
-              a.set(re, 2 * n + l, e[l][j] * lagRe[r][l] * w);
-              a.set(re + 1, 2 * n + l, e[l][j] * lagIm[r][l] * w);
-            }
-            b.set(re, 0, targetRe[r][i][j] * w);
-            b.set(re + 1, 0, targetIm[r][i][j] * w);
-          }
-        }
-        DMatrixRMaj x = solve(ls, a.copy(), b, unknowns);
-        for (int j = 0; j < n; j++) {
-          a1[i][j] = x.get(j);
-          a2[i][j] = x.get(n + j);
-        }
-        for (int l = 0; l < nl; l++) {
-          d[i][l] = x.get(2 * n + l);
-        }
-        DMatrixRMaj fitted = new DMatrixRMaj(b.numRows, 1);
-        org.ejml.dense.row.CommonOps_DDRM.mult(a, x, fitted);
-        for (int row = 0; row < b.numRows; row++) {
-          double diff = fitted.get(row) - b.get(row);
-          residual += diff * diff;
-        }
-      }
-      return residual;
-    }
-
-    private static DMatrixRMaj solve(LinearSolverDense<DMatrixRMaj> ls, DMatrixRMaj a, DMatrixRMaj b, int unknowns) {
-      DMatrixRMaj x = new DMatrixRMaj(unknowns, 1);
-      if (!ls.setA(a)) {
-        throw new InvalidInputException("rfa.lag_roots",
-            "lag roots far enough apart for the fitted reduced frequencies (well-posed least squares)",
-            String.format(Locale.ROOT, "a rank-deficient minimum-state step (quality %.3g)", ls.quality()));
-      }
-      ls.solve(b, x);
-      return x;
+      return steps;
     }
   }
 }

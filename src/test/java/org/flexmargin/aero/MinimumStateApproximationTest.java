@@ -56,8 +56,18 @@ class MinimumStateApproximationTest {
     // squares and still tells an exact fit from the ~1e-3 of a fit of the wrong form.
     double[] beta = MINIMUM_STATE_LAG_ROOTS;
     RogerApproximationTest.RogerFormData data = minimumStateData(11);
-    RationalFit fit = MinimumStateApproximation.fit(data,
-        RogerApproximation.defaultReducedFrequencies(1.5, RogerApproximation.DEFAULT_POINTS), beta, 0.05);
+    MinimumStateApproximation.Result result = MinimumStateApproximation.fitWithConvergence(data,
+        RogerApproximation.defaultReducedFrequencies(1.5, RogerApproximation.DEFAULT_POINTS), beta, 0.05,
+        org.flexmargin.model.FitWeighting.ELEMENT);
+    RationalFit fit = result.fit();
+    assertTrue(java.util.Arrays.deepEquals(fit.coefficients(), MinimumStateApproximation.fit(data,
+        RogerApproximation.defaultReducedFrequencies(1.5, RogerApproximation.DEFAULT_POINTS), beta, 0.05)
+        .coefficients()), "the default weighting is the element weighting");
+    // the stop rule sees round-off at once (measured: 1 iteration, weighted error 4.9e-16); 1e-14
+    // is the rule's own round-off level (1e-28 on the squares)
+    assertTrue(result.convergence().converged());
+    assertTrue(result.convergence().iterations() <= 2, result.convergence().toString());
+    assertTrue(result.convergence().weightedError() < 1e-14, result.convergence().toString());
     assertTrue(fit.error().worstRelativeError() < 1e-12, "worst " + fit.error().worstRelativeError());
     assertTrue(RogerApproximationTest.denseError(data, fit, 3.0) < 1e-12, "between and beyond the fitted k");
     assertEquals(RationalFit.MINIMUM_STATE, fit.form());
