@@ -6,8 +6,9 @@ package org.flexmargin.aero;
  *
  * <p>For element (i, j): the absolute error is max over the fitted k of |Q<sub>fit,ij</sub>(ik) -
  * Q<sub>ij</sub>(ik)| (same units as Q); the relative error is that maximum divided by the
- * largest |Q<sub>ij</sub>| over the fitted k and k = 0. An element that is zero at every fitted k is fitted
- * exactly by zero (its relative error is then 0).
+ * largest |Q<sub>ij</sub>| over the fitted k and k = 0. An element that is zero at every fitted k is
+ * judged against the largest |Q| of all elements instead: Roger's form fits it exactly by zero
+ * (relative error 0); the rank-one lag terms of the minimum-state form need not.
  *
  * <p>Example: a relative error of 0.004 on element (1, 0) means the fit of Q<sub>10</sub> is
  * nowhere further from the data than 0.4 % of the largest modulus of Q<sub>10</sub> over the fitted

@@ -331,10 +331,20 @@ public final class RogerApproximation {
       }
     }
     double[][] relative = new double[n][n];
+    double overall = 0;
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        overall = Math.max(overall, Math.max(largest[i][j], Math.abs(coefficients[0][i][j])));
+      }
+    }
     for (int i = 0; i < n; i++) {
       for (int j = 0; j < n; j++) {
         double big = Math.max(largest[i][j], Math.abs(coefficients[0][i][j]));
-        relative[i][j] = big > 0 ? absolute[i][j] / big : (absolute[i][j] == 0 ? 0.0 : Double.POSITIVE_INFINITY);
+        // an element that is zero in the data is judged against the largest element of all
+        // (Roger's form fits it exactly by zero; the rank-one lag terms of the minimum-state form
+        // need not)
+        double scale = big > 0 ? big : overall;
+        relative[i][j] = scale > 0 ? absolute[i][j] / scale : (absolute[i][j] == 0 ? 0.0 : Double.POSITIVE_INFINITY);
       }
     }
     FitError error = FitError.of(relative, absolute);
