@@ -65,23 +65,19 @@ public final class FrequencyMemo {
   public void valuesAt(double omegaRadPerS, double[] out) {
     long bits = Double.doubleToRawLongBits(omegaRadPerS);
     int mask = table.length - 1;
-    int slot = hash(bits) & mask;
-    while (table[slot] != 0) {
+    for (int slot = hash(bits) & mask; table[slot] != 0; slot = (slot + 1) & mask) {
       int e = table[slot] - 1;
       if (keys[e] == bits) {
         System.arraycopy(values, e * width, out, 0, width);
         return;
       }
-      slot = (slot + 1) & mask;
     }
     source.evaluate(omegaRadPerS, out);
     evaluations++;
     if (size == capacity) {
       clear();
-      slot = hash(bits) & (table.length - 1);
     } else if (2 * (size + 1) > table.length) {
       grow();
-      slot = findEmpty(bits);
     }
     if (size == keys.length) {
       keys = Arrays.copyOf(keys, 2 * size);
@@ -89,7 +85,7 @@ public final class FrequencyMemo {
     }
     keys[size] = bits;
     System.arraycopy(out, 0, values, size * width, width);
-    table[slot] = ++size;
+    table[findEmpty(bits)] = ++size;
   }
 
   /** @return evaluations of the source so far (requests answered from the memo not counted) */

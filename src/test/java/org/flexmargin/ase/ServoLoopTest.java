@@ -1,6 +1,7 @@
 package org.flexmargin.ase;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -217,5 +218,23 @@ class ServoLoopTest {
     // starts are grid points: every one of them costs one solve only
     assertTrue(shared.aircraftSolves() < 0.75 * separateEvaluations,
         shared.aircraftSolves() + " solves for " + separateEvaluations + " separate evaluations");
+  }
+
+  @Test
+  void sharedResponsesDeclareTheForwardDelayAndKnowTheirPaths() {
+    RigidBody rb = AircraftPlantTest.navion(0.3, Map.of());
+    AircraftPlant plant = AircraftPlantTest.plant(rb, AircraftPlantTest.oneMode(7.5, new ShapeValue(0.3, 0.15)),
+        AircraftPlantTest.zeroAero(1), AircraftPlantTest.SENSORS);
+    LoopSpec loop = new LoopSpec(new ActuatorSpec(ActuatorOrder.SECOND, 12, 0.7), AircraftPlantTest.SENSORS,
+        List.of(new FeedbackPath("gyro", 0.3, 0.6, List.of(), null),
+            new FeedbackPath("accel", 0.05, 0, List.of(), null)), 0.01, 0.0125, 2);
+    ServoLoop servo = new ServoLoop(plant, FlightControlLaw.of(loop, plant.condition().dynamicPressurePa()));
+    ServoLoop.Responses shared = servo.responses();
+    // computation delay plus half the sample period: the zero-order hold
+    // (1 - e^{-j w T})/(j w T) = sinc(w T/2) e^{-j w T/2} delays by T/2
+    assertEquals(0.01 + 0.0125 / 2, shared.brokenLoop().pureDelayS(), 1e-15);
+    assertThrows(IllegalArgumentException.class, () -> shared.brokenAtPath(2));
+    assertThrows(IllegalArgumentException.class, () -> shared.brokenAtPath(-1));
+    assertEquals(0, shared.aircraftSolves());
   }
 }

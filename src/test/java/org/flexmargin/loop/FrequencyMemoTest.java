@@ -74,6 +74,27 @@ class FrequencyMemoTest {
     memo.valuesAt(5, v);
     assertEquals(6, memo.evaluations());
     assertEquals(25.0, v[2], 0.0);
+    memo.valuesAt(3, v); // held before the memo was emptied, not since
+    assertEquals(7, memo.evaluations());
+    assertEquals(9.0, v[2], 0.0);
+  }
+
+  @Test
+  void theSmallestMemoHoldsOneValueOfOneFrequency() {
+    int[] calls = {0};
+    FrequencyMemo memo = new FrequencyMemo(1, 1, (w, out) -> {
+      calls[0]++;
+      out[0] = 3 * w;
+    });
+    double[] v = new double[1];
+    memo.valuesAt(2, v);
+    memo.valuesAt(2, v);
+    assertEquals(6.0, v[0], 0.0);
+    memo.valuesAt(3, v); // replaces w = 2
+    memo.valuesAt(2, v);
+    assertEquals(6.0, v[0], 0.0);
+    assertEquals(3, calls[0]);
+    assertEquals(1, memo.size());
   }
 
   @Test
