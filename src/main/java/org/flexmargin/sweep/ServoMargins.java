@@ -28,7 +28,10 @@ import org.flexmargin.model.NotchFilterSpec;
  * open-loop p-k root; for a mode whose branch was lost at this point, its frequency at the nearest
  * point where it converged), and at every lightly damped closed-loop root at the point when the
  * closed-loop eigenvalues are known. The loop's pure delay keeps the grid fine enough to follow
- * every phase turn ({@link org.flexmargin.loop.LoopMargins}). Stateless and thread-safe.
+ * every phase turn ({@link org.flexmargin.loop.LoopMargins}). At a point the loop and the loops
+ * broken at each path are evaluated through one {@link ServoLoop.Responses} workspace: their grids
+ * share the initial and seed frequencies, and each frequency costs one solve of the aircraft's
+ * equations however many of the searches ask for it. Stateless and thread-safe.
  */
 public final class ServoMargins {
   private final LoopMargins margins;
