@@ -7,16 +7,20 @@ package org.flexmargin.ase;
  * <p>The caller fills {@link #matrix()} (row major: entry (i, j) has its real part at
  * {@code 2 (i n + j)} and its imaginary part next to it) and {@link #rhs()} (entry i at {@code 2 i},
  * {@code 2 i + 1}), then calls {@link #solve()}, which overwrites both: the matrix with its
- * eliminated upper-triangular form, the right-hand side with the solution x. At each step the pivot
+ * eliminated form (of no use to the caller: its rows stay where they were, their pivot order is
+ * kept in a table of row starts), the right-hand side with the solution x. At each step the pivot
  * is the candidate of largest |Re| + |Im| (the modulus estimate of the BLAS complex
- * index-of-maximum routine, which cannot overflow); complex quotients use Smith's algorithm. A
- * workspace: nothing is allocated per solve; not thread-safe.
+ * index-of-maximum routine, which cannot overflow); rows are exchanged in the table, not moved;
+ * complex quotients use Smith's algorithm. A workspace: nothing is
+ * allocated per solve; not thread-safe.
  */
 final class ComplexSystemSolver {
   private final int n;
   private final double[] a;
   private final double[] b;
   private final double[] quotient = new double[2];
+  /** Start of the i-th pivot row in {@link #a}: rows are exchanged by exchanging these. */
+  private final int[] rowStart;
 
   /**
    * @param order number of unknowns n, &gt;= 1
@@ -28,6 +32,7 @@ final class ComplexSystemSolver {
     this.n = order;
     this.a = new double[2 * order * order];
     this.b = new double[2 * order];
+    this.rowStart = new int[order];
   }
 
   /** @return the number of unknowns */
@@ -53,12 +58,16 @@ final class ComplexSystemSolver {
    */
   boolean solve() {
     int row = 2 * n;
+    int[] rs = rowStart;
+    for (int i = 0; i < n; i++) {
+      rs[i] = i * row;
+    }
     for (int k = 0; k < n; k++) {
-      int kk = k * row + 2 * k;
+      int ck = 2 * k;
       int p = k;
-      double best = Math.abs(a[kk]) + Math.abs(a[kk + 1]);
+      double best = Math.abs(a[rs[k] + ck]) + Math.abs(a[rs[k] + ck + 1]);
       for (int i = k + 1; i < n; i++) {
-        int ik = i * row + 2 * k;
+        int ik = rs[i] + ck;
         double size = Math.abs(a[ik]) + Math.abs(a[ik + 1]);
         if (size > best) {
           best = size;
@@ -69,36 +78,44 @@ final class ComplexSystemSolver {
         return false;
       }
       if (p != k) {
-        swapRows(k, p);
+        int t = rs[k];
+        rs[k] = rs[p];
+        rs[p] = t;
+        double br = b[2 * k];
+        double bi = b[2 * k + 1];
+        b[2 * k] = b[2 * p];
+        b[2 * k + 1] = b[2 * p + 1];
+        b[2 * p] = br;
+        b[2 * p + 1] = bi;
       }
-      reciprocal(a[kk], a[kk + 1]);
+      int rowK = rs[k];
+      reciprocal(a[rowK + ck], a[rowK + ck + 1]);
       double invR = quotient[0];
       double invI = quotient[1];
       double bkR = b[2 * k];
       double bkI = b[2 * k + 1];
       for (int i = k + 1; i < n; i++) {
-        int ik = i * row + 2 * k;
-        double xr = a[ik];
-        double xi = a[ik + 1];
+        int rowI = rs[i];
+        double xr = a[rowI + ck];
+        double xi = a[rowI + ck + 1];
         if (xr == 0 && xi == 0) {
           continue;
         }
         double lr = xr * invR - xi * invI;
         double li = xr * invI + xi * invR;
-        int rowI = i * row;
-        int rowK = k * row;
-        for (int j = 2 * (k + 1); j < row; j += 2) {
-          double ur = a[rowK + j];
-          double ui = a[rowK + j + 1];
-          a[rowI + j] -= lr * ur - li * ui;
-          a[rowI + j + 1] -= lr * ui + li * ur;
+        int end = rowI + row;
+        for (int j = rowI + ck + 2, jk = rowK + ck + 2; j < end; j += 2, jk += 2) {
+          double ur = a[jk];
+          double ui = a[jk + 1];
+          a[j] -= lr * ur - li * ui;
+          a[j + 1] -= lr * ui + li * ur;
         }
         b[2 * i] -= lr * bkR - li * bkI;
         b[2 * i + 1] -= lr * bkI + li * bkR;
       }
     }
     for (int i = n - 1; i >= 0; i--) {
-      int rowI = i * row;
+      int rowI = rs[i];
       double sr = b[2 * i];
       double si = b[2 * i + 1];
       for (int j = i + 1; j < n; j++) {
@@ -117,21 +134,6 @@ final class ComplexSystemSolver {
       b[2 * i + 1] = quotient[1];
     }
     return true;
-  }
-
-  private void swapRows(int k, int p) {
-    int rowK = k * 2 * n;
-    int rowP = p * 2 * n;
-    for (int j = 2 * k; j < 2 * n; j++) {
-      double t = a[rowK + j];
-      a[rowK + j] = a[rowP + j];
-      a[rowP + j] = t;
-    }
-    for (int j = 0; j < 2; j++) {
-      double t = b[2 * k + j];
-      b[2 * k + j] = b[2 * p + j];
-      b[2 * p + j] = t;
-    }
   }
 
   private void reciprocal(double cr, double ci) {

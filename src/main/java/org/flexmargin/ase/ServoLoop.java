@@ -2,6 +2,7 @@ package org.flexmargin.ase;
 
 import org.ejml.data.DMatrixRMaj;
 import org.flexmargin.loop.FeedbackSign;
+import org.flexmargin.loop.FrequencyMemo;
 import org.flexmargin.loop.LinearBlock;
 import org.flexmargin.loop.SisoFrequencyFunction;
 import org.flexmargin.loop.StateSpace;
@@ -17,7 +18,8 @@ import org.flexmargin.loop.StateSpace;
  * loop is therefore {@code L = -G}: the closed loop is stable when 1 + L has no zeros in the right
  * half plane, and classical gain and phase margins of L apply directly.
  *
- * <p>Immutable; {@link #brokenLoop()} returns a function backed by a per-thread workspace.
+ * <p>Immutable; {@link #brokenLoop()} returns a function backed by a per-thread workspace,
+ * {@link #responses()} a workspace shared by the loop and the loops broken at each path.
  */
 public final class ServoLoop {
   private final AircraftPlant plant;
@@ -50,29 +52,7 @@ public final class ServoLoop {
    * @return L as a frequency function
    */
   public SisoFrequencyFunction brokenLoop() {
-    PathTerms terms = new PathTerms();
-    double[] g = new double[2 * terms.count()];
-    double delay = law.forward().pureDelayS();
-    return new SisoFrequencyFunction() {
-      @Override
-      public void response(double w, double[] reIm) {
-        terms.evaluate(w, g);
-        double sumR = 0;
-        double sumI = 0;
-        for (int p = 0; p < terms.count(); p++) {
-          sumR += g[2 * p];
-          sumI += g[2 * p + 1];
-        }
-        reIm[0] = -sumR;
-        reIm[1] = -sumI;
-      }
-
-      /** @return the forward block's delays (hold and computation), s: every path sees them */
-      @Override
-      public double pureDelayS() {
-        return delay;
-      }
-    };
+    return responses().brokenLoop();
   }
 
   /**
@@ -84,30 +64,94 @@ public final class ServoLoop {
    * @return L_p as a frequency function
    */
   public SisoFrequencyFunction brokenAtPath(int path) {
-    PathTerms terms = new PathTerms();
-    if (path < 0 || path >= terms.count()) {
-      throw new IllegalArgumentException("path " + path + " of " + terms.count());
-    }
-    double[] g = new double[2 * terms.count()];
-    return (w, reIm) -> {
-      terms.evaluate(w, g);
-      double restR = 0;
-      double restI = 0;
-      for (int p = 0; p < terms.count(); p++) {
-        if (p != path) {
-          restR += g[2 * p];
-          restI += g[2 * p + 1];
+    return responses().brokenAtPath(path);
+  }
+
+  /**
+   * @return a workspace whose broken-loop functions share one aircraft solve per frequency (not
+   *     thread-safe: one per thread)
+   */
+  public Responses responses() {
+    return new Responses();
+  }
+
+  /**
+   * The broken loop and the loops broken at each path, sharing one workspace: the path
+   * contributions C_p P_p F are computed once per frequency (one solve of the aircraft's
+   * equations) and kept in a {@link FrequencyMemo}, so that every function of this workspace asked
+   * for a frequency already seen takes the same contributions from the memo. Not thread-safe.
+   */
+  public final class Responses {
+    /** Frequencies held by the memo before it is emptied (a few times a margin search's grid). */
+    private static final int MEMO_CAPACITY = 1 << 15;
+
+    private final PathTerms terms = new PathTerms();
+    private final double[] g = new double[2 * terms.count()];
+    private final FrequencyMemo memo = new FrequencyMemo(g.length, MEMO_CAPACITY, terms::evaluate);
+
+    private Responses() {}
+
+    /**
+     * @return L = -F sum_p C_p P_p, declaring the forward block's pure delay (see
+     *     {@link ServoLoop#brokenLoop()})
+     */
+    public SisoFrequencyFunction brokenLoop() {
+      double delay = law.forward().pureDelayS();
+      return new SisoFrequencyFunction() {
+        @Override
+        public void response(double w, double[] reIm) {
+          memo.valuesAt(w, g);
+          double sumR = 0;
+          double sumI = 0;
+          for (int p = 0; p < terms.count(); p++) {
+            sumR += g[2 * p];
+            sumI += g[2 * p + 1];
+          }
+          reIm[0] = -sumR;
+          reIm[1] = -sumI;
         }
+
+        /** @return the forward block's delays (hold and computation), s: every path sees them */
+        @Override
+        public double pureDelayS() {
+          return delay;
+        }
+      };
+    }
+
+    /**
+     * @param path index of the path to break
+     * @return L_p, the other paths closed (see {@link ServoLoop#brokenAtPath(int)})
+     */
+    public SisoFrequencyFunction brokenAtPath(int path) {
+      if (path < 0 || path >= terms.count()) {
+        throw new IllegalArgumentException("path " + path + " of " + terms.count());
       }
-      double ownR = g[2 * path];
-      double ownI = g[2 * path + 1];
-      // -own / (1 - rest)
-      double dr = 1 - restR;
-      double di = -restI;
-      double d2 = dr * dr + di * di;
-      reIm[0] = -(ownR * dr + ownI * di) / d2;
-      reIm[1] = -(ownI * dr - ownR * di) / d2;
-    };
+      return (w, reIm) -> {
+        memo.valuesAt(w, g);
+        double restR = 0;
+        double restI = 0;
+        for (int p = 0; p < terms.count(); p++) {
+          if (p != path) {
+            restR += g[2 * p];
+            restI += g[2 * p + 1];
+          }
+        }
+        double ownR = g[2 * path];
+        double ownI = g[2 * path + 1];
+        // -own / (1 - rest)
+        double dr = 1 - restR;
+        double di = -restI;
+        double d2 = dr * dr + di * di;
+        reIm[0] = -(ownR * dr + ownI * di) / d2;
+        reIm[1] = -(ownI * dr - ownR * di) / d2;
+      };
+    }
+
+    /** @return solves of the aircraft's equations so far (frequencies taken from the memo not counted) */
+    public long aircraftSolves() {
+      return memo.evaluations();
+    }
   }
 
   /**

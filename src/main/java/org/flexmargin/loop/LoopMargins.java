@@ -355,6 +355,8 @@ public final class LoopMargins {
   private static final class Counted {
     private final SisoFrequencyFunction fn;
     private final double tau;
+    /** Workspace for a value of L that is used at once. */
+    private final double[] scratch = new double[2];
     private int count;
 
     Counted(SisoFrequencyFunction fn, double tau) {
@@ -401,7 +403,7 @@ public final class LoopMargins {
 
     void add(double xv, Counted f) {
       ensure();
-      double[] v = new double[2];
+      double[] v = f.scratch;
       f.at(Math.exp(xv), v);
       x[size] = xv;
       re[size] = v[0];

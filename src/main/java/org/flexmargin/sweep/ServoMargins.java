@@ -11,6 +11,7 @@ import org.flexmargin.flutter.FlutterSolution;
 import org.flexmargin.loop.Eigenvalues;
 import org.flexmargin.loop.LoopMargins;
 import org.flexmargin.loop.MarginOptions;
+import org.flexmargin.loop.SisoFrequencyFunction;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.ase.FlightControlLaw;
 import org.flexmargin.loop.LinearBlock;
@@ -27,7 +28,10 @@ import org.flexmargin.model.NotchFilterSpec;
  * open-loop p-k root; for a mode whose branch was lost at this point, its frequency at the nearest
  * point where it converged), and at every lightly damped closed-loop root at the point when the
  * closed-loop eigenvalues are known. The loop's pure delay keeps the grid fine enough to follow
- * every phase turn ({@link org.flexmargin.loop.LoopMargins}). Stateless and thread-safe.
+ * every phase turn ({@link org.flexmargin.loop.LoopMargins}). At a point the loop and the loops
+ * broken at each path are evaluated through one {@link ServoLoop.Responses} workspace: their grids
+ * share the initial and seed frequencies, and each frequency costs one solve of the aircraft's
+ * equations however many of the searches ask for it. Stateless and thread-safe.
  */
 public final class ServoMargins {
   private final LoopMargins margins;
@@ -68,7 +72,11 @@ public final class ServoMargins {
    * @return the margins
    */
   public org.flexmargin.loop.LoopMarginResult at(ServoLoop servo, Eigenvalues seeds, double maxFrequencyHz) {
-    return margins.analyse(servo.brokenLoop(), 2 * Math.PI * MIN_FREQUENCY_HZ, 2 * Math.PI * maxFrequencyHz, seeds);
+    return inBand(servo.brokenLoop(), seeds, maxFrequencyHz);
+  }
+
+  private LoopMarginResult inBand(SisoFrequencyFunction loop, Eigenvalues seeds, double maxFrequencyHz) {
+    return margins.analyse(loop, 2 * Math.PI * MIN_FREQUENCY_HZ, 2 * Math.PI * maxFrequencyHz, seeds);
   }
 
   /** Damping ratio given to the seed of a mode whose branch was lost (spacing of its grid points). */
@@ -137,10 +145,13 @@ public final class ServoMargins {
       ServoLoop servo = loopAt(model, configuration, loop, fc);
       Eigenvalues seeds = closedLoop == null ? seeds(openLoop, p)
           : seeds(openLoop, p).concat(closedLoopSeeds(closedLoop.points().get(p)));
-      LoopMarginResult main = at(servo, seeds, maxHz);
+      // one workspace: the loop and the loops broken at each path share the aircraft solves at
+      // the frequencies their grids have in common
+      ServoLoop.Responses responses = servo.responses();
+      LoopMarginResult main = inBand(responses.brokenLoop(), seeds, maxHz);
       List<LoopMarginResult> perPath = new ArrayList<>();
       for (int k = 0; k < loop.paths().size(); k++) {
-        perPath.add(margins.analyse(servo.brokenAtPath(k), 2 * Math.PI * MIN_FREQUENCY_HZ, 2 * Math.PI * maxHz, seeds));
+        perPath.add(inBand(responses.brokenAtPath(k), seeds, maxHz));
       }
       return new ServoPoint(p, fc, main, perPath, notchChecks(loop, openLoop, p, main));
     });

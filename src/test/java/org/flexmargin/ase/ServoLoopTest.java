@@ -1,6 +1,7 @@
 package org.flexmargin.ase;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -144,5 +145,96 @@ class ServoLoopTest {
       assertEquals(-a[0], sum.getReal(), 1e-9 * scale, "at " + w);
       assertEquals(-a[1], sum.getImaginary(), 1e-9 * scale, "at " + w);
     }
+  }
+
+  /** The two-path loop of {@link #brokenLoopFromTheFrequencyDomainEqualsTheStateSpaceChain()}. */
+  private static ServoLoop twoPathLoop(TestRational aero) {
+    RigidBody rb = AircraftPlantTest.navion(0.3, Map.of("bend", new org.flexmargin.model.ModeCoupling(0.01, -0.02, 0.4, 0.5)));
+    AircraftPlant plant = AircraftPlantTest.plant(rb, AircraftPlantTest.oneMode(7.5, new ShapeValue(0.3, 0.15)), aero,
+        AircraftPlantTest.SENSORS);
+    LoopSpec loop = new LoopSpec(new ActuatorSpec(ActuatorOrder.SECOND, 12, 0.7), AircraftPlantTest.SENSORS,
+        List.of(new FeedbackPath("gyro", 0.3, 0.6, List.of(new NotchFilterSpec(8.6, 0.05, 0.5)), null),
+            new FeedbackPath("accel", 0.05, 0, List.of(), null)), 0, 0, 2);
+    return new ServoLoop(plant, FlightControlLaw.of(loop, plant.condition().dynamicPressurePa()));
+  }
+
+  private static TestRational rationalAero() {
+    return new TestRational(0.6, new double[] {0.3},
+        new org.ejml.data.DMatrixRMaj(new double[][] {{-0.4}}), new org.ejml.data.DMatrixRMaj(new double[][] {{-0.2}}),
+        new org.ejml.data.DMatrixRMaj(new double[][] {{-0.01}}), new org.ejml.data.DMatrixRMaj(new double[][] {{0.1}}));
+  }
+
+  @Test
+  void sharedResponsesSolveTheAircraftOncePerFrequencyAndMatchTheStateSpaceChain() {
+    TestRational aero = rationalAero();
+    ServoLoop servo = twoPathLoop(aero);
+    ServoLoop.Responses shared = servo.responses();
+    SisoFrequencyFunction l = shared.brokenLoop();
+    SisoFrequencyFunction l0 = shared.brokenAtPath(0);
+    SisoFrequencyFunction l1 = shared.brokenAtPath(1);
+    double[] w = {0.3, 2.0, 10.0, 47.1, 53.0, 120.0};
+    FrequencyResponse g = servo.openChain(aero).frequencyResponse(w);
+    double[] v = new double[2];
+    double[] fresh = new double[2];
+    for (int pass = 0; pass < 2; pass++) {
+      for (int k = 0; k < w.length; k++) {
+        l.response(w[k], v);
+        double re = -g.real(k, 0, 0);
+        double im = -g.imag(k, 0, 0);
+        double scale = Math.max(1e-9, Math.hypot(re, im));
+        // 1e-9 relative: the same transfer function computed two exact ways (second pass: from
+        // the memo)
+        assertEquals(re, v[0], 1e-9 * scale, "re at " + w[k] + ", pass " + pass);
+        assertEquals(im, v[1], 1e-9 * scale, "im at " + w[k] + ", pass " + pass);
+        for (int p = 0; p < 2; p++) {
+          (p == 0 ? l0 : l1).response(w[k], v);
+          servo.brokenAtPath(p).response(w[k], fresh);
+          // a value shared with the other loops is the very value of a separate evaluation
+          assertEquals(fresh[0], v[0], 0.0, "path " + p + " re at " + w[k]);
+          assertEquals(fresh[1], v[1], 0.0, "path " + p + " im at " + w[k]);
+        }
+      }
+    }
+    assertEquals(w.length, shared.aircraftSolves(), "one aircraft solve per distinct frequency");
+  }
+
+  @Test
+  void marginsThroughTheSharedResponsesEqualSeparateOnesWithFewerAircraftSolves() {
+    ServoLoop servo = twoPathLoop(rationalAero());
+    ServoLoop.Responses shared = servo.responses();
+    org.flexmargin.loop.LoopMargins margins = new org.flexmargin.loop.LoopMargins();
+    Eigenvalues seeds = new Eigenvalues(new double[] {-0.5}, new double[] {47.0});
+    int separateEvaluations = 0;
+    for (int p = -1; p < 2; p++) {
+      SisoFrequencyFunction separate = p < 0 ? servo.brokenLoop() : servo.brokenAtPath(p);
+      SisoFrequencyFunction viaShared = p < 0 ? shared.brokenLoop() : shared.brokenAtPath(p);
+      org.flexmargin.loop.LoopMarginResult a = margins.analyse(separate, 0.05, 400, seeds);
+      org.flexmargin.loop.LoopMarginResult b = margins.analyse(viaShared, 0.05, 400, seeds);
+      // the same values of L at the same frequencies: the same margins to the last bit
+      assertEquals(a, b, "loop " + p);
+      separateEvaluations += a.diagnostics().functionEvaluations();
+    }
+    // the three grids share their initial and seed points, the root brackets and maximisation
+    // starts are grid points: every one of them costs one solve only
+    assertTrue(shared.aircraftSolves() < 0.75 * separateEvaluations,
+        shared.aircraftSolves() + " solves for " + separateEvaluations + " separate evaluations");
+  }
+
+  @Test
+  void sharedResponsesDeclareTheForwardDelayAndKnowTheirPaths() {
+    RigidBody rb = AircraftPlantTest.navion(0.3, Map.of());
+    AircraftPlant plant = AircraftPlantTest.plant(rb, AircraftPlantTest.oneMode(7.5, new ShapeValue(0.3, 0.15)),
+        AircraftPlantTest.zeroAero(1), AircraftPlantTest.SENSORS);
+    LoopSpec loop = new LoopSpec(new ActuatorSpec(ActuatorOrder.SECOND, 12, 0.7), AircraftPlantTest.SENSORS,
+        List.of(new FeedbackPath("gyro", 0.3, 0.6, List.of(), null),
+            new FeedbackPath("accel", 0.05, 0, List.of(), null)), 0.01, 0.0125, 2);
+    ServoLoop servo = new ServoLoop(plant, FlightControlLaw.of(loop, plant.condition().dynamicPressurePa()));
+    ServoLoop.Responses shared = servo.responses();
+    // computation delay plus half the sample period: the zero-order hold
+    // (1 - e^{-j w T})/(j w T) = sinc(w T/2) e^{-j w T/2} delays by T/2
+    assertEquals(0.01 + 0.0125 / 2, shared.brokenLoop().pureDelayS(), 1e-15);
+    assertThrows(IllegalArgumentException.class, () -> shared.brokenAtPath(2));
+    assertThrows(IllegalArgumentException.class, () -> shared.brokenAtPath(-1));
+    assertEquals(0, shared.aircraftSolves());
   }
 }
