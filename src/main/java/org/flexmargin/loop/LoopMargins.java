@@ -263,8 +263,9 @@ public final class LoopMargins {
     // 6. peak gain and disk margin
     DoubleBinaryOperator gain = Math::hypot;
     DoubleBinaryOperator diskInverse = (re, im) -> Math.hypot(1 - re, im) / (2 * Math.hypot(1 + re, im));
-    double[] peak = maximise(g, gain, f, v);
-    double[] disk = maximise(g, diskInverse, f, v);
+    int refined = options.refineExtrema() ? MAXIMA_REFINED : 0;
+    double[] peak = maximise(g, gain, f, v, refined);
+    double[] disk = maximise(g, diskInverse, f, v, refined);
     double wPeak = Math.exp(peak[0]);
     PeakGain peakGain = new PeakGain(wPeak, wPeak / (2 * Math.PI), peak[1],
         20 * Math.log10(peak[1]));
@@ -279,9 +280,10 @@ public final class LoopMargins {
   /**
    * Maximises q(L(j w)) over the grid: takes q at every grid point from the L already sampled
    * there (the same value a new evaluation would give), refines the largest local maxima by
-   * Brent's method on their neighbouring intervals, returns {x, q}.
+   * Brent's method on their neighbouring intervals (the {@code refined} largest; none leaves the
+   * grid's largest sample), returns {x, q}.
    */
-  private static double[] maximise(Grid g, DoubleBinaryOperator ofL, Counted f, double[] v) {
+  private static double[] maximise(Grid g, DoubleBinaryOperator ofL, Counted f, double[] v, int refined) {
     DoubleUnaryOperator q = x -> {
       f.at(Math.exp(x), v);
       return ofL.applyAsDouble(v[0], v[1]);
@@ -308,7 +310,7 @@ public final class LoopMargins {
       return new double[] {bestX, best};
     }
     BrentOptimizer opt = new BrentOptimizer(1e-12, 1e-14);
-    for (int m = 0; m < Math.min(MAXIMA_REFINED, maxima.size()); m++) {
+    for (int m = 0; m < Math.min(refined, maxima.size()); m++) {
       int i = maxima.get(m);
       double lo = g.x[Math.max(0, i - 1)];
       double hi = g.x[Math.min(g.size - 1, i + 1)];

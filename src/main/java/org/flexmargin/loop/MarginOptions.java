@@ -14,9 +14,14 @@ package org.flexmargin.loop;
  *     extra grid points around their damped frequency (0 disables seeding)
  * @param seedPointsPerPole grid points added on each side of a seeding pole (&gt;= 0), spaced by
  *     the pole's |real part| (its half-power half-bandwidth)
+ * @param refineExtrema whether the peak gain and the disk margin are refined between grid points
+ *     by Brent's method (true) or taken at the grid's largest sample (false: within the grid's
+ *     gain step of the refined value, for runs that report neither, such as campaign samples;
+ *     crossovers and margins are refined either way)
  */
 public record MarginOptions(int pointsPerDecade, double maxPhaseStepDeg, double maxGainStepDb,
-    int maxPoints, int maxRefinementDepth, double seedDampingRatio, int seedPointsPerPole) {
+    int maxPoints, int maxRefinementDepth, double seedDampingRatio, int seedPointsPerPole,
+    boolean refineExtrema) {
 
   /** Validates. */
   public MarginOptions {
@@ -36,6 +41,19 @@ public record MarginOptions(int pointsPerDecade, double maxPhaseStepDeg, double 
         String.valueOf(seedDampingRatio));
     StateSpace.require(seedPointsPerPole >= 0, "margin_options.seed_points_per_pole", ">= 0",
         String.valueOf(seedPointsPerPole));
+  }
+
+  /** The settings with the peak gain and disk margin refined. */
+  public MarginOptions(int pointsPerDecade, double maxPhaseStepDeg, double maxGainStepDb, int maxPoints,
+      int maxRefinementDepth, double seedDampingRatio, int seedPointsPerPole) {
+    this(pointsPerDecade, maxPhaseStepDeg, maxGainStepDb, maxPoints, maxRefinementDepth, seedDampingRatio,
+        seedPointsPerPole, true);
+  }
+
+  /** @return these settings with the peak gain and the disk margin taken at the grid's samples */
+  public MarginOptions withoutExtremaRefinement() {
+    return new MarginOptions(pointsPerDecade, maxPhaseStepDeg, maxGainStepDb, maxPoints, maxRefinementDepth,
+        seedDampingRatio, seedPointsPerPole, false);
   }
 
   /**

@@ -15,6 +15,7 @@ import org.flexmargin.flutter.FlutterSolution;
 import org.flexmargin.flutter.KMethod;
 import org.flexmargin.flutter.PkMethod;
 import org.flexmargin.flutter.StateSpaceMethod;
+import org.flexmargin.loop.MarginOptions;
 import org.flexmargin.model.AnalysisCase;
 import org.flexmargin.model.Configuration;
 import org.flexmargin.model.ElasticMode;
@@ -183,6 +184,24 @@ public final class CaseSweep {
    */
   public static ConfigurationResult analyse(ConfigurationModel model, Configuration c, PlannedPath path,
       AnalysisCase analysisCase, SweepProgress progress) {
+    return analyse(model, c, path, analysisCase, progress, MarginOptions.defaults());
+  }
+
+  /**
+   * As {@link #analyse(ConfigurationModel, Configuration, PlannedPath, AnalysisCase, SweepProgress)}
+   * with the loop margins' search settings given (a campaign sample, which reports neither the peak
+   * gain nor the disk margin, leaves their refinement out; onsets and verdicts do not depend on it).
+   *
+   * @param model the configuration's model
+   * @param c configuration
+   * @param path sweep path
+   * @param analysisCase the case (options, loop, requirements)
+   * @param progress told of each completed stage
+   * @param marginOptions the loop margins' search settings
+   * @return the configuration's results
+   */
+  public static ConfigurationResult analyse(ConfigurationModel model, Configuration c, PlannedPath path,
+      AnalysisCase analysisCase, SweepProgress progress, MarginOptions marginOptions) {
     long start = System.nanoTime();
     AeroelasticSystem system = model.system();
     DivergenceSolver div = new DivergenceSolver();
@@ -210,14 +229,14 @@ public final class CaseSweep {
       ClosedLoopResult closed = new ClosedLoopSweep().analyse(model, c, analysisCase.loop(), path, flutter,
           analysisCase.options());
       progress.stageDone(c.name(), "closed loop");
-      List<ServoPoint> margins = ServoMargins.withDefaults().along(model, c, analysisCase.loop(), path, flutter,
+      List<ServoPoint> margins = new ServoMargins(marginOptions).along(model, c, analysisCase.loop(), path, flutter,
           closed);
       progress.stageDone(c.name(), "loop margins");
       servo = new ServoResult(margins, closed);
     }
     ClearanceResult clearance = null;
     if (analysisCase.requirements() != null) {
-      clearance = new ClearanceSweep().assess(model, c, analysisCase.loop(), path, flutter, divergence, servo,
+      clearance = new ClearanceSweep(marginOptions).assess(model, c, analysisCase.loop(), path, flutter, divergence, servo,
           analysisCase.requirements(), Math.max(0.05, analysisCase.options().onsetSpeedToleranceMps()));
       progress.stageDone(c.name(), "clearance");
     }

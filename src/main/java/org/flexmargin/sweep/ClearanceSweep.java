@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
@@ -27,6 +28,7 @@ import org.flexmargin.flutter.CrossingKind;
 import org.flexmargin.flutter.DivergenceResult;
 import org.flexmargin.flutter.FlutterCrossing;
 import org.flexmargin.flutter.FlutterSolution;
+import org.flexmargin.loop.MarginOptions;
 import org.flexmargin.loop.ClosedLoopStability;
 import org.flexmargin.loop.LoopMarginResult;
 import org.flexmargin.model.ClearanceRequirements;
@@ -41,6 +43,18 @@ import org.flexmargin.model.LoopSpec;
  * minimum damping rule (open and closed loop). Stateless and thread-safe.
  */
 public final class ClearanceSweep {
+  /** The loop margins' search settings of the margin-onset refinement. */
+  private final MarginOptions marginOptions;
+
+  /** With the default margin search settings. */
+  public ClearanceSweep() {
+    this(MarginOptions.defaults());
+  }
+
+  /** @param marginOptions the loop margins' search settings of the margin-onset refinement */
+  public ClearanceSweep(MarginOptions marginOptions) {
+    this.marginOptions = Objects.requireNonNull(marginOptions, "margin options");
+  }
   private static final int BRENT_MAX_EVALUATIONS = 30;
 
   /**
@@ -225,7 +239,7 @@ public final class ClearanceSweep {
       LoopSpec loop, PlannedPath path, FlutterSolution flutter, List<PointAssessment> points,
       ClearanceRequirements requirements, double maxHz, double tolMps) {
     int p = indexOfSpeed(points, b.passingSpeedEasMps());
-    ServoMargins margins = ServoMargins.withDefaults();
+    ServoMargins margins = new ServoMargins(marginOptions);
     int[] evaluations = {0};
     PointAssessment[] last = {null};
     DoubleUnaryOperator excess = MarginOnsets.excessAlongSpeed(v -> {

@@ -121,6 +121,30 @@ class LoopMarginCasesTest {
   }
 
   @Test
+  void withoutExtremaRefinementThePeakIsTheGridsLargestSampleAndTheRestIsUnchanged() {
+    // the same two resonances (peaks 20 and 25, maximum found independently by Brent): without
+    // refinement the peak gain is a grid sample, so at most the true maximum, and within the
+    // grid's gain step of it (1.5 dB: neighbouring samples differ by less, and the resonance is
+    // seeded); crossovers and margins are refined either way, so they are the same numbers
+    LinearBlock loop = twoModesBlock();
+    UnivariatePointValuePair ref = maximise(w -> twoModes(w).abs(), 0.1, 100);
+    LoopMarginResult full = MARGINS.analyse(loop, 0.1, 100);
+    LoopMarginResult coarse = new LoopMargins(MarginOptions.defaults().withoutExtremaRefinement())
+        .analyse(loop, 0.1, 100);
+    assertTrue(MarginOptions.defaults().refineExtrema());
+    assertTrue(coarse.peakGain().magnitude() <= ref.getValue() * (1 + 1e-12), coarse.peakGain().toString());
+    assertTrue(20 * Math.log10(ref.getValue() / coarse.peakGain().magnitude()) < 1.5, coarse.peakGain().toString());
+    assertTrue(coarse.peakGain().omegaRadPerS() > 10, "the 15 rad/s resonance still governs");
+    assertTrue(coarse.diskMargin().alpha() >= full.diskMargin().alpha() * (1 - 1e-12),
+        "the grid's smallest disk can only be larger: " + coarse.diskMargin() + " vs " + full.diskMargin());
+    assertEquals(full.gainCrossovers(), coarse.gainCrossovers());
+    assertEquals(full.phaseCrossovers(), coarse.phaseCrossovers());
+    assertEquals(full.closedLoopStability(), coarse.closedLoopStability());
+    assertTrue(coarse.diagnostics().functionEvaluations() < full.diagnostics().functionEvaluations(),
+        coarse.diagnostics() + " vs " + full.diagnostics());
+  }
+
+  @Test
   void theResonanceClosestToMinusOneGovernsTheDiskMargin() {
     // Disk margin alpha = 1 / max |(1 - L)/(2 (1 + L))| (Seiler, Packard & Gahinet 2020,
     // docs/validation.md sec. 8): of the two local maxima the first, lower-frequency one governs
