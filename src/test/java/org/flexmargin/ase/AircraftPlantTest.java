@@ -9,7 +9,6 @@ import org.ejml.data.DMatrixRMaj;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.atmosphere.StandardAtmosphere;
 import org.flexmargin.loop.Eigenvalues;
-import org.flexmargin.loop.FrequencyResponse;
 import org.flexmargin.loop.StateSpace;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.CouplingOrigin;
@@ -132,20 +131,7 @@ class AircraftPlantTest {
     AircraftPlant p = plant(navion(0.1, coupling), modes, aero, sensors);
     StateSpace ss = p.stateSpace(aero);
     double[] w = {0.05, 0.7, 3.0, 12.0, 25.1, 56.0, 200.0};
-    FrequencyResponse fr = ss.frequencyResponse(w);
-    AircraftPlant.FrequencyEvaluator ev = p.frequencyEvaluator();
-    double[] out = new double[2 * sensors.size()];
-    for (int k = 0; k < w.length; k++) {
-      ev.response(w[k], out);
-      for (int s = 0; s < sensors.size(); s++) {
-        double re = fr.real(k, s, 0);
-        double im = fr.imag(k, s, 0);
-        double scale = Math.max(1e-6, Math.hypot(re, im));
-        // 1e-9 relative: two exact computations of the same transfer function
-        assertEquals(re, out[2 * s], 1e-9 * scale, "re, sensor " + s + " at " + w[k]);
-        assertEquals(im, out[2 * s + 1], 1e-9 * scale, "im, sensor " + s + " at " + w[k]);
-      }
-    }
+    PlantResponseCheck.stateSpaceEqualsEvaluator(p, ss, w, sensors.size());
   }
 
   static int lowestFrequencyComplex(Eigenvalues e) {

@@ -14,7 +14,6 @@ import org.flexmargin.aero.LagRealisation;
 import org.flexmargin.aero.RationalFit;
 import org.flexmargin.atmosphere.FlightCondition;
 import org.flexmargin.atmosphere.StandardAtmosphere;
-import org.flexmargin.loop.FrequencyResponse;
 import org.flexmargin.loop.StateSpace;
 import org.flexmargin.model.ActuatorOrder;
 import org.flexmargin.model.ActuatorSpec;
@@ -128,19 +127,7 @@ class MinimumStatePlantTest {
     AircraftPlant p = plant(ms);
     StateSpace ss = p.stateSpace(RationalAerodynamics.of(ms));
     double[] w = {0.05, 0.7, 3.0, 12.0, 25.1, 56.0, 94.0, 200.0};
-    FrequencyResponse fr = ss.frequencyResponse(w);
-    AircraftPlant.FrequencyEvaluator ev = p.frequencyEvaluator();
-    double[] out = new double[2 * SENSORS.size()];
-    for (int k = 0; k < w.length; k++) {
-      ev.response(w[k], out);
-      for (int s = 0; s < SENSORS.size(); s++) {
-        double re = fr.real(k, s, 0);
-        double im = fr.imag(k, s, 0);
-        double scale = Math.max(1e-6, Math.hypot(re, im));
-        assertEquals(re, out[2 * s], 1e-9 * scale, "re, sensor " + s + " at " + w[k]);
-        assertEquals(im, out[2 * s + 1], 1e-9 * scale, "im, sensor " + s + " at " + w[k]);
-      }
-    }
+    PlantResponseCheck.stateSpaceEqualsEvaluator(p, ss, w, SENSORS.size());
   }
 
   /**

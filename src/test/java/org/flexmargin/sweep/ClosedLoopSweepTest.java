@@ -32,7 +32,8 @@ class ClosedLoopSweepTest {
 
   @Test
   void closedLoopEigenvaluesAgreeWithAnIndependentSolver() {
-    // Independent library: Commons Math's EigenDecomposition against EJML (used by StateSpace).
+    // Independent library: Commons Math's EigenDecomposition against the balanced double-shift QR
+    // solver that StateSpace uses.
     Configuration cfg = DEMO.configurations().get(0);
     ConfigurationModel m = ConfigurationModel.of(cfg);
     PlannedPath path = new PlannedPath(DEMO.sweep());
