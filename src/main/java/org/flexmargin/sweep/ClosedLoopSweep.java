@@ -2,8 +2,10 @@ package org.flexmargin.sweep;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
@@ -312,12 +314,15 @@ public final class ClosedLoopSweep {
     double dv = Math.abs(path.at(p + 1).speedEasMps() - path.at(p).speedEasMps());
     double abs = Math.min(0.25, options.onsetSpeedToleranceMps() / Math.max(dv, 1e-9));
     double[] at = new double[2];
+    // every root Brent's method asks for, by path parameter: its answer is one of them
+    Map<Double, double[]> roots = new HashMap<>();
     BrentSolver solver = new BrentSolver(1e-14, abs);
     double t;
     int evaluations;
     try {
       t = solver.solve(BRENT_MAX_EVALUATIONS, tt -> {
         rootNear(model, configuration, loop, path.at(tt), rational, reA, imA, reB, imB, tt - p, at, solves);
+        roots.put(tt, at.clone());
         return crossing(at[0], at[1], level);
       }, p, p + 1);
       evaluations = solver.getEvaluations();
@@ -325,7 +330,13 @@ public final class ClosedLoopSweep {
       t = p + 0.5;
       evaluations = BRENT_MAX_EVALUATIONS;
     }
-    rootNear(model, configuration, loop, path.at(t), rational, reA, imA, reB, imB, t - p, at, solves);
+    double[] known = roots.get(t);
+    if (known != null) {
+      // the same condition and shift give the same root
+      System.arraycopy(known, 0, at, 0, 2);
+    } else {
+      rootNear(model, configuration, loop, path.at(t), rational, reA, imA, reB, imB, t - p, at, solves);
+    }
     CrossingKind kind = CrossingKind.of(level, rising);
     return new FlutterCrossing(branch, name, kind, t, path.at(t), Math.abs(at[1]) / (2 * Math.PI), level,
         evaluations, abs);
