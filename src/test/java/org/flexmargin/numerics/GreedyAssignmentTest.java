@@ -54,6 +54,10 @@ class GreedyAssignmentTest {
     assertArrayEquals(new int[] {0, 1}, GreedyAssignment.minimumCost(new double[][] {{nan, 0.1}, {0.2, 0.3}}));
     // a NaN later in reading order never wins: (1, 0) at 0.2 first, then row 0 takes column 1
     assertArrayEquals(new int[] {1, 0}, GreedyAssignment.minimumCost(new double[][] {{0.5, nan}, {0.2, 0.3}}));
+    // a NaN first in its row does not hide the row's cheaper pairs: the scan passes (1, 0) and
+    // takes (1, 1) at 0.1, then row 0 column 0 (a cheapest-per-row search would stop at the NaN
+    // and give row 0 its 0.4 first: {1, 0})
+    assertArrayEquals(new int[] {0, 1}, GreedyAssignment.minimumCost(new double[][] {{0.5, 0.4}, {nan, 0.1}}));
   }
 
   @Test
