@@ -214,7 +214,9 @@ class PointAssessorTest {
     assertTrue(beyond.checks().isEmpty());
     // no mode, no loop needed
     assertTrue(PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, List.of(), null).checks().isEmpty());
-    assertThrows(InvalidInputException.class, () -> PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, modes, null));
+    // a mode without a loop is refused before any search, naming the loop
+    assertEquals("loop", assertThrows(InvalidInputException.class,
+        () -> PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, modes, null)).fieldPath());
     assertThrows(InvalidInputException.class, () -> PointAssessor.assessStructuralModes(null, 100, F1_HZ, modes, loop));
     assertThrows(InvalidInputException.class, () -> PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, null, loop));
     assertThrows(InvalidInputException.class, () -> PointAssessor.assessStructuralModes(REQ, 100, 0.0, modes, loop));
