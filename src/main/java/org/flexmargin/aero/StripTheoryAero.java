@@ -63,7 +63,8 @@ import org.flexmargin.model.StripTheorySpec;
  *
  * <p>Valid for every finite k &ge; 0 ({@link #maxReducedFrequency()} is +&infin;). The Mach number
  * is ignored (incompressible theory). Instances are immutable and thread-safe; {@link #forces}
- * allocates one two-element array per call and nothing per strip.
+ * allocates three small arrays per call (Theodorsen's value and the basis weights) and nothing per
+ * strip.
  */
 public final class StripTheoryAero implements AeroSource {
   private final double referenceSemichordM;
@@ -142,7 +143,8 @@ public final class StripTheoryAero implements AeroSource {
       semichordGroup[s] = g;
     }
     this.groupSemichordM = Arrays.copyOf(unique, groups);
-    this.basis = new double[groups * BASIS * modeCount * modeCount];
+    this.terms = groups * BASIS;
+    this.basis = new double[terms * modeCount * modeCount];
     for (int st = 0; st < stripCount; st++) {
       accumulateBasis(st);
     }
@@ -153,9 +155,12 @@ public final class StripTheoryAero implements AeroSource {
 
   /**
    * Real matrices A[g][m] with Q(ik) = sum over semichord groups g and basis functions m of
-   * phi_m(k_s) A[g][m]; flattened as [(g * BASIS + m) * n * n + i * n + j].
+   * phi_m(k_s) A[g][m] (m<sup>2</sup> per unit coordinate); flattened entry by entry, the terms of
+   * one entry (i, j) next to each other: [(i * n + j) * terms + g * BASIS + m].
    */
   private final double[] basis;
+  /** Terms per entry of Q: semichord groups x {@value #BASIS}. */
+  private final int terms;
 
   /**
    * Adds strip st's contribution to the basis matrices. Per unit q and unit span, the strip's lift
@@ -182,14 +187,14 @@ public final class StripTheoryAero implements AeroSource {
         2.0 * a0 * b * b * armE * rearA};
     int base = st * n;
     for (int m = 0; m < BASIS; m++) {
-      int offset = (semichordGroup[st] * BASIS + m) * n * n;
+      int term = semichordGroup[st] * BASIS + m;
       for (int i = 0; i < n; i++) {
         double wi = heave[base + i];
         double ti = twist[base + i];
         for (int j = 0; j < n; j++) {
           double wj = heave[base + j];
           double tj = twist[base + j];
-          basis[offset + i * n + j] +=
+          basis[(i * n + j) * terms + term] +=
               width * (wi * (lw[m] * wj + lt[m] * tj) + ti * (mw[m] * wj + mt[m] * tj));
         }
       }
@@ -240,28 +245,32 @@ public final class StripTheoryAero implements AeroSource {
     int n = modeCount;
     out.reshape(n, n);
     double[] q = out.data;
-    Arrays.fill(q, 0, 2 * n * n, 0.0);
     double[] fg = new double[2];
-    int nn = n * n;
+    double[] phiRe = new double[terms];
+    double[] phiIm = new double[terms];
     for (int g = 0; g < groupSemichordM.length; g++) {
       double k = reducedFrequency * groupSemichordM[g] / referenceSemichordM;
       Theodorsen.evaluate(k, fg);
       // phi = (k^2, i k, C, i k C) with C = F + i G and i k C = -k G + i k F
-      double[] phiRe = {k * k, 0.0, fg[0], -k * fg[1]};
-      double[] phiIm = {0.0, k, fg[1], k * fg[0]};
-      for (int m = 0; m < BASIS; m++) {
-        double pr = phiRe[m];
-        double pi = phiIm[m];
-        if (pr == 0.0 && pi == 0.0) {
-          continue;
-        }
-        int offset = (g * BASIS + m) * nn;
-        for (int idx = 0; idx < nn; idx++) {
-          double v = basis[offset + idx];
-          q[2 * idx] += pr * v;
-          q[2 * idx + 1] += pi * v;
-        }
+      int t = g * BASIS;
+      phiRe[t] = k * k;
+      phiIm[t + 1] = k;
+      phiRe[t + 2] = fg[0];
+      phiIm[t + 2] = fg[1];
+      phiRe[t + 3] = -k * fg[1];
+      phiIm[t + 3] = k * fg[0];
+    }
+    // each entry sums its terms in group and basis order (a zero term adds nothing)
+    for (int idx = 0, at = 0; idx < n * n; idx++) {
+      double re = 0.0;
+      double im = 0.0;
+      for (int t = 0; t < terms; t++, at++) {
+        double v = basis[at];
+        re += phiRe[t] * v;
+        im += phiIm[t] * v;
       }
+      q[2 * idx] = re;
+      q[2 * idx + 1] = im;
     }
   }
 

@@ -18,6 +18,7 @@ import org.flexmargin.model.Configuration;
 import org.flexmargin.sweep.CaseSweep;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.Instability;
+import org.flexmargin.sweep.LoopDetail;
 import org.flexmargin.sweep.PlannedPath;
 import org.flexmargin.sweep.ServoPoint;
 import org.flexmargin.sweep.SweepProgress;
@@ -38,6 +39,13 @@ public final class SampleRunner {
    * solves at a point went to those two maximisations.
    */
   static final MarginOptions SAMPLE_MARGINS = MarginOptions.defaults().withoutExtremaRefinement();
+
+  /**
+   * Loop analysis of a sample: {@link #SAMPLE_MARGINS}, without the loop-at-a-time margins broken
+   * at each feedback path, which a sample does not report and nothing it reports depends on
+   * ({@link LoopDetail}; `SampleRunnerMarginsTest`).
+   */
+  static final LoopDetail SAMPLE_DETAIL = new LoopDetail(SAMPLE_MARGINS, false);
 
   private final CampaignPlan plan;
   private final CaseVariantWriter writer;
@@ -87,7 +95,7 @@ public final class SampleRunner {
       AnalysisCase c = CaseReader.read(file);
       Configuration cfg = c.configurations().get(0);
       ConfigurationResult r = CaseSweep.analyse(models.modelOf(cfg), cfg, new PlannedPath(c.sweep()), c,
-          SweepProgress.NONE, SAMPLE_MARGINS);
+          SweepProgress.NONE, SAMPLE_DETAIL);
       return outcome(task, cell, sample, draws, r);
     } catch (InputFileException e) {
       return error(task, cell, sample, draws, "perturbed input refused: " + e.getMessage());

@@ -120,15 +120,7 @@ public final class PointAssessor {
           cell.phaseMarginDeg(), Math.abs(gc.phaseMarginDeg()), CheckUnit.DEGREE,
           RequiredSense.AT_LEAST, gc.frequencyHz()));
     }
-    if (regime != SpeedRegime.UP_TO_115_LIMIT_SPEED) {
-      for (ModeFrequency m : modes) {
-        StructuralModeAssessment a = StructuralPeakSearch.assess(m, loop,
-            requirements.structuralPeakLimitDb(), requirements.phaseStabilisationMarginDeg(),
-            requirements.frequencyUncertainty());
-        structural.add(a);
-        checks.add(structuralCheck(a, requirements.frequencyUncertainty(), where));
-      }
-    }
+    addStructural(requirements, regime, where, modes, loop, checks, structural);
     if (stability != ClosedLoopStability.NOT_CHECKED) {
       checks.add(ClearanceCheck.of(CheckKind.CLOSED_LOOP_STABILITY, "",
           "nominal closed-loop stability" + where, 0,
@@ -137,6 +129,55 @@ public final class PointAssessor {
     }
     return new PointAssessment(speedEasMps, regime, firstAeroelasticFrequencyHz, stability,
         checks, structural);
+  }
+
+  /**
+   * Assesses the structural modes of one point only (no margin or stability checks): the same
+   * structural checks as {@link #assess}, for a caller that follows one mode's check alone.
+   *
+   * @param requirements the table
+   * @param speedEasMps equivalent airspeed, m/s
+   * @param firstAeroelasticFrequencyHz lowest elastic mode frequency at this speed, Hz (&gt; 0)
+   * @param modes structural modes and their current frequencies (may be empty)
+   * @param loop the broken-loop response L(j w) (may be null if {@code modes} is empty)
+   * @return the assessment, with {@link ClosedLoopStability#NOT_CHECKED}
+   */
+  public static PointAssessment assessStructuralModes(ClearanceRequirements requirements,
+      double speedEasMps, double firstAeroelasticFrequencyHz, List<ModeFrequency> modes,
+      SisoFrequencyFunction loop) {
+    if (requirements == null || modes == null) {
+      throw new InvalidInputException("assessment", "requirements and a mode list", "nothing");
+    }
+    Checks.positive("first_aeroelastic_frequency_hz", firstAeroelasticFrequencyHz);
+    if (!modes.isEmpty() && loop == null) {
+      throw new InvalidInputException("loop", "the loop response to assess structural modes",
+          "nothing");
+    }
+    SpeedRegime regime = RequirementLookup.regime(requirements, speedEasMps);
+    List<ClearanceCheck> checks = new ArrayList<>();
+    List<StructuralModeAssessment> structural = new ArrayList<>();
+    if (regime != SpeedRegime.BEYOND) {
+      addStructural(requirements, regime, ", " + regime.key().replace('_', ' '), modes, loop,
+          checks, structural);
+    }
+    return new PointAssessment(speedEasMps, regime, firstAeroelasticFrequencyHz,
+        ClosedLoopStability.NOT_CHECKED, checks, structural);
+  }
+
+  /** Adds each mode's structural check, in the normal envelope only. */
+  private static void addStructural(ClearanceRequirements requirements, SpeedRegime regime,
+      String where, List<ModeFrequency> modes, SisoFrequencyFunction loop,
+      List<ClearanceCheck> checks, List<StructuralModeAssessment> structural) {
+    if (regime == SpeedRegime.UP_TO_115_LIMIT_SPEED) {
+      return;
+    }
+    for (ModeFrequency m : modes) {
+      StructuralModeAssessment a = StructuralPeakSearch.assess(m, loop,
+          requirements.structuralPeakLimitDb(), requirements.phaseStabilisationMarginDeg(),
+          requirements.frequencyUncertainty());
+      structural.add(a);
+      checks.add(structuralCheck(a, requirements.frequencyUncertainty(), where));
+    }
   }
 
   /**

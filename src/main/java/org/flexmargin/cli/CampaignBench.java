@@ -22,6 +22,53 @@ final class CampaignBench {
 
   /** Samples of the projected campaign. */
   static final int PROJECTED_SAMPLES = 10_000;
+  /** The campaign's target elapsed time, minutes. */
+  static final int TARGET_MINUTES = 10;
+
+  /**
+   * A campaign's cost projected from the CPU time of one sample: the samples keep every core
+   * busy, so the campaign's elapsed time is its total CPU time shared by the cores. (The elapsed
+   * time of one sample is no base: its sweep points already run on all the cores, so dividing
+   * it by the cores again would count them twice.)
+   *
+   * @param cpuPerSampleS CPU time of one sample, all threads, s (&gt;= 0)
+   * @param cores cores the campaign runs on (&gt;= 1)
+   */
+  record Projection(double cpuPerSampleS, int cores) {
+    Projection {
+      if (!(cpuPerSampleS >= 0) || cores < 1) {
+        throw new IllegalArgumentException("need CPU time >= 0 and at least one core, got " + cpuPerSampleS
+            + " s and " + cores);
+      }
+    }
+
+    /** @return CPU time of the whole campaign, h */
+    double cpuHours() {
+      return PROJECTED_SAMPLES * cpuPerSampleS / 3600;
+    }
+
+    /** @return elapsed time of the campaign with every core busy, h */
+    double elapsedHours() {
+      return cpuHours() / cores;
+    }
+
+    /** @return the CPU time per sample that meets the target exactly, s */
+    double targetCpuPerSampleS() {
+      return TARGET_MINUTES * 60.0 * cores / PROJECTED_SAMPLES;
+    }
+
+    /** @return projected elapsed time over the target (below 1: met) */
+    double ratioToTarget() {
+      return elapsedHours() * 60 / TARGET_MINUTES;
+    }
+
+    /** @return "met with a factor F to spare" or "missed by a factor F" */
+    String verdict() {
+      double r = ratioToTarget();
+      return r <= 1 ? String.format(Locale.ROOT, "met with a factor %.2f to spare", 1 / r)
+          : String.format(Locale.ROOT, "missed by a factor %.2f", r);
+    }
+  }
 
   static void run(PrintWriter out, int repeats) {
     Path dir = null;
@@ -53,13 +100,13 @@ final class CampaignBench {
       double perSample = (System.nanoTime() - t0) * 1e-9 / n;
       double cpuPerSample = (BenchCommand.cpuSeconds() - c0) / n;
       int cores = Runtime.getRuntime().availableProcessors();
+      Projection p = new Projection(cpuPerSample, cores);
       out.printf(Locale.ROOT, "campaign: notched demo full_payload, 8 modes, loop and requirements, 28 points; %d samples "
-          + "after warm-up: %.2f s per sample on one thread, %.2f s CPU per sample (all threads of the process; "
-          + "%.2f s CPU would run %d samples in 10 min on %d core(s))%n", n, perSample, cpuPerSample,
-          600.0 * cores / PROJECTED_SAMPLES, PROJECTED_SAMPLES, cores);
-      out.printf(Locale.ROOT, "  projected %d-sample campaign: %.1f h of computing, %.1f h on %d core(s)%n",
-          PROJECTED_SAMPLES, PROJECTED_SAMPLES * perSample / 3600, PROJECTED_SAMPLES * perSample / 3600 / cores,
-          cores);
+          + "after warm-up: %.2f s elapsed and %.3f s CPU per sample (all threads of the process: a sample's sweep "
+          + "points already run on every core)%n", n, perSample, cpuPerSample);
+      out.printf(Locale.ROOT, "  projected %d-sample campaign on %d core(s): %.1f h of CPU, %.2f h elapsed with every "
+          + "core busy; the %d-min target needs %.3f s CPU per sample: %s%n", PROJECTED_SAMPLES, cores,
+          p.cpuHours(), p.elapsedHours(), TARGET_MINUTES, p.targetCpuPerSampleS(), p.verdict());
     } catch (IOException e) {
       throw new UncheckedIOException("could not set up the campaign benchmark: " + e.getMessage(), e);
     } finally {

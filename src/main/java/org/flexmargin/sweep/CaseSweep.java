@@ -202,6 +202,25 @@ public final class CaseSweep {
    */
   public static ConfigurationResult analyse(ConfigurationModel model, Configuration c, PlannedPath path,
       AnalysisCase analysisCase, SweepProgress progress, MarginOptions marginOptions) {
+    return analyse(model, c, path, analysisCase, progress, new LoopDetail(marginOptions, true));
+  }
+
+  /**
+   * As {@link #analyse(ConfigurationModel, Configuration, PlannedPath, AnalysisCase, SweepProgress,
+   * MarginOptions)}, also saying whether the loop-at-a-time margins are computed (a campaign
+   * sample reports none; nothing else depends on them, see {@link LoopDetail}).
+   *
+   * @param model the configuration's model
+   * @param c configuration
+   * @param path sweep path
+   * @param analysisCase the case (options, loop, requirements)
+   * @param progress told of each completed stage
+   * @param detail the loop margins' search settings and whether the loop-at-a-time margins are computed
+   * @return the configuration's results
+   */
+  public static ConfigurationResult analyse(ConfigurationModel model, Configuration c, PlannedPath path,
+      AnalysisCase analysisCase, SweepProgress progress, LoopDetail detail) {
+    MarginOptions marginOptions = detail.marginOptions();
     long start = System.nanoTime();
     AeroelasticSystem system = model.system();
     DivergenceSolver div = new DivergenceSolver();
@@ -229,7 +248,7 @@ public final class CaseSweep {
       ClosedLoopResult closed = new ClosedLoopSweep().analyse(model, c, analysisCase.loop(), path, flutter,
           analysisCase.options());
       progress.stageDone(c.name(), "closed loop");
-      List<ServoPoint> margins = new ServoMargins(marginOptions).along(model, c, analysisCase.loop(), path, flutter,
+      List<ServoPoint> margins = new ServoMargins(marginOptions, detail.pathMargins()).along(model, c, analysisCase.loop(), path, flutter,
           closed);
       progress.stageDone(c.name(), "loop margins");
       servo = new ServoResult(margins, closed);

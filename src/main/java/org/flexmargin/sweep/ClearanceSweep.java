@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
+import java.util.function.Supplier;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
@@ -214,8 +215,30 @@ public final class ClearanceSweep {
 
   private static PointAssessment assessAt(ClearanceRequirements requirements, FlightCondition fc,
       LoopMarginResult margins, ClosedLoopStability stability, List<ModeFrequency> modes, ServoLoop loop) {
-    double f1 = modes.stream().mapToDouble(ModeFrequency::frequencyHz).min().orElse(1.0);
-    return PointAssessor.assess(requirements, fc.speedEasMps(), f1, margins, stability, modes, loop.brokenLoop());
+    return PointAssessor.assess(requirements, fc.speedEasMps(), firstFrequencyHz(modes), margins, stability, modes,
+        loop.brokenLoop());
+  }
+
+  /**
+   * The checks of one requirement at a point, computing only what they need: a structural mode's
+   * check needs that mode's peak search alone, a margin check the loop margins alone (checks of
+   * other keys are left out; the excess of {@code key} is that of the full assessment).
+   */
+  static PointAssessment onlyKey(CheckKey key, ClearanceRequirements requirements, FlightCondition fc,
+      List<ModeFrequency> modes, ServoLoop loop, Supplier<LoopMarginResult> margins) {
+    double f1 = firstFrequencyHz(modes);
+    if (key.kind() == CheckKind.STRUCTURAL_MODE) {
+      List<ModeFrequency> mode = modes.stream().filter(m -> m.name().equals(key.subject())).toList();
+      return PointAssessor.assessStructuralModes(requirements, fc.speedEasMps(), f1, mode, loop.brokenLoop());
+    }
+    // the margin checks' bands still depend on the lowest mode frequency
+    return PointAssessor.assess(requirements, fc.speedEasMps(), f1, margins.get(), ClosedLoopStability.NOT_CHECKED,
+        List.of(), loop.brokenLoop());
+  }
+
+  /** Lowest current mode frequency, Hz (1 Hz without modes). */
+  private static double firstFrequencyHz(List<ModeFrequency> modes) {
+    return modes.stream().mapToDouble(ModeFrequency::frequencyHz).min().orElse(1.0);
   }
 
   static MarginOnset stabilityOnset(MarginOnsets.Bracket b, ServoResult servo, List<PointAssessment> points,
@@ -241,15 +264,13 @@ public final class ClearanceSweep {
     int p = indexOfSpeed(points, b.passingSpeedEasMps());
     ServoMargins margins = new ServoMargins(marginOptions);
     int[] evaluations = {0};
-    PointAssessment[] last = {null};
     DoubleUnaryOperator excess = MarginOnsets.excessAlongSpeed(v -> {
       evaluations[0]++;
       double t = p + (v - b.passingSpeedEasMps()) / (b.failingSpeedEasMps() - b.passingSpeedEasMps());
       FlightCondition fc = path.at(t);
       ServoLoop sl = ServoMargins.loopAt(model, configuration, loop, fc);
-      LoopMarginResult m = margins.at(sl, ServoMargins.seeds(flutter, p), maxHz);
-      last[0] = assessAt(requirements, fc, m, ClosedLoopStability.NOT_CHECKED, modesAt(flutter, t), sl);
-      return last[0];
+      return onlyKey(b.key(), requirements, fc, modesAt(flutter, t), sl,
+          () -> margins.at(sl, ServoMargins.seeds(flutter, p), maxHz));
     }, b.key());
     double onset;
     boolean refined = true;

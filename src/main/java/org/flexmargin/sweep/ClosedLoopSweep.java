@@ -2,8 +2,11 @@ package org.flexmargin.sweep;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
@@ -312,12 +315,16 @@ public final class ClosedLoopSweep {
     double dv = Math.abs(path.at(p + 1).speedEasMps() - path.at(p).speedEasMps());
     double abs = Math.min(0.25, options.onsetSpeedToleranceMps() / Math.max(dv, 1e-9));
     double[] at = new double[2];
+    // every root Brent's method asks for, by path parameter: its answer is one of them, so the
+    // root there is taken from here rather than solved for again
+    Map<Double, double[]> roots = new HashMap<>();
     BrentSolver solver = new BrentSolver(1e-14, abs);
     double t;
     int evaluations;
     try {
       t = solver.solve(BRENT_MAX_EVALUATIONS, tt -> {
         rootNear(model, configuration, loop, path.at(tt), rational, reA, imA, reB, imB, tt - p, at, solves);
+        roots.put(tt, at.clone());
         return crossing(at[0], at[1], level);
       }, p, p + 1);
       evaluations = solver.getEvaluations();
@@ -325,9 +332,11 @@ public final class ClosedLoopSweep {
       t = p + 0.5;
       evaluations = BRENT_MAX_EVALUATIONS;
     }
-    rootNear(model, configuration, loop, path.at(t), rational, reA, imA, reB, imB, t - p, at, solves);
+    // Brent's method answers with a point it evaluated (the bracket's midpoint, an end, or its
+    // last iterate; the midpoint, its first evaluation, when it runs out of evaluations)
+    double[] root = Objects.requireNonNull(roots.get(t), "the root at Brent's answer");
     CrossingKind kind = CrossingKind.of(level, rising);
-    return new FlutterCrossing(branch, name, kind, t, path.at(t), Math.abs(at[1]) / (2 * Math.PI), level,
+    return new FlutterCrossing(branch, name, kind, t, path.at(t), Math.abs(root[1]) / (2 * Math.PI), level,
         evaluations, abs);
   }
 

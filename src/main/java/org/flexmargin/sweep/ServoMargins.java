@@ -35,10 +35,22 @@ import org.flexmargin.model.NotchFilterSpec;
  */
 public final class ServoMargins {
   private final LoopMargins margins;
+  /** Whether {@link #along} computes the margins of the loop broken at each feedback path. */
+  private final boolean pathMargins;
 
   /** @param options margin search options */
   public ServoMargins(MarginOptions options) {
+    this(options, true);
+  }
+
+  /**
+   * @param options margin search options
+   * @param pathMargins whether {@link #along} also computes the loop-at-a-time margins (else
+   *     every point's {@link ServoPoint#pathMargins()} is empty)
+   */
+  public ServoMargins(MarginOptions options, boolean pathMargins) {
     this.margins = new LoopMargins(options);
+    this.pathMargins = pathMargins;
   }
 
   /** @return margin search with default options */
@@ -135,7 +147,7 @@ public final class ServoMargins {
    * @param path sweep path
    * @param openLoop open-loop p-k solution along the same path (for grid seeds)
    * @param closedLoop closed-loop eigenvalues on the same path (grid seeds), or null
-   * @return one point per grid point
+   * @return one point per grid point (with the loop-at-a-time margins if this instance computes them)
    */
   public List<ServoPoint> along(ConfigurationModel model, Configuration configuration, LoopSpec loop,
       PlannedPath path, FlutterSolution openLoop, ClosedLoopResult closedLoop) {
@@ -150,7 +162,7 @@ public final class ServoMargins {
       ServoLoop.Responses responses = servo.responses();
       LoopMarginResult main = inBand(responses.brokenLoop(), seeds, maxHz);
       List<LoopMarginResult> perPath = new ArrayList<>();
-      for (int k = 0; k < loop.paths().size(); k++) {
+      for (int k = 0; pathMargins && k < loop.paths().size(); k++) {
         perPath.add(inBand(responses.brokenAtPath(k), seeds, maxHz));
       }
       return new ServoPoint(p, fc, main, perPath, notchChecks(loop, openLoop, p, main));

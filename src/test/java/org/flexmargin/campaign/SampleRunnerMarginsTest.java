@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import org.flexmargin.io.CaseReader;
@@ -19,14 +20,16 @@ import org.flexmargin.sweep.SweepProgress;
 import org.junit.jupiter.api.Test;
 
 /**
- * A campaign sample leaves out the refinement of the peak gain and the disk margin, which it does
- * not report: its outcome (onsets, verdict, governing finding, margin curve) is exactly that of
+ * A campaign sample leaves out the refinement of the peak gain and the disk margin and the
+ * loop-at-a-time margins, which it does not report: its outcome (onsets, verdict, governing finding, margin curve) is exactly that of
  * the full sweep, on the notched demo with its loop and requirements.
  */
 class SampleRunnerMarginsTest {
   @Test
-  void theSampleOutcomeDoesNotDependOnTheExtremaRefinement() {
+  void theSampleOutcomeDoesNotDependOnTheExtremaRefinementOrThePathMargins() {
     assertFalse(SampleRunner.SAMPLE_MARGINS.refineExtrema());
+    assertEquals(SampleRunner.SAMPLE_MARGINS, SampleRunner.SAMPLE_DETAIL.marginOptions());
+    assertFalse(SampleRunner.SAMPLE_DETAIL.pathMargins());
     AnalysisCase c = CaseReader.read(Path.of("mode-tables/demo/demo-case-notched.json"));
     SpeedSweep s = (SpeedSweep) c.sweep();
     PlannedPath path = new PlannedPath(new SpeedSweep(s.altitudeM(), s.kind(), s.fromMps(), s.toMps(), 14));
@@ -34,7 +37,10 @@ class SampleRunnerMarginsTest {
     ConfigurationModel model = ConfigurationModel.of(cfg);
     ConfigurationResult full = CaseSweep.analyse(model, cfg, path, c, SweepProgress.NONE, MarginOptions.defaults());
     ConfigurationResult sample = CaseSweep.analyse(model, cfg, path, c, SweepProgress.NONE,
-        SampleRunner.SAMPLE_MARGINS);
+        SampleRunner.SAMPLE_DETAIL);
+    // the full sweep has the loop-at-a-time margins of both feedback paths, the sample none
+    assertEquals(2, full.servo().points().get(0).pathMargins().size());
+    assertTrue(sample.servo().points().stream().allMatch(p -> p.pathMargins().isEmpty()));
     assertNotNull(full.clearance(), "the notched demo has requirements");
     double[] draws = {1.0};
     SampleOutcome a = SampleRunner.outcome(0, 0, 0, draws, full);

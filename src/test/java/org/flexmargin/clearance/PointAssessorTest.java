@@ -186,6 +186,43 @@ class PointAssessorTest {
   }
 
   @Test
+  void structuralModesAloneAreTheStructuralChecksOfTheFullAssessment() {
+    // the same K = 1 loop and 5 Hz mode as above: peak at the 4.5 Hz band edge, closed form
+    LinearBlock loop = thirdOrder(1);
+    List<ModeFrequency> modes = List.of(new ModeFrequency("fuselage bending", 5.0));
+    PointAssessment a = PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, modes, loop);
+    ClearanceCheck s = only(a, CheckKind.STRUCTURAL_MODE);
+    double w = 2 * Math.PI * 4.5;
+    assertEquals(-20 * Math.log10(w * Math.sqrt(w * w + 1) * Math.sqrt(w * w + 4)), s.achievedValue(), 1e-9);
+    assertEquals(1, a.checks().size(), "no margin or stability check");
+    assertEquals(ClosedLoopStability.NOT_CHECKED, a.closedLoopStability());
+    assertEquals(SpeedRegime.NORMAL_ENVELOPE, a.regime());
+    assertEquals(100.0, a.speedEasMps(), 0.0);
+    assertEquals(F1_HZ, a.firstAeroelasticFrequencyHz(), 0.0);
+    // exactly the structural check and detail of the full assessment (same search, same loop)
+    PointAssessment full = PointAssessor.assess(REQ, 100, F1_HZ, MARGINS.analyse(loop, 0.01, 100), modes, loop);
+    assertEquals(only(full, CheckKind.STRUCTURAL_MODE), s);
+    assertEquals(full.structuralModes(), a.structuralModes());
+    // up to V_L (150) still checked; up to 1.15 V_L (160) and beyond (180) not
+    assertEquals(1, PointAssessor.assessStructuralModes(REQ, 150, F1_HZ, modes, loop).checks().size());
+    PointAssessment above = PointAssessor.assessStructuralModes(REQ, 160, F1_HZ, modes, loop);
+    assertEquals(SpeedRegime.UP_TO_115_LIMIT_SPEED, above.regime());
+    assertTrue(above.checks().isEmpty());
+    assertTrue(above.structuralModes().isEmpty());
+    PointAssessment beyond = PointAssessor.assessStructuralModes(REQ, 180, F1_HZ, modes, loop);
+    assertEquals(SpeedRegime.BEYOND, beyond.regime());
+    assertTrue(beyond.checks().isEmpty());
+    // no mode, no loop needed
+    assertTrue(PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, List.of(), null).checks().isEmpty());
+    // a mode without a loop is refused before any search, naming the loop
+    assertEquals("loop", assertThrows(InvalidInputException.class,
+        () -> PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, modes, null)).fieldPath());
+    assertThrows(InvalidInputException.class, () -> PointAssessor.assessStructuralModes(null, 100, F1_HZ, modes, loop));
+    assertThrows(InvalidInputException.class, () -> PointAssessor.assessStructuralModes(REQ, 100, F1_HZ, null, loop));
+    assertThrows(InvalidInputException.class, () -> PointAssessor.assessStructuralModes(REQ, 100, 0.0, modes, loop));
+  }
+
+  @Test
   void failingStructuralModeGovernsWithItsPhaseFigures() {
     // A sign-reversed collocated mode at 5 Hz (see StructuralPeakSearchTest): +14 dB at 5 Hz
     // with the phase exactly -180 deg there (closed form): FAILED, distance 0 against 60 deg.

@@ -108,6 +108,44 @@ class ClearanceLoopTest {
     everyRequirementIsRankedOnce(result);
   }
 
+  /**
+   * The onset refinement assesses only its requirement: a structural mode's check alone (no
+   * margin search: the margins supplier fails if asked), or the margin checks alone; either way
+   * the requirement's excess is exactly that of the full assessment at the same speed.
+   */
+  @Test
+  void theRefinementAssessesItsOwnRequirementOnlyWithTheFullAssessmentsExcess() {
+    double t = 0.5;
+    ServoLoop sl = ServoMargins.loopAt(MODEL, CFG, DEMO.loop(), PATH.at(t));
+    LoopMarginResult m = marginsAt(t, 0);
+    double f1 = MODEL.modes().modes().stream().mapToDouble(ElasticMode::frequencyHz).min().orElseThrow();
+    PointAssessment full = PointAssessor.assess(DEMO.requirements(), PATH.at(t).speedEasMps(), f1, m,
+        ClosedLoopStability.NOT_CHECKED, modes(), sl.brokenLoop());
+    int structural = 0;
+    int margins = 0;
+    for (CheckKey key : full.keys()) {
+      boolean mode = key.kind() == CheckKind.STRUCTURAL_MODE;
+      PointAssessment only = ClearanceSweep.onlyKey(key, DEMO.requirements(), PATH.at(t), modes(), sl,
+          mode ? () -> {
+            throw new AssertionError("a structural check needs no margins");
+          } : () -> m);
+      assertEquals(full.worstExcess(key).orElseThrow(), only.worstExcess(key).orElseThrow(), 0.0, key.toString());
+      if (mode) {
+        structural++;
+        assertEquals(List.of(key), List.copyOf(only.keys()), "that mode's check alone");
+        assertEquals(1, only.structuralModes().size());
+      } else {
+        margins++;
+        assertTrue(only.structuralModes().isEmpty(), "no structural search for a margin check");
+        assertTrue(only.keys().stream().noneMatch(k -> k.kind() == CheckKind.STRUCTURAL_MODE));
+        // the bands still use the lowest mode frequency
+        assertEquals(f1, only.firstAeroelasticFrequencyHz(), 0.0);
+      }
+    }
+    assertEquals(MODEL.modes().modes().size(), structural);
+    assertTrue(margins > 0);
+  }
+
   static List<ModeFrequency> modes() {
     return MODEL.modes().modes().stream().map(m -> new ModeFrequency(m.name(), m.frequencyHz())).toList();
   }
