@@ -21,6 +21,7 @@ import org.flexmargin.notch.NotchDesignSpec;
 import org.flexmargin.notch.NotchDesigner;
 import org.flexmargin.report.ProposedNotches;
 import org.flexmargin.simulate.LoopComparison;
+import org.flexmargin.simulate.SharedModels;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
 import org.flexmargin.report.ResultFiles;
@@ -131,11 +132,14 @@ final class SweepCommand implements Callable<Integer> {
           "at most " + CostEstimate.LIMIT_TEXT + " (give --force to run anyway)",
           "about " + CostEstimate.duration(cost.cpuSeconds()) + "; fewer sweep points or modes bring it down");
     }
+    // one model per configuration for the time-domain check and the loop charts
+    SharedModels models = new SharedModels();
+    ReportOptions styled = style.reportOptions().withModels(models);
     ReportOptions withNotches = designNotches && c.loop() != null
-        ? style.reportOptions().withProposedNotches(proposedNotches(c)) : style.reportOptions();
+        ? styled.withProposedNotches(proposedNotches(c)) : styled;
     ProposedNotches proposed = withNotches.proposedNotches();
     ReportOptions reportOptions = timeDomain && c.loop() != null && c.requirements() != null
-        ? withNotches.withTimeDomainCheck(LoopComparison.of(c, proposed == null ? null : proposed.loop(),
+        ? withNotches.withTimeDomainCheck(LoopComparison.of(c, models, proposed == null ? null : proposed.loop(),
             "designed notches"))
         : withNotches;
     boolean terminal = System.console() != null && !common.quiet;
