@@ -36,13 +36,12 @@ final class ChartSeries {
    * @return an empty chart in the house style
    */
   static XYChart chart(String title, String xTitle, String yTitle) {
-    XYChart chart = new XYChartBuilder()
+    XYChart chart = ReportXYChart.of(new XYChartBuilder()
         .width(ReportStyle.CHART_WIDTH_PX)
         .height(ReportStyle.CHART_HEIGHT_PX)
         .title(title)
         .xAxisTitle(xTitle)
-        .yAxisTitle(yTitle)
-        .build();
+        .yAxisTitle(yTitle));
     ReportStyle.apply(chart);
     return chart;
   }
