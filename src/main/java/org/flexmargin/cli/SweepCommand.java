@@ -138,14 +138,24 @@ final class SweepCommand implements Callable<Integer> {
     ReportOptions withNotches = designNotches && c.loop() != null
         ? styled.withProposedNotches(proposedNotches(c)) : styled;
     ProposedNotches proposed = withNotches.proposedNotches();
-    ReportOptions reportOptions = timeDomain && c.loop() != null && c.requirements() != null
-        ? withNotches.withTimeDomainCheck(LoopComparison.of(c, models, proposed == null ? null : proposed.loop(),
-            "designed notches"))
-        : withNotches;
+    AnalysisCase analysed = c;
+    // the time-domain check needs no sweep result: it runs beside the sweep
+    BesideSweep<LoopComparison> check = timeDomain && c.loop() != null && c.requirements() != null
+        ? BesideSweep.start(() -> LoopComparison.of(analysed, models, proposed == null ? null : proposed.loop(),
+            "designed notches"), work.threads, "time-domain check") : null;
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, cost, terminal);
     CaseSweep sweep = new CaseSweep(work.threads);
-    SweepResult result = sweep.run(c, bar);
+    SweepResult result;
+    try {
+      result = sweep.run(c, bar);
+    } catch (RuntimeException | Error e) {
+      if (check != null) {
+        check.cancel();
+      }
+      throw e;
+    }
+    ReportOptions reportOptions = check != null ? withNotches.withTimeDomainCheck(check.join()) : withNotches;
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
     ReportOptions shown = envelope == null ? reportOptions : reportOptions.withEnvelope(envelope(c, envelope));
