@@ -33,8 +33,10 @@ class BesideSweepTest {
   void twoWorkerThreadsStartTheWorkAtOnceOnItsOwnThread() throws InterruptedException {
     CountDownLatch running = new CountDownLatch(1);
     String[] ranOn = new String[1];
+    boolean[] daemon = new boolean[1];
     BesideSweep<String> w = BesideSweep.start(() -> {
       ranOn[0] = Thread.currentThread().getName();
+      daemon[0] = Thread.currentThread().isDaemon();
       running.countDown();
       return "done";
     }, 2, "beside the sweep");
@@ -42,6 +44,25 @@ class BesideSweepTest {
     assertTrue(running.await(10, TimeUnit.SECONDS), "running before anyone asks");
     assertEquals("done", w.join());
     assertEquals("beside the sweep", ranOn[0]);
+    assertTrue(daemon[0], "a daemon thread: it never keeps the program alive");
+  }
+
+  @Test
+  void aCallerInterruptedWhileWaitingKeepsItsInterrupt() throws InterruptedException {
+    CountDownLatch release = new CountDownLatch(1);
+    BesideSweep<String> w = BesideSweep.start(() -> {
+      try {
+        release.await();
+      } catch (InterruptedException e) {
+        Thread.currentThread().interrupt();
+      }
+      return "late";
+    }, 2, "beside");
+    Thread.currentThread().interrupt();
+    assertThrows(IllegalStateException.class, w::join);
+    assertTrue(Thread.interrupted(), "the interrupt is kept (and cleared here)");
+    release.countDown();
+    assertEquals("late", w.join());
   }
 
   @Test
