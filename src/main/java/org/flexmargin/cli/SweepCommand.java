@@ -21,6 +21,7 @@ import org.flexmargin.notch.NotchDesignSpec;
 import org.flexmargin.notch.NotchDesigner;
 import org.flexmargin.report.ProposedNotches;
 import org.flexmargin.simulate.LoopComparison;
+import org.flexmargin.simulate.SharedModels;
 import org.flexmargin.report.ReportOptions;
 import org.flexmargin.report.ReportWriter;
 import org.flexmargin.report.ResultFiles;
@@ -131,17 +132,30 @@ final class SweepCommand implements Callable<Integer> {
           "at most " + CostEstimate.LIMIT_TEXT + " (give --force to run anyway)",
           "about " + CostEstimate.duration(cost.cpuSeconds()) + "; fewer sweep points or modes bring it down");
     }
+    // one model per configuration for the time-domain check and the loop charts
+    SharedModels models = new SharedModels();
+    ReportOptions styled = style.reportOptions().withModels(models);
     ReportOptions withNotches = designNotches && c.loop() != null
-        ? style.reportOptions().withProposedNotches(proposedNotches(c)) : style.reportOptions();
+        ? styled.withProposedNotches(proposedNotches(c)) : styled;
     ProposedNotches proposed = withNotches.proposedNotches();
-    ReportOptions reportOptions = timeDomain && c.loop() != null && c.requirements() != null
-        ? withNotches.withTimeDomainCheck(LoopComparison.of(c, proposed == null ? null : proposed.loop(),
-            "designed notches"))
-        : withNotches;
+    AnalysisCase analysed = c;
+    // the time-domain check needs no sweep result: it runs beside the sweep
+    BesideSweep<LoopComparison> check = timeDomain && c.loop() != null && c.requirements() != null
+        ? BesideSweep.start(() -> LoopComparison.of(analysed, models, proposed == null ? null : proposed.loop(),
+            "designed notches"), work.threads, "time-domain check") : null;
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, cost, terminal);
     CaseSweep sweep = new CaseSweep(work.threads);
-    SweepResult result = sweep.run(c, bar);
+    SweepResult result;
+    try {
+      result = sweep.run(c, bar);
+    } catch (RuntimeException | Error e) {
+      if (check != null) {
+        check.cancel();
+      }
+      throw e;
+    }
+    ReportOptions reportOptions = check != null ? withNotches.withTimeDomainCheck(check.join()) : withNotches;
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
     ReportOptions shown = envelope == null ? reportOptions : reportOptions.withEnvelope(envelope(c, envelope));

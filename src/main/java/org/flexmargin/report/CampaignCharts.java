@@ -43,8 +43,8 @@ final class CampaignCharts {
   }
 
   private static XYChart chart(String title, String yTitle) {
-    XYChart chart = new XYChartBuilder().width(ReportStyle.CHART_WIDTH_PX).height(ReportStyle.CHART_HEIGHT_PX)
-        .title(title).xAxisTitle("EAS (m/s)").yAxisTitle(yTitle).build();
+    XYChart chart = ReportXYChart.of(new XYChartBuilder().width(ReportStyle.CHART_WIDTH_PX).height(ReportStyle.CHART_HEIGHT_PX)
+        .title(title).xAxisTitle("EAS (m/s)").yAxisTitle(yTitle));
     ReportStyle.apply(chart);
     return chart;
   }

@@ -5,9 +5,12 @@ import java.awt.Color;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
+import java.util.function.Function;
 import org.flexmargin.model.ClearanceRequirements;
 import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
@@ -36,22 +39,22 @@ final class ChartSeries {
    * @return an empty chart in the house style
    */
   static XYChart chart(String title, String xTitle, String yTitle) {
-    XYChart chart = new XYChartBuilder()
+    XYChart chart = ReportXYChart.of(new XYChartBuilder()
         .width(ReportStyle.CHART_WIDTH_PX)
         .height(ReportStyle.CHART_HEIGHT_PX)
         .title(title)
         .xAxisTitle(xTitle)
-        .yAxisTitle(yTitle)
-        .build();
+        .yAxisTitle(yTitle));
     ReportStyle.apply(chart);
     return chart;
   }
 
   /**
    * A chart against time in seconds. Its samples are equally spaced, so XChart puts the time ticks
-   * on samples and tries label after label until they fit; the labels are therefore written by
-   * {@link #timeLabel} (a few hundred nanoseconds each) instead of XChart's general number format,
-   * which looks the pattern up afresh for every label.
+   * on samples and tries label after label until they fit, writing the same sample's label once
+   * per try and again for every layout pass; the labels are therefore written by {@link #timeLabel}
+   * (a few hundred nanoseconds each) instead of XChart's general number format, which looks the
+   * pattern up afresh for every label, and each time's label is kept once written.
    *
    * @param title chart title
    * @param yTitle y-axis title
@@ -59,8 +62,18 @@ final class ChartSeries {
    */
   static XYChart timeChart(String title, String yTitle) {
     XYChart chart = chart(title, "time (s)", yTitle);
-    chart.getStyler().setxAxisTickLabelsFormattingFunction(ChartSeries::timeLabel);
+    chart.getStyler().setxAxisTickLabelsFormattingFunction(keptLabels(ChartSeries::timeLabel));
     return chart;
+  }
+
+  /**
+   * @param label a label function
+   * @return the same function, each value's label written once and then kept (for one chart: not
+   *     thread-safe, as a chart is drawn by one thread at a time)
+   */
+  static Function<Double, String> keptLabels(Function<Double, String> label) {
+    Map<Double, String> kept = new HashMap<>();
+    return v -> kept.computeIfAbsent(v, label);
   }
 
   /**

@@ -114,13 +114,12 @@ public final class FlutterCharts {
         : frequencyRange(s, easRangeMps);
 
     String what = damping ? "damping (V-g)" : "frequency (V-f)";
-    XYChart chart = new XYChartBuilder()
+    XYChart chart = ReportXYChart.of(new XYChartBuilder()
         .width(ReportStyle.CHART_WIDTH_PX)
         .height(ReportStyle.CHART_HEIGHT_PX)
         .title(c.configuration() + ": " + what + ", " + method)
         .xAxisTitle(unit.axisTitle())
-        .yAxisTitle(damping ? "damping g (V-g convention, negative = stable)" : "frequency (Hz)")
-        .build();
+        .yAxisTitle(damping ? "damping g (V-g convention, negative = stable)" : "frequency (Hz)"));
     ReportStyle.apply(chart);
     chart.getStyler().setXAxisMin(xMin).setXAxisMax(xMax);
     chart.getStyler().setYAxisMin(yRange[0]).setYAxisMax(yRange[1]);

@@ -22,6 +22,7 @@ import org.flexmargin.model.LoopSpec;
 import org.flexmargin.model.MarginCell;
 import org.flexmargin.model.NotchFilterSpec;
 import org.flexmargin.model.SpeedRegime;
+import org.flexmargin.simulate.SharedModels;
 import org.flexmargin.sweep.ConfigurationModel;
 import org.flexmargin.sweep.ConfigurationResult;
 import org.flexmargin.sweep.PlannedPath;
@@ -334,10 +335,22 @@ public final class LoopResponseCharts {
    * @return responses, speed by speed, with-notches first
    */
   public static List<Response> responses(SweepResult result, ConfigurationResult c) {
+    return responses(result, c, new SharedModels());
+  }
+
+  /**
+   * As {@link #responses(SweepResult, ConfigurationResult)}, with the configuration's model taken
+   * from the run's shared models.
+   *
+   * @param result the sweep
+   * @param c one configuration's result (with a loop)
+   * @param models the run's models
+   * @return responses, speed by speed, with-notches first
+   */
+  public static List<Response> responses(SweepResult result, ConfigurationResult c, SharedModels models) {
     LoopSpec loop = result.analysisCase().loop();
-    Configuration conf = result.analysisCase().configurations().stream()
-        .filter(x -> x.name().equals(c.configuration())).findFirst().orElseThrow();
-    ConfigurationModel model = ConfigurationModel.of(conf);
+    Configuration conf = configuration(result, c);
+    ConfigurationModel model = models.of(conf);
     double top = ServoMargins.bandTopHz(model);
     double[] f = frequencyGridHz(c, loop, top);
     LoopSpec bare = hasNotches(loop) ? withoutNotches(loop) : null;
@@ -373,11 +386,22 @@ public final class LoopResponseCharts {
    */
   public static List<ReportChart> of(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit,
       ProposedNotches proposed) {
+    return of(result, c, unit, proposed, new SharedModels());
+  }
+
+  /**
+   * As {@link #of(SweepResult, ConfigurationResult, SpeedAxisUnit, ProposedNotches)}, with the
+   * configuration's model taken from the run's shared models.
+   *
+   * @param models the run's models
+   */
+  public static List<ReportChart> of(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit,
+      ProposedNotches proposed, SharedModels models) {
     if (c.servo() == null || result.analysisCase().loop() == null) {
       return List.of();
     }
-    List<Response> rs = responses(result, c);
-    List<Response> prop = proposed == null ? List.of() : proposedResponses(result, c, proposed, rs);
+    List<Response> rs = responses(result, c, models);
+    List<Response> prop = proposed == null ? List.of() : proposedResponses(result, c, proposed, rs, models);
     List<ReportChart> out = new ArrayList<>();
     out.add(withProposed(bodeGain(result, c, rs, unit), prop, unit, 0));
     out.add(withProposed(bodePhase(result, c, rs, unit), prop, unit, 1));
@@ -398,12 +422,17 @@ public final class LoopResponseCharts {
         unit.fromMps(speed.speedEasMps()), unit.symbol());
   }
 
+  /** @return the case's configuration of a result */
+  private static Configuration configuration(SweepResult result, ConfigurationResult c) {
+    return result.analysisCase().configurations().stream()
+        .filter(x -> x.name().equals(c.configuration())).findFirst().orElseThrow();
+  }
+
   /** The loop with the proposed notches at the same speeds and frequencies as the case's responses. */
   private static List<Response> proposedResponses(SweepResult result, ConfigurationResult c, ProposedNotches p,
-      List<Response> rs) {
-    Configuration conf = result.analysisCase().configurations().stream()
-        .filter(x -> x.name().equals(c.configuration())).findFirst().orElseThrow();
-    ConfigurationModel model = ConfigurationModel.of(conf);
+      List<Response> rs, SharedModels models) {
+    Configuration conf = configuration(result, c);
+    ConfigurationModel model = models.of(conf);
     List<Response> out = new ArrayList<>();
     for (Response r : rs) {
       if (r.notches()) {

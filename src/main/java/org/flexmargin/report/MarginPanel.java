@@ -107,8 +107,8 @@ public final class MarginPanel {
   private static ReportChart panel(SweepResult result, List<MarginCharts.Data> data, List<double[]> values,
       SpeedAxisUnit unit, String title, String stem, java.util.function.ToDoubleFunction<MarginCell> required,
       double floor, double ceiling) {
-    XYChart chart = new XYChartBuilder().width(WIDTH_PX).height(HEIGHT_PX).title(title)
-        .xAxisTitle("EAS (" + unit.symbol() + ")").yAxisTitle("").build();
+    XYChart chart = ReportXYChart.of(new XYChartBuilder().width(WIDTH_PX).height(HEIGHT_PX).title(title)
+        .xAxisTitle("EAS (" + unit.symbol() + ")").yAxisTitle(""));
     ReportStyle.apply(chart);
     chart.getStyler().setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
     chart.getStyler().setAxisTitleFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));

@@ -125,7 +125,7 @@ public final class ReportWriter {
       open.add(closed.get(2));
       loop.addAll(MarginCharts.of(result, c, unit));
       loop.add(closed.get(0));
-      loop.addAll(LoopResponseCharts.of(result, c, unit, options.proposedNotches()));
+      loop.addAll(LoopResponseCharts.of(result, c, unit, options.proposedNotches(), options.models()));
     }
     return List.of(open, loop);
   }

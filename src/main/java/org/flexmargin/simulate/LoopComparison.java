@@ -58,13 +58,28 @@ public record LoopComparison(String configurationName, FlightCondition condition
    * @throws IllegalArgumentException if the case has no loop or no requirements table
    */
   public static LoopComparison of(AnalysisCase c, LoopSpec proposed, String proposedLabel) {
+    return of(c, new SharedModels(), proposed, proposedLabel);
+  }
+
+  /**
+   * As {@link #of(AnalysisCase, LoopSpec, String)}, with the first configuration's model taken from
+   * the run's shared models (so that the report's loop charts reuse it).
+   *
+   * @param c the case (with a loop and requirements)
+   * @param models the run's models
+   * @param proposed a proposed loop to compare, or null
+   * @param proposedLabel its label
+   * @return the comparison
+   * @throws IllegalArgumentException if the case has no loop or no requirements table
+   */
+  public static LoopComparison of(AnalysisCase c, SharedModels models, LoopSpec proposed, String proposedLabel) {
     if (c.loop() == null || c.requirements() == null) {
       throw new IllegalArgumentException("a time-domain check needs a loop and a requirements table (for V0max)");
     }
     Configuration conf = c.configurations().get(0);
     double altitude = c.sweep() instanceof SpeedSweep s ? s.altitudeM() : 0.0;
     FlightCondition fc = StandardAtmosphere.atEquivalentSpeed(altitude, c.requirements().maxOperatingSpeedEasMps());
-    ConfigurationModel model = ConfigurationModel.of(conf);
+    ConfigurationModel model = models.of(conf);
     ActuatorLimits limits = new ActuatorLimits(c.loop().actuator().rateLimitRadPerS(),
         c.loop().actuator().positionLimitRad());
     SimulationScenario scenario = new SimulationScenario(LoopClosure.CLOSED,

@@ -40,5 +40,22 @@ class TimeAxisLabelsTest {
     Function<Double, String> f = chart.getStyler().getxAxisTickLabelsFormattingFunction();
     assertNotNull(f);
     assertEquals("1.87", f.apply(1.8700000000000001));
+    assertEquals("0", f.apply(-0.0), "a kept label is not reused for another value");
+    assertEquals("1.87", f.apply(1.8700000000000001));
+  }
+
+  @Test
+  void keptLabelsAreWrittenOncePerValue() {
+    int[] written = {0};
+    Function<Double, String> f = ChartSeries.keptLabels(v -> {
+      written[0]++;
+      return ChartSeries.timeLabel(v);
+    });
+    assertEquals("0.17", f.apply(0.17000000000000004));
+    assertEquals("0.17", f.apply(0.17000000000000004));
+    assertEquals(1, written[0], "the second request is answered from the kept label");
+    assertEquals("0.34", f.apply(0.34));
+    assertEquals("0.17", f.apply(0.17), "another value with the same label");
+    assertEquals(3, written[0]);
   }
 }
