@@ -4,7 +4,9 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.concurrent.ConcurrentHashMap;
 import org.flexmargin.clearance.Severity;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
@@ -23,6 +25,7 @@ import org.flexmargin.report.ProposedNotches;
 import org.flexmargin.simulate.LoopComparison;
 import org.flexmargin.simulate.SharedModels;
 import org.flexmargin.report.ReportOptions;
+import org.flexmargin.report.ConfigurationCharts;
 import org.flexmargin.report.ReportWriter;
 import org.flexmargin.report.ResultFiles;
 import org.flexmargin.sweep.ConfigurationResult;
@@ -146,9 +149,13 @@ final class SweepCommand implements Callable<Integer> {
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, cost, terminal);
     CaseSweep sweep = new CaseSweep(work.threads);
+    // each configuration's charts are drawn as soon as it is analysed, while the others compute
+    String pathDescription = new PlannedPath(c.sweep()).describe();
+    Map<String, ConfigurationCharts> drawnEarly = new ConcurrentHashMap<>();
     SweepResult result;
     try {
-      result = sweep.run(c, bar);
+      result = sweep.run(c, bar, r -> drawnEarly.put(r.configuration(),
+          ConfigurationCharts.draw(analysed, pathDescription, r, withNotches)));
     } catch (RuntimeException | Error e) {
       if (check != null) {
         check.cancel();
@@ -165,7 +172,7 @@ final class SweepCommand implements Callable<Integer> {
     }
     Path written = sweep.inPool(() -> ReportFolder.writeAtomically(target, folder -> {
       ResultFiles.write(folder, result, findings, Version.get());
-      ReportWriter.write(folder, result, findings, Version.get(), shown);
+      ReportWriter.write(folder, result, findings, Version.get(), shown, drawnEarly);
     }));
     if (!common.quiet) {
       out.println("case " + c.name() + ": " + result.pathDescription());

@@ -57,20 +57,38 @@ public final class ReportWriter {
    */
   public static Path write(Path folder, SweepResult result, List<Finding> findings, String toolVersion,
       ReportOptions options) throws IOException {
-    if (System.getProperty("java.awt.headless") == null) {
-      System.setProperty("java.awt.headless", "true");
-    }
+    return write(folder, result, findings, toolVersion, options, Map.of());
+  }
+
+  /**
+   * As {@link #write(Path, SweepResult, List, String, ReportOptions)}, taking the charts of the
+   * configurations already drawn with {@link ConfigurationCharts#draw} (keyed by configuration
+   * name, drawn with the same options) instead of drawing them again.
+   *
+   * @param folder report folder (exists)
+   * @param result sweep result
+   * @param findings findings table (the one given to {@link ResultFiles#write})
+   * @param toolVersion version string for provenance
+   * @param options drawing options
+   * @param drawnEarlier charts already drawn, by configuration; the others are drawn here
+   * @return the written report.html
+   * @throws IOException on write failure
+   */
+  public static Path write(Path folder, SweepResult result, List<Finding> findings, String toolVersion,
+      ReportOptions options, Map<String, ConfigurationCharts> drawnEarlier) throws IOException {
+    headless();
     Path chartDir = Files.createDirectories(folder.resolve(CHARTS_FOLDER));
     SpeedAxisUnit unit = options.chartSpeedUnit();
     List<ConfigurationResult> configurations = result.configurations();
-    // chart data (some charts sample the loop) per configuration in parallel, then every chart
-    // drawn and written in parallel; order and content do not depend on the number of threads
-    List<List<List<ReportChart>>> planned = configurations.parallelStream()
-        .map(c -> chartsOf(result, c, unit, options)).toList();
-    List<ReportChart> panelCharts = MarginPanel.of(result, unit);
-    List<ReportChart> all = new ArrayList<>();
-    planned.forEach(p -> p.forEach(all::addAll));
-    all.addAll(panelCharts);
+    // chart data (some charts sample the loop) per configuration in parallel, then every chart not
+    // drawn yet drawn, and all written, in parallel; order and content do not depend on the number
+    // of threads or on which configurations were drawn earlier
+    List<ConfigurationCharts> planned = configurations.parallelStream()
+        .map(c -> drawnEarlier.containsKey(c.configuration())
+            ? drawnEarlier.get(c.configuration()) : plan(result, c, unit, options)).toList();
+    List<Planned> all = new ArrayList<>();
+    planned.forEach(p -> all.addAll(p.all()));
+    MarginPanel.of(result, unit).forEach(chart -> all.add(new Planned(chart, null)));
     List<EmbeddedChart> drawn = embed(all, chartDir, options);
     Map<String, List<EmbeddedChart>> charts = new LinkedHashMap<>();
     Map<String, List<EmbeddedChart>> loopCharts = new LinkedHashMap<>();
@@ -79,8 +97,8 @@ public final class ReportWriter {
     for (int i = 0; i < configurations.size(); i++) {
       ConfigurationResult c = configurations.get(i);
       anyLoop |= c.servo() != null;
-      int open = planned.get(i).get(0).size();
-      int loop = planned.get(i).get(1).size();
+      int open = planned.get(i).open().size();
+      int loop = planned.get(i).loop().size();
       charts.put(c.configuration(), drawn.subList(next, next + open));
       loopCharts.put(c.configuration(), drawn.subList(next + open, next + open + loop));
       next += open + loop;
@@ -95,12 +113,12 @@ public final class ReportWriter {
     }
     if (options.envelope() != null) {
       EnvelopeReport.Data e = options.envelope();
-      sections.add(sections.size() - 2, new EnvelopeSection(e, unit, embed(List.of(EnvelopeReport.chart(
-          result.analysisCase().name(), e.spec(), e.envelopes(), unit)), chartDir, options).get(0)));
+      sections.add(sections.size() - 2, new EnvelopeSection(e, unit, embed(List.of(new Planned(EnvelopeReport.chart(
+          result.analysisCase().name(), e.spec(), e.envelopes(), unit), null)), chartDir, options).get(0)));
     }
     if (options.timeDomainCheck() != null) {
       sections.add(sections.size() - 2, new SimulationSection(options.timeDomainCheck(),
-          embed(SimulationSection.charts(options.timeDomainCheck()), chartDir, options)));
+          embed(undrawn(SimulationSection.charts(options.timeDomainCheck())), chartDir, options)));
     }
     String title = (anyLoop ? "Aeroservoelastic clearance report: " : "Flutter and divergence report: ")
         + result.analysisCase().name();
@@ -113,8 +131,22 @@ public final class ReportWriter {
     return html;
   }
 
-  /** @return the open-loop group (with the closed-loop V-g and V-f) and the loop group of charts */
-  private static List<List<ReportChart>> chartsOf(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit,
+  /** A chart and, once drawn, its PNG bytes (null before). */
+  record Planned(ReportChart chart, byte[] png) {}
+
+  /** Draws charts without a graphics device, as the report always does. */
+  static void headless() {
+    if (System.getProperty("java.awt.headless") == null) {
+      System.setProperty("java.awt.headless", "true");
+    }
+  }
+
+  private static List<Planned> undrawn(List<ReportChart> charts) {
+    return charts.stream().map(c -> new Planned(c, null)).toList();
+  }
+
+  /** @return the open-loop group (with the closed-loop V-g and V-f) and the loop group of charts, not drawn */
+  static ConfigurationCharts plan(SweepResult result, ConfigurationResult c, SpeedAxisUnit unit,
       ReportOptions options) {
     List<ReportChart> open = new ArrayList<>(FlutterCharts.of(result, c, unit));
     List<ReportChart> loop = new ArrayList<>();
@@ -127,21 +159,26 @@ public final class ReportWriter {
       loop.add(closed.get(0));
       loop.addAll(LoopResponseCharts.of(result, c, unit, options.proposedNotches(), options.models()));
     }
-    return List.of(open, loop);
+    return new ConfigurationCharts(c.configuration(), undrawn(open), undrawn(loop));
   }
 
-  /** Draws and writes the charts in parallel (in the pool of the calling thread); results in order. */
-  private static List<EmbeddedChart> embed(List<ReportChart> charts, Path chartDir, ReportOptions options)
+  /** Draws, in parallel in the pool of the calling thread, the charts not drawn yet; results in order. */
+  static List<Planned> drawAll(List<Planned> charts) {
+    return charts.parallelStream().map(p -> p.png() != null ? p : new Planned(p.chart(), p.chart().png())).toList();
+  }
+
+  /** Draws the charts not drawn yet and writes all of them, in parallel; results in order. */
+  private static List<EmbeddedChart> embed(List<Planned> charts, Path chartDir, ReportOptions options)
       throws IOException {
     try {
-      return charts.parallelStream().map(chart -> {
+      return charts.parallelStream().map(p -> {
         try {
-          byte[] png = chart.png();
+          byte[] png = p.png() != null ? p.png() : p.chart().png();
           List<String> names = new ArrayList<>();
-          for (Path p : chart.writeTo(chartDir, png, options.vectorCharts())) {
-            names.add(CHARTS_FOLDER + "/" + p.getFileName());
+          for (Path f : p.chart().writeTo(chartDir, png, options.vectorCharts())) {
+            names.add(CHARTS_FOLDER + "/" + f.getFileName());
           }
-          return new EmbeddedChart(chart, png, names);
+          return new EmbeddedChart(p.chart(), png, names);
         } catch (IOException e) {
           throw new UncheckedIOException(e);
         }

@@ -61,13 +61,32 @@ public final class CaseSweep {
    * @return results in case order
    */
   public SweepResult run(AnalysisCase analysisCase, SweepProgress progress) {
+    return run(analysisCase, progress, r -> { });
+  }
+
+  /**
+   * As {@link #run(AnalysisCase, SweepProgress)}, handing each configuration's result to
+   * {@code ready} as soon as it is complete, on the worker thread that computed it and inside this
+   * sweep's pool (so that work such as drawing that configuration's charts proceeds while the
+   * other configurations compute, and its parallel streams use this sweep's threads). The results
+   * do not depend on what {@code ready} does; an exception it throws ends the sweep.
+   *
+   * @param analysisCase validated case
+   * @param progress told of every completed stage (from worker threads)
+   * @param ready told of each configuration's result, from worker threads, in any order
+   * @return results in case order
+   */
+  public SweepResult run(AnalysisCase analysisCase, SweepProgress progress,
+      java.util.function.Consumer<ConfigurationResult> ready) {
     PlannedPath path = new PlannedPath(analysisCase.sweep());
     ForkJoinPool pool = new ForkJoinPool(threads);
     try {
       List<Future<ConfigurationResult>> futures = new ArrayList<>();
       for (Configuration c : analysisCase.configurations()) {
         futures.add(pool.submit(() -> {
-          return analyse(c, path, analysisCase, progress);
+          ConfigurationResult r = analyse(c, path, analysisCase, progress);
+          ready.accept(r);
+          return r;
         }));
       }
       List<ConfigurationResult> results = new ArrayList<>();

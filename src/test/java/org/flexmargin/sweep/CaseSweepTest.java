@@ -230,4 +230,26 @@ class CaseSweepTest {
     assertEquals("threads must be >= 1, got 0", e.getMessage());
     assertEquals(1, new CaseSweep(1).inPool(() -> ForkJoinTask.getPool().getParallelism()));
   }
+  @Test
+  void eachConfigurationIsHandedOverInsideThePoolAsSoonAsItIsDone() {
+    AnalysisCase c = caseOf(List.of(SOFT, SECTION), AnalysisOptions.defaults(), null);
+    java.util.Map<String, ConfigurationResult> handed = new java.util.concurrent.ConcurrentHashMap<>();
+    java.util.Set<Integer> parallelism = java.util.concurrent.ConcurrentHashMap.newKeySet();
+    SweepResult r = new CaseSweep(2).run(c, SweepProgress.NONE, done -> {
+      handed.put(done.configuration(), done);
+      parallelism.add(ForkJoinTask.getPool().getParallelism());
+    });
+    assertEquals(2, handed.size());
+    for (ConfigurationResult done : r.configurations()) {
+      assertSame(done, handed.get(done.configuration()), done.configuration());
+    }
+    // on the sweep's own workers, so that work started there uses the sweep's threads
+    assertEquals(java.util.Set.of(2), parallelism);
+    IllegalStateException e = assertThrows(IllegalStateException.class,
+        () -> new CaseSweep(1).run(c, SweepProgress.NONE, done -> {
+          throw new IllegalStateException("charts of " + done.configuration());
+        }));
+    // the pool may wrap the exception in a copy of its own type across threads
+    assertTrue(e.getMessage().endsWith("charts of soft"), e.getMessage());
+  }
 }
