@@ -85,11 +85,7 @@ public final class PointAssessor {
       throw new InvalidInputException("assessment",
           "requirements, margins, a stability and a mode list", "nothing");
     }
-    Checks.positive("first_aeroelastic_frequency_hz", firstAeroelasticFrequencyHz);
-    if (!modes.isEmpty() && loop == null) {
-      throw new InvalidInputException("loop", "the loop response to assess structural modes",
-          "nothing");
-    }
+    checkModeInputs(firstAeroelasticFrequencyHz, modes, loop);
     SpeedRegime regime = RequirementLookup.regime(requirements, speedEasMps);
     List<ClearanceCheck> checks = new ArrayList<>();
     List<StructuralModeAssessment> structural = new ArrayList<>();
@@ -131,6 +127,16 @@ public final class PointAssessor {
         checks, structural);
   }
 
+  /** The first aeroelastic frequency must be positive, and structural modes need the loop. */
+  private static void checkModeInputs(double firstAeroelasticFrequencyHz, List<ModeFrequency> modes,
+      SisoFrequencyFunction loop) {
+    Checks.positive("first_aeroelastic_frequency_hz", firstAeroelasticFrequencyHz);
+    if (!modes.isEmpty() && loop == null) {
+      throw new InvalidInputException("loop", "the loop response to assess structural modes",
+          "nothing");
+    }
+  }
+
   /**
    * Assesses the structural modes of one point only (no margin or stability checks): the same
    * structural checks as {@link #assess}, for a caller that follows one mode's check alone.
@@ -148,11 +154,7 @@ public final class PointAssessor {
     if (requirements == null || modes == null) {
       throw new InvalidInputException("assessment", "requirements and a mode list", "nothing");
     }
-    Checks.positive("first_aeroelastic_frequency_hz", firstAeroelasticFrequencyHz);
-    if (!modes.isEmpty() && loop == null) {
-      throw new InvalidInputException("loop", "the loop response to assess structural modes",
-          "nothing");
-    }
+    checkModeInputs(firstAeroelasticFrequencyHz, modes, loop);
     SpeedRegime regime = RequirementLookup.regime(requirements, speedEasMps);
     List<ClearanceCheck> checks = new ArrayList<>();
     List<StructuralModeAssessment> structural = new ArrayList<>();
