@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicReference;
 import org.flexmargin.clearance.Severity;
 import org.flexmargin.flutter.SolverDiagnostics;
 import org.flexmargin.io.CaseReader;
@@ -142,27 +143,22 @@ final class SweepCommand implements Callable<Integer> {
         ? styled.withProposedNotches(proposedNotches(c)) : styled;
     ProposedNotches proposed = withNotches.proposedNotches();
     AnalysisCase analysed = c;
-    // the time-domain check needs no sweep result: it runs beside the sweep
-    BesideSweep<LoopComparison> check = timeDomain && c.loop() != null && c.requirements() != null
-        ? BesideSweep.start(() -> LoopComparison.of(analysed, models, proposed == null ? null : proposed.loop(),
-            "designed notches"), work.threads, "time-domain check") : null;
+    // the time-domain check needs no sweep result: it runs in the sweep's pool beside the sweep
+    boolean checked = timeDomain && c.loop() != null && c.requirements() != null;
+    AtomicReference<LoopComparison> check = new AtomicReference<>();
+    Runnable alongside = checked
+        ? () -> check.set(LoopComparison.of(analysed, models, proposed == null ? null : proposed.loop(),
+            "designed notches"))
+        : () -> { };
     boolean terminal = System.console() != null && !common.quiet;
     ProgressBar bar = new ProgressBar(err, cost, terminal);
     CaseSweep sweep = new CaseSweep(work.threads);
     // each configuration's charts are drawn as soon as it is analysed, while the others compute
     String pathDescription = new PlannedPath(c.sweep()).describe();
     Map<String, ConfigurationCharts> drawnEarly = new ConcurrentHashMap<>();
-    SweepResult result;
-    try {
-      result = sweep.run(c, bar, r -> drawnEarly.put(r.configuration(),
-          ConfigurationCharts.draw(analysed, pathDescription, r, withNotches)));
-    } catch (RuntimeException | Error e) {
-      if (check != null) {
-        check.cancel();
-      }
-      throw e;
-    }
-    ReportOptions reportOptions = check != null ? withNotches.withTimeDomainCheck(check.join()) : withNotches;
+    SweepResult result = sweep.run(c, bar, r -> drawnEarly.put(r.configuration(),
+        ConfigurationCharts.draw(analysed, pathDescription, r, withNotches)), alongside);
+    ReportOptions reportOptions = checked ? withNotches.withTimeDomainCheck(check.get()) : withNotches;
     PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
     ReportOptions shown = envelope == null ? reportOptions : reportOptions.withEnvelope(envelope(c, envelope));

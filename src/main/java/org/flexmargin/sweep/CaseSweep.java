@@ -78,9 +78,28 @@ public final class CaseSweep {
    */
   public SweepResult run(AnalysisCase analysisCase, SweepProgress progress,
       java.util.function.Consumer<ConfigurationResult> ready) {
+    return run(analysisCase, progress, ready, () -> { });
+  }
+
+  /**
+   * As {@link #run(AnalysisCase, SweepProgress, java.util.function.Consumer)}, also running
+   * {@code alongside} (work that needs no sweep result, such as the report's time-domain check) in
+   * the same pool, so that it fills the threads the sweep leaves idle without adding a thread:
+   * at most this sweep's number of threads work at once. It is submitted first and is complete
+   * when this method returns; an exception it throws ends the sweep.
+   *
+   * @param analysisCase validated case
+   * @param progress told of every completed stage (from worker threads)
+   * @param ready told of each configuration's result, from worker threads, in any order
+   * @param alongside work run in the pool beside the configurations
+   * @return results in case order
+   */
+  public SweepResult run(AnalysisCase analysisCase, SweepProgress progress,
+      java.util.function.Consumer<ConfigurationResult> ready, Runnable alongside) {
     PlannedPath path = new PlannedPath(analysisCase.sweep());
     ForkJoinPool pool = new ForkJoinPool(threads);
     try {
+      Future<?> beside = pool.submit(alongside);
       List<Future<ConfigurationResult>> futures = new ArrayList<>();
       for (Configuration c : analysisCase.configurations()) {
         futures.add(pool.submit(() -> {
@@ -93,6 +112,7 @@ public final class CaseSweep {
       for (Future<ConfigurationResult> f : futures) {
         results.add(f.get());
       }
+      beside.get();
       return new SweepResult(analysisCase, path.describe(), results);
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();

@@ -252,4 +252,22 @@ class CaseSweepTest {
     // the pool may wrap the exception in a copy of its own type across threads
     assertTrue(e.getMessage().endsWith("charts of soft"), e.getMessage());
   }
+  @Test
+  void workAlongsideRunsInTheSweepsPoolAndIsDoneWhenTheSweepIs() {
+    AnalysisCase c = caseOf(List.of(SECTION), AnalysisOptions.defaults(), null);
+    int[] poolThreads = {0};
+    boolean[] done = {false};
+    SweepResult r = new CaseSweep(3).run(c, SweepProgress.NONE, x -> { }, () -> {
+      poolThreads[0] = ForkJoinTask.getPool().getParallelism();
+      done[0] = true;
+    });
+    assertEquals(1, r.configurations().size());
+    assertTrue(done[0], "finished before the sweep returns");
+    assertEquals(3, poolThreads[0], "no thread beyond the sweep's own");
+    IllegalStateException e = assertThrows(IllegalStateException.class,
+        () -> new CaseSweep(1).run(c, SweepProgress.NONE, x -> { }, () -> {
+          throw new IllegalStateException("time-domain check failed");
+        }));
+    assertTrue(e.getMessage().endsWith("time-domain check failed"), e.getMessage());
+  }
 }
