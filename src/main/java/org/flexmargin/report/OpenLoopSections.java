@@ -447,7 +447,12 @@ public final class OpenLoopSections {
   }
 
   static String fmt(double v, int decimals) {
-    return Double.isFinite(v) ? String.format(Locale.ROOT, "%." + decimals + "f", v) : MISSING;
+    if (!Double.isFinite(v)) {
+      return MISSING;
+    }
+    String text = String.format(Locale.ROOT, "%." + decimals + "f", v);
+    // a value that rounds to zero is shown as 0, not -0 (the sign is below the shown precision)
+    return text.startsWith("-") && text.chars().noneMatch(ch -> ch >= '1' && ch <= '9') ? text.substring(1) : text;
   }
 
   private static String sci(double v) {
