@@ -208,9 +208,10 @@ public final class VerdictStrip {
     w.element("strong", String.format(Locale.ROOT, "%s %s", ClearanceSections.requirementWords(worst.key()),
         worst.passed() ? "met" : "not met"), "class", worst.passed() ? "ok" : "warn");
     w.empty("br");
-    w.text(String.format(Locale.ROOT, "required %s %.1f %s, achieved %.1f %s, at ",
+    w.text(String.format(Locale.ROOT, "required %s %s %s, achieved %s %s, at ",
         worst.sense() == org.flexmargin.clearance.RequiredSense.AT_LEAST ? "at least" : "at most",
-        worst.requiredValue(), worst.unit().symbol(), worst.achievedValue(), worst.unit().symbol()));
+        OpenLoopSections.fmt(worst.requiredValue(), 1), worst.unit().symbol(),
+        OpenLoopSections.fmt(worst.achievedValue(), 1), worst.unit().symbol()));
     speedSpan(w, at, unit);
     w.close("td");
   }

@@ -145,4 +145,11 @@ class DemoVerdictTest {
         "the page says the governing instability is closed loop");
   }
 
+  @Test
+  void aMarginThatRoundsToZeroIsShownWithoutASign() {
+    // full_payload's worst loop margin is a gain-reduction margin of a few hundredths of a dB
+    // below zero: shown to 0.1 dB it is 0.0, never -0.0
+    assertFalse(html.contains("-0.0 dB"), "a signed zero in the report");
+    assertTrue(html.contains("achieved 0.0 dB"), "the worst loop margin of full_payload");
+  }
 }
