@@ -97,8 +97,11 @@ public final class RateSaturation {
     if (critical != null) {
       hz = critical.frequencyHz();
       magnitude = critical.magnitude();
-      basis = String.format(Locale.ROOT, "structural phase crossover closest to -1 (|L| = %.3f, gain margin %.1f dB)",
-          magnitude, critical.gainMarginDb());
+      // two decimals of dB beside three of |L| (0.001 in |L| is 0.009 dB); a margin that rounds to
+      // zero is written without a sign
+      double marginDb = Math.abs(critical.gainMarginDb()) < 0.005 ? 0.0 : critical.gainMarginDb();
+      basis = String.format(Locale.ROOT, "structural phase crossover closest to -1 (|L| = %.3f, gain margin %.2f dB)",
+          magnitude, marginDb);
     } else {
       StructuralModeAssessment peak = null;
       if (assessment != null) {

@@ -70,6 +70,19 @@ class RateSaturationUnitTest {
   }
 
   @Test
+  void aCrossoverMarginThatRoundsToZeroIsWrittenWithoutASign() {
+    // |L| = 10^(0.004/20): margin -0.004 dB, below the two decimals shown
+    for (double db : new double[] {-0.004, 0.004}) {
+      ServoPoint p = point(crossover(12, db));
+      String basis = RateSaturation.at(p, 8, null, FORWARD, ACTUATOR, true).orElseThrow().basis();
+      assertTrue(basis.contains("(|L| = 1.000, gain margin 0.00 dB)"), basis);
+    }
+    String basis = RateSaturation.at(point(crossover(12, -0.006)), 8, null, FORWARD, ACTUATOR, true)
+        .orElseThrow().basis();
+    assertTrue(basis.contains("gain margin -0.01 dB"), basis);
+  }
+
+  @Test
   void theLineAtTheCrossoverClosestToMinusOneFollowsTheActuatorGain() {
     // band edge 8 Hz; crossovers: 3 Hz (rigid, below the band, though nearest -1), 8 Hz exactly at
     // the edge with +1 dB, 12 Hz with -3 dB, 20 Hz with +1 dB (a tie: the first found stays)
@@ -85,7 +98,7 @@ class RateSaturationUnitTest {
     // round-off of a few operations: 1e-14 relative
     assertEquals(openLine(8), l.commandAmplitudeRad(), 1e-14 * openLine(8));
     assertEquals(openLine(8) * (1 - magnitude), l.closedLoopInjectionAmplitudeRad(), 1e-14 * openLine(8));
-    assertTrue(l.basis().startsWith("structural phase crossover closest to -1 (|L| = 0.891, gain margin 1.0 dB)"),
+    assertTrue(l.basis().startsWith("structural phase crossover closest to -1 (|L| = 0.891, gain margin 1.00 dB)"),
         l.basis());
   }
 
