@@ -80,6 +80,10 @@ class RateSaturationUnitTest {
     String basis = RateSaturation.at(point(crossover(12, -0.006)), 8, null, FORWARD, ACTUATOR, true)
         .orElseThrow().basis();
     assertTrue(basis.contains("gain margin -0.01 dB"), basis);
+    // exactly half of the last shown digit keeps its sign (it rounds away from zero)
+    String half = RateSaturation.at(point(crossover(12, -0.005)), 8, null, FORWARD, ACTUATOR, true)
+        .orElseThrow().basis();
+    assertTrue(half.contains("gain margin -0.01 dB"), half);
   }
 
   @Test
