@@ -154,12 +154,12 @@ final class SweepCommand implements Callable<Integer> {
     ProgressBar bar = new ProgressBar(err, cost, terminal);
     CaseSweep sweep = new CaseSweep(work.threads);
     // each configuration's charts are drawn as soon as it is analysed, while the others compute
-    String pathDescription = new PlannedPath(c.sweep()).describe();
+    PlannedPath path = new PlannedPath(c.sweep());
+    String pathDescription = path.describe();
     Map<String, ConfigurationCharts> drawnEarly = new ConcurrentHashMap<>();
     SweepResult result = sweep.run(c, bar, r -> drawnEarly.put(r.configuration(),
         ConfigurationCharts.draw(analysed, pathDescription, r, withNotches)), alongside);
     ReportOptions reportOptions = checked ? withNotches.withTimeDomainCheck(check.get()) : withNotches;
-    PlannedPath path = new PlannedPath(c.sweep());
     List<Finding> findings = Findings.of(result, path.at(0));
     ReportOptions shown = envelope == null ? reportOptions : reportOptions.withEnvelope(envelope(c, envelope));
     if (terminal) {

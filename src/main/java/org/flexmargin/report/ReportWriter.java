@@ -83,9 +83,10 @@ public final class ReportWriter {
     // chart data (some charts sample the loop) per configuration in parallel, then every chart not
     // drawn yet drawn, and all written, in parallel; order and content do not depend on the number
     // of threads or on which configurations were drawn earlier
-    List<ConfigurationCharts> planned = configurations.parallelStream()
-        .map(c -> drawnEarlier.containsKey(c.configuration())
-            ? drawnEarlier.get(c.configuration()) : plan(result, c, unit, options)).toList();
+    List<ConfigurationCharts> planned = configurations.parallelStream().map(c -> {
+      ConfigurationCharts early = drawnEarlier.get(c.configuration());
+      return early != null ? early : plan(result, c, unit, options);
+    }).toList();
     List<Planned> all = new ArrayList<>();
     planned.forEach(p -> all.addAll(p.all()));
     MarginPanel.of(result, unit).forEach(chart -> all.add(new Planned(chart, null)));
@@ -132,7 +133,12 @@ public final class ReportWriter {
   }
 
   /** A chart and, once drawn, its PNG bytes (null before). */
-  record Planned(ReportChart chart, byte[] png) {}
+  record Planned(ReportChart chart, byte[] png) {
+    /** @return this chart drawn (itself if it already is) */
+    Planned drawn() {
+      return png != null ? this : new Planned(chart, chart.png());
+    }
+  }
 
   /** Draws charts without a graphics device, as the report always does. */
   static void headless() {
@@ -164,16 +170,16 @@ public final class ReportWriter {
 
   /** Draws, in parallel in the pool of the calling thread, the charts not drawn yet; results in order. */
   static List<Planned> drawAll(List<Planned> charts) {
-    return charts.parallelStream().map(p -> p.png() != null ? p : new Planned(p.chart(), p.chart().png())).toList();
+    return charts.parallelStream().map(Planned::drawn).toList();
   }
 
   /** Draws the charts not drawn yet and writes all of them, in parallel; results in order. */
   private static List<EmbeddedChart> embed(List<Planned> charts, Path chartDir, ReportOptions options)
       throws IOException {
     try {
-      return charts.parallelStream().map(p -> {
+      return charts.parallelStream().map(Planned::drawn).map(p -> {
         try {
-          byte[] png = p.png() != null ? p.png() : p.chart().png();
+          byte[] png = p.png();
           List<String> names = new ArrayList<>();
           for (Path f : p.chart().writeTo(chartDir, png, options.vectorCharts())) {
             names.add(CHARTS_FOLDER + "/" + f.getFileName());
