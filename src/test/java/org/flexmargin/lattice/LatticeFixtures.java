@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.apache.commons.math3.complex.Complex;
 import org.ejml.data.ZMatrixRMaj;
 import org.flexmargin.model.ElasticMode;
 import org.flexmargin.model.FlowSymmetry;
@@ -41,12 +42,18 @@ final class LatticeFixtures {
     }
     ZMatrixRMaj cp = new ZMatrixRMaj(n, 1);
     ps.solve(w, cp);
-    double lift = 0, area = 0;
-    for (int i = 0; i < n; i++) {
-      lift += cp.getReal(i, 0) * l.areaM2(i) * l.normalZ(i);
+    return liftCoefficient(l, cp, 0).getReal();
+  }
+
+  /** Whole-surface lift coefficient of one column of lifting pressures, reference = the lattice's own area. */
+  static Complex liftCoefficient(BoxLattice l, ZMatrixRMaj cp, int column) {
+    double re = 0, im = 0, area = 0;
+    for (int i = 0; i < l.size(); i++) {
+      re += cp.getReal(i, column) * l.areaM2(i) * l.normalZ(i);
+      im += cp.getImag(i, column) * l.areaM2(i) * l.normalZ(i);
       area += l.areaM2(i);
     }
-    return lift / area;
+    return new Complex(re / area, im / area);
   }
 
   /**

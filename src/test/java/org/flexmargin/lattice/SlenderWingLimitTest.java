@@ -46,18 +46,9 @@ class SlenderWingLimitTest {
     ps.factorise(nu, 0);
     ZMatrixRMaj cp = new ZMatrixRMaj(n, 2);
     ps.solve(w, cp);
-    double area = 0;
-    for (int i = 0; i < n; i++) {
-      area += l.areaM2(i);
-    }
     Complex[] out = new Complex[2];
     for (int m = 0; m < 2; m++) {
-      double re = 0, im = 0;
-      for (int i = 0; i < n; i++) {
-        re += cp.getReal(i, m) * l.areaM2(i) * l.normalZ(i);
-        im += cp.getImag(i, m) * l.areaM2(i) * l.normalZ(i);
-      }
-      out[m] = new Complex(re / area, im / area);
+      out[m] = LatticeFixtures.liftCoefficient(l, cp, m);
     }
     return out;
   }
