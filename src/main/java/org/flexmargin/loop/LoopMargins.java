@@ -117,17 +117,55 @@ public final class LoopMargins {
     StateSpace.require(Double.isFinite(tau) && tau >= 0, "loop.pure_delay_s", "a finite value >= 0",
         String.valueOf(tau));
     Counted f = new Counted(loop, tau);
-
-    // 1. initial grid in x = ln w, plus seeds
     double x0 = Math.log(wMin);
     double x1 = Math.log(wMax);
     int initial = Math.max(2, (int) Math.ceil((x1 - x0) / Math.log(10) * options.pointsPerDecade())
         + 1);
-    double[] xs = new double[initial];
-    for (int i = 0; i < initial; i++) {
-      xs[i] = i == initial - 1 ? x1 : x0 + (x1 - x0) * i / (initial - 1);
-    }
+    Grid g = seededGrid(f, x0, x1, initial, seedPoints(seeds, wMin, wMax), tau);
+    int afterSeeds = g.size;
     double minWidth = (x1 - x0) / (initial - 1) / Math.pow(2, options.maxRefinementDepth());
+    double maxPhase = Math.toRadians(options.maxPhaseStepDeg());
+    double maxLogMag = options.maxGainStepDb() * Math.log(10) / 20;
+    g = bisected(g, f, maxPhase, maxLogMag, tau, minWidth);
+    int[] unresolved = {0};
+    for (int i = 0; i + 1 < g.size; i++) {
+      if (g.needsRefinement(i, maxPhase, maxLogMag, tau)) {
+        unresolved[0]++;
+      }
+    }
+    double[] remainder = unwrappedRemainder(g, tau);
+    double[] phase = new double[g.size];
+    for (int i = 0; i < g.size; i++) {
+      phase[i] = remainder[i] - Math.exp(g.x[i]) * tau;
+    }
+    BrentSolver solver = new BrentSolver(1e-14, 1e-13, 1e-15);
+    double[] v = new double[2];
+    List<GainCrossover> gains = gainCrossovers(g, f, remainder, solver, v);
+    List<PhaseCrossover> phases = phaseCrossovers(g, f, remainder, phase, solver, v, unresolved);
+
+    // step 6: the peak gain and the disk margin
+    DoubleBinaryOperator gain = Math::hypot;
+    DoubleBinaryOperator diskInverse = (re, im) -> Math.hypot(1 - re, im) / (2 * Math.hypot(1 + re, im));
+    int refined = options.refineExtrema() ? MAXIMA_REFINED : 0;
+    double[] peak = maximise(g, gain, f, v, refined);
+    double[] disk = maximise(g, diskInverse, f, v, refined);
+    double wPeak = Math.exp(peak[0]);
+    PeakGain peakGain = new PeakGain(wPeak, wPeak / (2 * Math.PI), peak[1],
+        20 * Math.log10(peak[1]));
+    double alpha = disk[1] == 0 ? Double.POSITIVE_INFINITY : 1 / disk[1];
+    DiskMargin dm = DiskMargin.ofAlpha(Double.isNaN(alpha) ? 0.0 : alpha, Math.exp(disk[0]));
+
+    MarginDiagnostics diag = new MarginDiagnostics(initial, afterSeeds - Math.min(afterSeeds,
+        initial), g.size - afterSeeds, g.size, unresolved[0], f.count);
+    return new LoopMarginResult(wMin, wMax, gains, phases, dm, peakGain, stability, diag);
+  }
+
+  /**
+   * Step 1 of the method: ln w of the grid points around each lightly damped seed pole (its
+   * damped frequency +- {@link MarginOptions#seedPointsPerPole()} steps of its |real part|, and its
+   * natural frequency), inside (w_min, w_max).
+   */
+  private List<Double> seedPoints(Eigenvalues seeds, double wMin, double wMax) {
     List<Double> seedX = new ArrayList<>();
     for (int k = 0; k < seeds.size(); k++) {
       double re = seeds.realAt(k);
@@ -148,10 +186,21 @@ public final class LoopMargins {
         seedX.add(Math.log(wn));
       }
     }
-    double[] merged = new double[xs.length + seedX.size()];
-    System.arraycopy(xs, 0, merged, 0, xs.length);
+    return seedX;
+  }
+
+  /**
+   * Step 1: the initial grid of {@code initial} points evenly spaced in x = ln w over [x0, x1],
+   * merged with the seed points (repeats dropped) and the delay's intermediate points, sampled.
+   */
+  private static Grid seededGrid(Counted f, double x0, double x1, int initial, List<Double> seedX,
+      double tau) {
+    double[] merged = new double[initial + seedX.size()];
+    for (int i = 0; i < initial; i++) {
+      merged[i] = i == initial - 1 ? x1 : x0 + (x1 - x0) * i / (initial - 1);
+    }
     for (int i = 0; i < seedX.size(); i++) {
-      merged[xs.length + i] = seedX.get(i);
+      merged[initial + i] = seedX.get(i);
     }
     Arrays.sort(merged);
     Grid g = new Grid(merged.length + 64);
@@ -160,11 +209,16 @@ public final class LoopMargins {
         addWithDelaySteps(g, x, f, tau);
       }
     }
-    int afterSeeds = g.size;
+    return g;
+  }
 
-    double maxPhase = Math.toRadians(options.maxPhaseStepDeg());
-    double maxLogMag = options.maxGainStepDb() * Math.log(10) / 20;
-    // 2. adaptive bisection (phase steps measured on L e^{j w tau})
+  /**
+   * Step 2: bisects (in ln w) every interval whose phase of L e^{j w tau} or whose gain changes
+   * by more than the limits, level by level, until none does, the point cap is reached or an
+   * interval is narrower than twice {@code minWidth}.
+   */
+  private Grid bisected(Grid g, Counted f, double maxPhase, double maxLogMag, double tau,
+      double minWidth) {
     boolean changed = true;
     while (changed && g.size < options.maxPoints()) {
       changed = false;
@@ -180,28 +234,22 @@ public final class LoopMargins {
       }
       g = next;
     }
-    int unresolved = 0;
-    for (int i = 0; i + 1 < g.size; i++) {
-      if (g.needsRefinement(i, maxPhase, maxLogMag, tau)) {
-        unresolved++;
-      }
-    }
+    return g;
+  }
 
-    // 3. unwrap the phase of L e^{j w tau}, then take the delay's exact turn off again
+  /** Step 3: the phase of L e^{j w tau} at the grid points, unwrapped along the grid, rad. */
+  private static double[] unwrappedRemainder(Grid g, double tau) {
     double[] remainder = new double[g.size];
-    double[] phase = new double[g.size];
     remainder[0] = g.remainderPhase(0, tau);
     for (int i = 1; i < g.size; i++) {
       remainder[i] = remainder[i - 1] + wrap(g.remainderPhase(i, tau) - remainder[i - 1]);
     }
-    for (int i = 0; i < g.size; i++) {
-      phase[i] = remainder[i] - Math.exp(g.x[i]) * tau;
-    }
+    return remainder;
+  }
 
-    BrentSolver solver = new BrentSolver(1e-14, 1e-13, 1e-15);
-    double[] v = new double[2];
-
-    // 4. gain crossovers
+  /** Step 4: every sign change of ln|L| between grid points, solved by Brent's method. */
+  private static List<GainCrossover> gainCrossovers(Grid g, Counted f, double[] remainder,
+      BrentSolver solver, double[] v) {
     List<GainCrossover> gains = new ArrayList<>();
     for (int i = 0; i + 1 < g.size; i++) {
       double a = g.logMag(i);
@@ -222,8 +270,16 @@ public final class LoopMargins {
             Math.toDegrees(pmRad), delay));
       }
     }
+    return gains;
+  }
 
-    // 5. phase crossovers
+  /**
+   * Step 5: every crossing of the unwrapped phase through -180 deg + k 360 deg between grid
+   * points, solved by Brent's method; a branch the phase inside an interval does not bracket
+   * after all adds one to {@code unresolved[0]}.
+   */
+  private static List<PhaseCrossover> phaseCrossovers(Grid g, Counted f, double[] remainder,
+      double[] phase, BrentSolver solver, double[] v, int[] unresolved) {
     List<PhaseCrossover> phases = new ArrayList<>();
     for (int i = 0; i + 1 < g.size; i++) {
       long ka = (long) Math.floor((phase[i] + Math.PI) / (2 * Math.PI));
@@ -244,7 +300,7 @@ public final class LoopMargins {
             xr = solver.solve(200, h::applyAsDouble, g.x[i], g.x[i + 1]);
           } catch (RuntimeException e) {
             // the phase inside an unresolved interval did not bracket this branch
-            unresolved++;
+            unresolved[0]++;
             continue;
           }
         }
@@ -259,22 +315,7 @@ public final class LoopMargins {
             mag < 1 ? MarginDirection.GAIN_INCREASE : MarginDirection.GAIN_REDUCTION));
       }
     }
-
-    // 6. peak gain and disk margin
-    DoubleBinaryOperator gain = Math::hypot;
-    DoubleBinaryOperator diskInverse = (re, im) -> Math.hypot(1 - re, im) / (2 * Math.hypot(1 + re, im));
-    int refined = options.refineExtrema() ? MAXIMA_REFINED : 0;
-    double[] peak = maximise(g, gain, f, v, refined);
-    double[] disk = maximise(g, diskInverse, f, v, refined);
-    double wPeak = Math.exp(peak[0]);
-    PeakGain peakGain = new PeakGain(wPeak, wPeak / (2 * Math.PI), peak[1],
-        20 * Math.log10(peak[1]));
-    double alpha = disk[1] == 0 ? Double.POSITIVE_INFINITY : 1 / disk[1];
-    DiskMargin dm = DiskMargin.ofAlpha(Double.isNaN(alpha) ? 0.0 : alpha, Math.exp(disk[0]));
-
-    MarginDiagnostics diag = new MarginDiagnostics(initial, afterSeeds - Math.min(afterSeeds,
-        initial), g.size - afterSeeds, g.size, unresolved, f.count);
-    return new LoopMarginResult(wMin, wMax, gains, phases, dm, peakGain, stability, diag);
+    return phases;
   }
 
   /**
