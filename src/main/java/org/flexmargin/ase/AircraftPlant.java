@@ -357,9 +357,6 @@ public final class AircraftPlant {
     if (rational.size() != m) {
       throw new IllegalArgumentException("rational aerodynamics has " + rational.size() + " coordinates, plant " + m);
     }
-    double qd = condition.dynamicPressurePa();
-    double v = condition.speedTasMps();
-    double b = rational.referenceSemichordM();
     LagRealisation lags = rational.lagRealisation();
     if (lags.size() != m) {
       throw new IllegalArgumentException("lag realisation has " + lags.size() + " coordinates, plant " + m);
@@ -367,6 +364,18 @@ public final class AircraftPlant {
     int n = 2 + 2 * m + lags.stateCount();
     DMatrixRMaj a = new DMatrixRMaj(n, n);
     DMatrixRMaj bIn = new DMatrixRMaj(n, 1);
+    setRigidRows(a, bIn);
+    setElasticAndLagRows(a, bIn, rational, lags);
+    DMatrixRMaj c = new DMatrixRMaj(sensors.size(), n);
+    DMatrixRMaj d = new DMatrixRMaj(sensors.size(), 1);
+    setSensorRows(a, bIn, c, d);
+    List<String> outputs = sensors.stream().map(SensorSpec::name).toList();
+    return new StateSpace(a, bIn, c, d, List.of("elevator"), outputs, stateNames(lags));
+  }
+
+  /** The rows of alpha' and q' (states 0 and 1) of the state-space model and their elevator input. */
+  private void setRigidRows(DMatrixRMaj a, DMatrixRMaj bIn) {
+    int n = a.numCols;
     double lf = liftFactor();
     double mf = momentFactor();
     double rf = rateFactor();
@@ -388,6 +397,19 @@ public final class AircraftPlant {
       a.add(1, 2 + i, mf * momentPerEta[i]);
     }
     bIn.set(1, 0, cad * bIn.get(0, 0) + mf * rigid.pitchMomentPerElevatorPerRad());
+  }
+
+  /**
+   * The rows of the elastic coordinates, their rates and the aerodynamic lag states, and their
+   * elevator input (they do not depend on the rigid rows).
+   */
+  private void setElasticAndLagRows(DMatrixRMaj a, DMatrixRMaj bIn, RationalAerodynamics rational,
+      LagRealisation lags) {
+    int n = a.numCols;
+    double qd = condition.dynamicPressurePa();
+    double v = condition.speedTasMps();
+    double b = rational.referenceSemichordM();
+    double rf = rateFactor();
     // elastic: Mbar eta'' = -Cbar eta' - Kbar eta + qd sum D_l z_l + qd Qa alpha + qd Qq rf q + qd Qd delta
     DMatrixRMaj a0 = rational.coefficient(0);
     DMatrixRMaj a1 = rational.coefficient(1);
@@ -421,9 +443,13 @@ public final class AircraftPlant {
     }
     // lag states: z_l' = E_l eta' - (V/b) beta_l z_l
     lags.setLagRows(a, 2 + 2 * m, 2 + m, beta -> -beta / bv);
+  }
+
+  /** The sensor rows C, D of the state-space model from its complete A and B. */
+  private void setSensorRows(DMatrixRMaj a, DMatrixRMaj bIn, DMatrixRMaj c, DMatrixRMaj d) {
+    int n = a.numCols;
+    double v = condition.speedTasMps();
     int ns = sensors.size();
-    DMatrixRMaj c = new DMatrixRMaj(ns, n);
-    DMatrixRMaj d = new DMatrixRMaj(ns, 1);
     for (int s = 0; s < ns; s++) {
       SensorSpec sensor = sensors.get(s);
       if (sensor.kind() == SensorKind.PITCH_RATE_GYRO) {
@@ -456,6 +482,10 @@ public final class AircraftPlant {
         }
       }
     }
+  }
+
+  /** @return the names of the state-space model's states, in order */
+  private List<String> stateNames(LagRealisation lags) {
     List<String> states = new ArrayList<>();
     states.add("alpha");
     states.add("q");
@@ -472,7 +502,6 @@ public final class AircraftPlant {
             : "aero_lag" + (l + 1) + (lags.states(l) > 1 ? "_" + (k + 1) : ""));
       }
     }
-    List<String> outputs = sensors.stream().map(SensorSpec::name).toList();
-    return new StateSpace(a, bIn, c, d, List.of("elevator"), outputs, states);
+    return states;
   }
 }
