@@ -105,29 +105,8 @@ public final class ClosedLoopSweep {
       im[p] = eigen.get(p).imag();
     }
     int n = re[0].length;
-    // order[p][j]: index at point p of branch j (nearest-neighbour continuation)
-    int[][] order = new int[np][n];
-    for (int j = 0; j < n; j++) {
-      order[0][j] = j;
-    }
-    for (int p = 1; p < np; p++) {
-      order[p] = match(re[p - 1], im[p - 1], order[p - 1], re[p], im[p]);
-    }
-    List<ClosedLoopPoint> points = new ArrayList<>();
-    for (int p = 0; p < np; p++) {
-      FlightCondition fc = path.at(p);
-      double[] sp = shortPeriod[p];
-      List<ClosedLoopRoot> roots = new ArrayList<>();
-      for (int i = 0; i < n; i++) {
-        if (im[p][i] >= 0) {
-          roots.add(new ClosedLoopRoot(re[p][i], im[p][i], label(re[p][i], im[p][i], openLoop, p, sp)));
-        }
-      }
-      // by frequency, then real part: the listing does not depend on the order the solver found
-      // the roots in (real roots share the frequency 0)
-      roots.sort(Comparator.comparingDouble(ClosedLoopRoot::imagRadPerS).thenComparingDouble(ClosedLoopRoot::realPerS));
-      points.add(new ClosedLoopPoint(p, fc, roots, n));
-    }
+    int[][] order = branchOrder(re, im);
+    List<ClosedLoopPoint> points = points(path, openLoop, re, im, shortPeriod);
     List<FlutterCrossing> crossings = new ArrayList<>();
     double[] levels = options.dampingLimitG() > 0 ? new double[] {0.0, -options.dampingLimitG()} : new double[] {0.0};
     for (int j = 0; j < n; j++) {
@@ -175,6 +154,45 @@ public final class ClosedLoopSweep {
         + "same order (keeping its sinc droop); each g = 0 onset is then refined on the exact frequency-domain "
         + "loop (where L(jw) passes through -1) and reported beside the rational one");
     return new ClosedLoopResult(points, onsets, fitText, solves[0], warnings, assumptions, refinements);
+  }
+
+  /**
+   * @return order[p][j]: the index at point p of the root on branch j, continued from the first
+   *     point by nearest-neighbour matching
+   */
+  private static int[][] branchOrder(double[][] re, double[][] im) {
+    int np = re.length;
+    int n = re[0].length;
+    int[][] order = new int[np][n];
+    for (int j = 0; j < n; j++) {
+      order[0][j] = j;
+    }
+    for (int p = 1; p < np; p++) {
+      order[p] = match(re[p - 1], im[p - 1], order[p - 1], re[p], im[p]);
+    }
+    return order;
+  }
+
+  /** @return the roots of each point (upper half-plane and real), labelled, by frequency then real part */
+  private static List<ClosedLoopPoint> points(PlannedPath path, FlutterSolution openLoop, double[][] re,
+      double[][] im, double[][] shortPeriod) {
+    int n = re[0].length;
+    List<ClosedLoopPoint> points = new ArrayList<>();
+    for (int p = 0; p < re.length; p++) {
+      FlightCondition fc = path.at(p);
+      double[] sp = shortPeriod[p];
+      List<ClosedLoopRoot> roots = new ArrayList<>();
+      for (int i = 0; i < n; i++) {
+        if (im[p][i] >= 0) {
+          roots.add(new ClosedLoopRoot(re[p][i], im[p][i], label(re[p][i], im[p][i], openLoop, p, sp)));
+        }
+      }
+      // by frequency, then real part: the listing does not depend on the order the solver found
+      // the roots in (real roots share the frequency 0)
+      roots.sort(Comparator.comparingDouble(ClosedLoopRoot::imagRadPerS).thenComparingDouble(ClosedLoopRoot::realPerS));
+      points.add(new ClosedLoopPoint(p, fc, roots, n));
+    }
+    return points;
   }
 
   /** Adds a warning when the fit's error at the reduced frequency of a rational g = 0 crossing is large. */
