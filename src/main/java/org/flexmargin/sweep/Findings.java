@@ -88,7 +88,7 @@ public final class Findings {
   /** Closed-loop instability at the sweep start and every refined closed-loop crossing. */
   private static void closedLoop(List<Finding> out, ConfigurationResult c) {
     ClosedLoopResult r = c.servo().closedLoop();
-    ClosedLoopPoint first = r.points().get(0);
+    ClosedLoopPoint first = r.start();
     for (ClosedLoopRoot root : first.roots()) {
       if (root.realPerS() > 0) {
         FlightCondition fc = first.condition();
