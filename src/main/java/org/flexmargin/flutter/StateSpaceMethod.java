@@ -2,6 +2,7 @@ package org.flexmargin.flutter;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
@@ -102,7 +103,10 @@ import org.flexmargin.numerics.ComplexEigenResult;
  *       no branch accounts for is refined by Brent's method on the continuous function
  *       (-1)^(number of negative real roots) &times; (distance of the nearest real root from 0)
  *       and reported in the warnings with its speed and dynamic pressure (the result types have
- *       no crossing kind for it yet).
+ *       no crossing kind for it yet). A step in which a tracked branch already reports a crossing
+ *       at zero frequency (its real root crossing zero) gets no such note: that crossing accounts
+ *       for the sign change, and the other real roots crossed zero an even number of times
+ *       there, which det A cannot show.
  * </ul>
  *
  * <p>Diagnostics: {@code fullEigenSolves} counts eigen-decompositions, {@code iterations} their QR
@@ -423,7 +427,7 @@ public final class StateSpaceMethod implements FlutterMethod {
     }
     List<FlutterCrossing> crossings = CrossingScan.scan(roots, options,
         (j, p, fa, level) -> tr.refine(j, p, roots[p], fa, level, options));
-    tr.staticCrossings(spectra, roots);
+    tr.staticCrossings(spectra);
     tr.finishWarnings();
     flagFitErrorAtOnsets(system.aero(), f, crossings, warnings);
     return new FlutterSolution(FlutterMethodKind.STATE_SPACE, curves, crossings, tr.counters.toDiagnostics(),
@@ -523,6 +527,8 @@ public final class StateSpaceMethod implements FlutterMethod {
     String unstableUntracked;
     boolean unstableUntrackedReal;
     final List<String> staticNotes = new ArrayList<>();
+    /** Left grid points of the steps in which a tracked branch crosses at zero frequency. */
+    final BitSet zeroFrequencyCrossings = new BitSet();
 
     Tracker(AeroelasticSystem sys, RationalFit fit, FlightPath path) {
       this.sys = sys;
@@ -800,26 +806,19 @@ public final class StateSpaceMethod implements FlutterMethod {
     /**
      * Real roots crossing zero between grid points that no branch accounts for (static divergence
      * of the state-space model): bracketed by a sign change of det A, refined by Brent's method on
-     * the path parameter, reported as warnings.
+     * the path parameter, reported as warnings. A step with a crossing of a tracked branch at zero
+     * frequency ({@link #zeroFrequencyCrossings}, filled by {@link #refine}) is skipped: that
+     * crossing already reports the real root crossing zero, whether the branch was real at both
+     * grid points or a pair split into real roots within the step.
      */
-    void staticCrossings(Spectrum[] spectra, Root[][] roots) {
+    void staticCrossings(Spectrum[] spectra) {
       for (int p = 0; p + 1 < spectra.length; p++) {
-        if (spectra[p] == null || spectra[p + 1] == null) {
+        if (spectra[p] == null || spectra[p + 1] == null || zeroFrequencyCrossings.get(p)) {
           continue;
         }
         double fa = spectra[p].staticFunction();
         double fb = spectra[p + 1].staticFunction();
         if ((fa > 0) == (fb > 0)) {
-          continue;
-        }
-        boolean branchCrossed = false;
-        for (int j = 0; j < n; j++) {
-          Root a = roots[p][j];
-          Root b = roots[p + 1][j];
-          branchCrossed |= a.converged() && b.converged() && a.si() == 0 && b.si() == 0
-              && (a.sr() > 0) != (b.sr() > 0);
-        }
-        if (branchCrossed) {
           continue;
         }
         int at = p;
@@ -888,8 +887,12 @@ public final class StateSpaceMethod implements FlutterMethod {
       Root at = step(p, left, t, 0).roots()[branch];
       boolean rising = fLeft < 0;
       CrossingKind kind = CrossingKind.of(level, rising);
-      return new FlutterCrossing(branch, names.get(branch), kind, t, path.at(t),
+      FlutterCrossing x = new FlutterCrossing(branch, names.get(branch), kind, t, path.at(t),
           at.converged() ? at.frequencyHz() : Double.NaN, level, evaluations, absAccuracy);
+      if (x.frequencyHz() == 0) {
+        zeroFrequencyCrossings.set(p); // a real root: its crossing function 2 Re(s) is zero there
+      }
+      return x;
     }
   }
 }
