@@ -92,7 +92,12 @@ import org.flexmargin.numerics.ComplexEigenResult;
  *       to 8 times). When a complex pair reaches the real axis and splits, the branch follows the
  *       larger real root (the less stable one, which decides stability; e.g. the divergence root).
  *   <li><b>Aerodynamic lag roots</b> (real, near -(V/b) beta_l) and other untracked roots are not
- *       reported as branches; if one is unstable at a grid point, the solution warns.
+ *       reported as branches; if one is unstable at a grid point, the solution warns. A root in
+ *       the right half-plane is never dominated by lag states: its eigenvector has lag states
+ *       z_l = s / (s + (V/b) beta_l) E_l xi, with |s| &lt; |s + (V/b) beta_l| for Re s &gt; 0
+ *       and ||E_l|| &le; 1 in both realisations (the identity, or a unit row e_l^T), so
+ *       ||z_l|| &lt; ||xi||: a root grown out of a lag root is reported like any other untracked
+ *       root once it is unstable.
  *   <li><b>Crossings</b>: sign changes of 2 Re(s) - g_level |Im(s)| (g_level = 0 and minus the
  *       damping limit) on the grid are refined by Brent's method on the path parameter,
  *       re-solving the eigenproblem and matching from the left grid point's roots. A tracked
@@ -523,7 +528,6 @@ public final class StateSpaceMethod implements FlutterMethod {
     final List<String> warnings = new ArrayList<>();
     final ComplexEigen eigen = new ComplexEigen();
     double maxTrackedK;
-    String unstableLag;
     String unstableUntracked;
     boolean unstableUntrackedReal;
     final List<String> staticNotes = new ArrayList<>();
@@ -785,20 +789,13 @@ public final class StateSpaceMethod implements FlutterMethod {
         if (tracked[c] || !sp.candidate(c) || !(sp.re()[c] > REAL_TOLERANCE * sp.radius())) {
           continue;
         }
-        String text = String.format(Locale.ROOT, "%.2f m/s EAS (s = %.4g %+.4g i 1/s)",
-            fc.speedEasMps(), sp.re()[c], sp.upperImag(c));
-        if (sp.lagRatio()[c] > LAG_DOMINANCE) {
-          if (unstableLag == null) {
-            unstableLag = text;
-          }
-        } else {
-          if (sp.upperImag(c) != 0) {
-            counters.trouble(p); // an oscillatory root no branch follows is unstable: onsets in doubt
-          }
-          if (unstableUntracked == null) {
-            unstableUntracked = text;
-            unstableUntrackedReal = sp.upperImag(c) == 0;
-          }
+        if (sp.upperImag(c) != 0) {
+          counters.trouble(p); // an oscillatory root no branch follows is unstable: onsets in doubt
+        }
+        if (unstableUntracked == null) {
+          unstableUntracked = String.format(Locale.ROOT, "%.2f m/s EAS (s = %.4g %+.4g i 1/s)",
+              fc.speedEasMps(), sp.re()[c], sp.upperImag(c));
+          unstableUntrackedReal = sp.upperImag(c) == 0;
         }
       }
     }
@@ -850,10 +847,6 @@ public final class StateSpaceMethod implements FlutterMethod {
 
     void finishWarnings() {
       warnings.addAll(staticNotes);
-      if (unstableLag != null) {
-        warnings.add("an aerodynamic lag root of the state-space model is unstable from " + unstableLag
-            + "; the rational fit is not trustworthy there");
-      }
       if (unstableUntracked != null && (!unstableUntrackedReal || staticNotes.isEmpty())) {
         warnings.add("a root not followed by any branch is unstable from " + unstableUntracked
             + "; check the eigenvalues at that speed");

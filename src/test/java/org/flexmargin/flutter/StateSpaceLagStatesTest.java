@@ -1,0 +1,110 @@
+package org.flexmargin.flutter;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.apache.commons.math3.complex.Complex;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.CommonOps_ZDRM;
+import org.flexmargin.aero.LagRealisation;
+import org.flexmargin.aero.MinimumStateApproximation;
+import org.flexmargin.aero.RationalFit;
+import org.flexmargin.aero.RogerApproximation;
+import org.flexmargin.numerics.ReferenceEigenvalues;
+import org.junit.jupiter.api.Test;
+
+/**
+ * No unstable root of the state-space model is dominated by its lag states, so an instability is
+ * never mistaken for a lag root and always reported as a root (tracked or not). Derivation: the
+ * lag rows of x' = A x give, for an eigenpair (s, x = [xi; s xi; z]), s z_l = E_l s xi - (V/b)
+ * beta_l z_l, so z_l = s / (s + (V/b) beta_l) E_l xi. For Re s &gt; 0 and beta_l &gt; 0,
+ * |s + (V/b) beta_l| &gt; |s|; with ||E_l|| &le; 1 (the identity in Roger's realisation, a unit row
+ * in the minimum-state one) ||z_l|| &lt; ||xi||.
+ *
+ * <p>Eigenvalues by Commons Math, eigenvectors by inverse iteration with EJML's complex LU: both
+ * independent of the program's eigen-solver.
+ */
+class StateSpaceLagStatesTest {
+
+  /**
+   * Largest ||z_l|| / ||xi|| over the lags and the eigenvalues with Re s &gt; 0 of the state
+   * matrix; fails unless there is at least one such eigenvalue.
+   */
+  private static double worstUnstableLagRatio(DMatrixRMaj a, LagRealisation lags, int n) {
+    double worst = 0;
+    int unstable = 0;
+    for (Complex s : ReferenceEigenvalues.of(a)) {
+      if (!(s.getReal() > 0)) {
+        continue;
+      }
+      unstable++;
+      double[] v = eigenvector(a, s);
+      double xi = norm(v, 0, n);
+      for (int l = 0; l < lags.lagCount(); l++) {
+        worst = Math.max(worst, norm(v, 2 * n + lags.firstState(l), lags.states(l)) / xi);
+      }
+    }
+    assertTrue(unstable > 0, "premise: an unstable root at this speed");
+    return worst;
+  }
+
+  /** Two steps of inverse iteration at s (1 + 1e-12): interleaved complex entries. */
+  private static double[] eigenvector(DMatrixRMaj a, Complex s) {
+    int size = a.numRows;
+    ZMatrixRMaj shifted = new ZMatrixRMaj(size, size);
+    for (int i = 0; i < size; i++) {
+      for (int j = 0; j < size; j++) {
+        shifted.set(i, j, a.get(i, j), 0);
+      }
+      shifted.set(i, i, a.get(i, i) - s.getReal() * (1 + 1e-12), -s.getImaginary() * (1 + 1e-12));
+    }
+    ZMatrixRMaj x = new ZMatrixRMaj(size, 1);
+    for (int i = 0; i < size; i++) {
+      x.set(i, 0, 1.0, 0.0);
+    }
+    for (int k = 0; k < 2; k++) {
+      ZMatrixRMaj next = new ZMatrixRMaj(size, 1);
+      assertTrue(CommonOps_ZDRM.solve(shifted.copy(), x, next));
+      double scale = 1 / norm(next.data, 0, size);
+      CommonOps_ZDRM.scale(scale, 0, next);
+      x = next;
+    }
+    return x.data;
+  }
+
+  /** Euclidean norm of complex entries from..from + count - 1 of interleaved data. */
+  private static double norm(double[] v, int from, int count) {
+    double sum = 0;
+    for (int i = from; i < from + count; i++) {
+      sum += v[2 * i] * v[2 * i] + v[2 * i + 1] * v[2 * i + 1];
+    }
+    return Math.sqrt(sum);
+  }
+
+  @Test
+  void aRootGrownOutOfTheLagRootStaysMostlyStructuralOnceUnstable() {
+    // one mode diverging through its lag root (StateSpaceStaticNotesTest), at 1.2 times its
+    // divergence speed: the unstable real root is the former lag root
+    AeroelasticSystem sys = StateSpaceStaticNotesTest.lagSpringModes(new double[] {2.0}, new double[] {0.002},
+        new double[] {-0.004});
+    double rho = 1.225;
+    double v = 1.2 * Math.sqrt(2 * StateSpaceStaticNotesTest.divergencePa(2.0, 0.002) / rho);
+    RationalFit fit = (RationalFit) sys.aero();
+    double worst = worstUnstableLagRatio(StateSpaceMethod.stateMatrix(sys, fit, rho, v), fit.lagRealisation(), 1);
+    // the bound |s| / |s + (V/b) beta| < 1; 1e-9: inverse iteration in double precision
+    assertTrue(worst < 1 + 1e-9, "lag ratio " + worst);
+  }
+
+  @Test
+  void anUnstableRootOfAFittedWingIsNotLagDominatedInEitherRealisation() {
+    // Goland wing, 2 + 2 Ritz modes, 10 strips, at 250 m/s at sea level: above its flutter speed
+    AeroelasticSystem sys = ValidationCases.system(ValidationCases.goland(2, 2, 10));
+    for (RationalFit fit : List.of(RogerApproximation.fit(sys.aero(), 1.5, 4),
+        MinimumStateApproximation.fit(sys.aero(), 1.5, 3))) {
+      DMatrixRMaj a = StateSpaceMethod.stateMatrix(sys, fit, 1.225, 250);
+      double worst = worstUnstableLagRatio(a, fit.lagRealisation(), sys.size());
+      assertTrue(worst < 1 + 1e-9, fit.form() + ": lag ratio " + worst);
+    }
+  }
+}
