@@ -53,9 +53,7 @@ public final class Findings {
       if (c.flutter().method() != FlutterMethodKind.K) {
         startStatus(out, c, result.analysisCase().options().dampingLimitG(), sweepStart);
       }
-      List<FlutterCrossing> crossings = new ArrayList<>(c.flutter().crossings());
-      crossings.sort(Comparator.comparingDouble(x -> x.condition().speedEasMps()));
-      for (FlutterCrossing x : crossings) {
+      for (FlutterCrossing x : c.flutter().crossings()) {
         FlightCondition fc = x.condition();
         boolean unreliable = TrackingTrust.unreliableAt(c.flutter(), fc.speedEasMps());
         out.add(new Finding(c.configuration(), label(x.kind()) + (unreliable ? UNRELIABLE : ""), x.branchName(),

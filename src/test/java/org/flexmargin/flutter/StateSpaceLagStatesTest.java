@@ -98,7 +98,8 @@ class StateSpaceLagStatesTest {
 
   @Test
   void anUnstableRootOfAFittedWingIsNotLagDominatedInEitherRealisation() {
-    // Goland wing, 2 + 2 Ritz modes, 10 strips, at 250 m/s at sea level: above its flutter speed
+    // Goland wing, 2 + 2 Ritz modes, 10 strips, at 250 m/s at sea level, where the model has an
+    // unstable root (checked below)
     AeroelasticSystem sys = ValidationCases.system(ValidationCases.goland(2, 2, 10));
     for (RationalFit fit : List.of(RogerApproximation.fit(sys.aero(), 1.5, 4),
         MinimumStateApproximation.fit(sys.aero(), 1.5, 3))) {
