@@ -1,17 +1,26 @@
 package org.flexmargin.flutter;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.apache.commons.math3.complex.Complex;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.CommonOps_ZDRM;
+import org.flexmargin.aero.FitError;
 import org.flexmargin.aero.LagRealisation;
 import org.flexmargin.aero.MinimumStateApproximation;
 import org.flexmargin.aero.RationalFit;
 import org.flexmargin.aero.RogerApproximation;
+import org.flexmargin.model.AirspeedKind;
+import org.flexmargin.model.AnalysisOptions;
+import org.flexmargin.model.SpeedSweep;
 import org.flexmargin.numerics.ReferenceEigenvalues;
+import org.flexmargin.structure.StructuralModel;
+import org.flexmargin.sweep.PlannedPath;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -107,5 +116,57 @@ class StateSpaceLagStatesTest {
       double worst = worstUnstableLagRatio(a, fit.lagRealisation(), sys.size());
       assertTrue(worst < 1 + 1e-9, fit.form() + ": lag ratio " + worst);
     }
+  }
+
+  @Test
+  void anOscillatingPairGrownOutOfTwoLagRootsIsReportedAsAnUntrackedRootAndPutsTheOnsetsInDoubt() {
+    // One stiff mode (50 Hz, zeta 0.02, unit mass) with Q(p) = -X p / (p + beta_1) + X p / (p +
+    // beta_2), beta_1 = 0.3 > beta_2 = 0.05, nothing else. Far below the mode's frequency xi
+    // follows the lag states quasi-statically, K xi = q X (z_2 - z_1), and with a_l = (V/b) beta_l
+    // the lag states obey z' = -(I + (q X / K) [1; 1] [-1, 1]) diag(a) z: trace -(a_1 + a_2) + (q X /
+    // K)(a_1 - a_2), determinant a_1 a_2 > 0. The two lag roots meet, become a complex pair and
+    // cross into the right half-plane where the trace vanishes, q X / K = (beta_1 + beta_2) /
+    // (beta_1 - beta_2) = 1.4: q = 3454 Pa, 75.1 m/s at sea level. No branch follows that pair.
+    double w = 2 * Math.PI * 50;
+    double x = 40;
+    double[][][] a = new double[5][1][1];
+    a[3][0][0] = -x;
+    a[4][0][0] = x;
+    RationalFit fit = new RationalFit(0.5, new double[] {0.3, 0.05}, a, new double[] {0.0, 0.5, 1.0},
+        new FitError(new double[1][1], new double[1][1], 0.0, 0, 0), 0.05, List.of(), "two opposite lags",
+        RationalFit.ROGER);
+    AeroelasticSystem sys = new AeroelasticSystem(new StructuralModel(List.of("stiff"), new double[][] {{1}},
+        new double[][] {{2 * 0.02 * w}}, new double[][] {{w * w}}), fit);
+    PlannedPath path = new PlannedPath(new SpeedSweep(0.0, AirspeedKind.TRUE, 20, 160, 15));
+    double rho = path.at(0).densityKgPerM3();
+    double estimate = Math.sqrt(2 * 1.4 * w * w / x / rho);
+    assertTrue(estimate > 70 && estimate < 80, "premise: quasi-static onset " + estimate + " m/s");
+
+    // the first grid point with an unstable oscillating root of the lag pair (|s| well below the
+    // mode's 314 rad/s), by Commons Math
+    int first = -1;
+    Complex root = null;
+    for (int p = 0; p < path.gridPoints() && first < 0; p++) {
+      for (Complex s : ReferenceEigenvalues.of(StateSpaceMethod.stateMatrix(sys, fit, rho, path.at(p).speedTasMps()))) {
+        if (s.getReal() > 0 && s.getImaginary() > 1e-6 * w && s.abs() < 0.5 * w) {
+          first = p;
+          root = s;
+        }
+      }
+    }
+    assertEquals(6, first, "premise: 80 m/s, the first grid point above the estimate");
+
+    FlutterSolution sol = new StateSpaceMethod().solve(sys, path, AnalysisOptions.defaults());
+    String warning = sol.warnings().stream().filter(v -> v.contains("not followed by any branch")).findFirst()
+        .orElseThrow(() -> new AssertionError(sol.warnings().toString()));
+    assertTrue(warning.contains("unstable from 80.00 m/s EAS"), warning);
+    // the root printed to four significant digits: half a unit of the fourth is 5e-4 relative
+    Matcher m = Pattern.compile("s = ([-+0-9.e]+) ([-+0-9.e]+) i").matcher(warning);
+    assertTrue(m.find(), warning);
+    assertEquals(root.getReal(), Double.parseDouble(m.group(1)), 5e-4 * root.getReal(), warning);
+    assertEquals(root.getImaginary(), Double.parseDouble(m.group(2)), 5e-4 * root.getImaginary(), warning);
+    // an unstable oscillating root that no branch follows puts the tracking in doubt from there
+    assertEquals(6.0, sol.diagnostics().firstTroublePathParameter(), 0.0);
+    assertTrue(sol.crossings().isEmpty(), sol.crossings().toString());
   }
 }

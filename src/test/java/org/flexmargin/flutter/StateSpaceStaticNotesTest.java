@@ -3,7 +3,13 @@ package org.flexmargin.flutter;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.apache.commons.math3.analysis.solvers.LaguerreSolver;
+import org.apache.commons.math3.complex.Complex;
 import org.flexmargin.aero.FitError;
 import org.flexmargin.aero.RationalFit;
 import org.flexmargin.model.AirspeedKind;
@@ -86,7 +92,7 @@ class StateSpaceStaticNotesTest {
 
   /** The dynamic pressure a note names (Pa). */
   static double notedPa(String note) {
-    java.util.regex.Matcher m = java.util.regex.Pattern.compile("q = ([0-9.e+]+) Pa").matcher(note);
+    Matcher m = Pattern.compile("q = ([0-9.e+]+) Pa").matcher(note);
     return m.find() ? Double.parseDouble(m.group(1)) : Double.NaN;
   }
 
@@ -123,6 +129,10 @@ class StateSpaceStaticNotesTest {
     double qd1 = divergencePa(f[0], q0[0]);
     assertEquals(qd1, notedPa(notes.get(0)), 5e-6 * qd1, notes.get(0));
     assertTrue(notes.get(0).contains("static divergence begins"), notes.get(0));
+    // the root grown out of mode 1's lag root is unstable from q_D1 on and no branch follows it,
+    // but it is real and the note already reports it: no second warning
+    assertTrue(sol.warnings().stream().noneMatch(w -> w.contains("not followed by any branch")),
+        sol.warnings().toString());
   }
 
   @Test
@@ -137,5 +147,41 @@ class StateSpaceStaticNotesTest {
     assertEquals(List.of(), notes(sol));
     assertTrue(sol.warnings().stream().noneMatch(w -> w.contains("not followed by any branch")),
         sol.warnings().toString());
+  }
+
+  @Test
+  void aRealRootUnstableFromTheStartWithoutANoteIsWarnedOf() {
+    // one mode diverging through its lag root, swept from 1.1 to 1.4 times its divergence speed:
+    // the root grown out of the lag root is unstable at every point, det A never changes sign, so
+    // no note; the warning names the first point and the positive real root of the cubic there
+    double fHz = 2.0;
+    double q0 = 0.002;
+    double lag = -0.004;
+    double rho = PkClosedFormTest.RHO;
+    double vd = Math.sqrt(2 * divergencePa(fHz, q0) / rho);
+    PlannedPath path = new PlannedPath(new SpeedSweep(0.0, AirspeedKind.TRUE, 1.1 * vd, 1.4 * vd, 7));
+    FlutterSolution sol = new StateSpaceMethod().solve(
+        lagSpringModes(new double[] {fHz}, new double[] {q0}, new double[] {lag}), path, AnalysisOptions.defaults());
+    assertEquals(List.of(), notes(sol));
+    String warning = sol.warnings().stream().filter(w -> w.contains("not followed by any branch")).findFirst()
+        .orElseThrow(() -> new AssertionError(sol.warnings().toString()));
+    assertTrue(warning.contains(String.format(Locale.ROOT, "unstable from %.2f m/s EAS",
+        path.at(0).speedEasMps())), warning);
+    // the cubic of the class comment at the first point, solved by Commons Math
+    double v = path.at(0).speedTasMps();
+    double w = 2 * Math.PI * fHz;
+    double c = 2 * ZETA * w;
+    double a = v * BETA / B;
+    double q = 0.5 * rho * v * v;
+    double k = w * w - q * q0;
+    Complex[] roots = new LaguerreSolver()
+        .solveAllComplex(new double[] {a * k, c * a + k - q * lag, a + c, 1}, 0);
+    double positive = Arrays.stream(roots).filter(r -> r.getReal() > 0)
+        .mapToDouble(Complex::getReal).max().orElseThrow();
+    Matcher m = Pattern.compile("s = ([-+0-9.e]+) ([-+0-9.e]+) i").matcher(warning);
+    assertTrue(m.find(), warning);
+    // printed to four significant digits: half a unit of the fourth is 5e-4 relative
+    assertEquals(positive, Double.parseDouble(m.group(1)), 5e-4 * positive, warning);
+    assertEquals(0.0, Double.parseDouble(m.group(2)), 0.0, warning);
   }
 }
