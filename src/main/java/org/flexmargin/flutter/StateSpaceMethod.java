@@ -2,6 +2,7 @@ package org.flexmargin.flutter;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
@@ -91,7 +92,12 @@ import org.flexmargin.numerics.ComplexEigenResult;
  *       to 8 times). When a complex pair reaches the real axis and splits, the branch follows the
  *       larger real root (the less stable one, which decides stability; e.g. the divergence root).
  *   <li><b>Aerodynamic lag roots</b> (real, near -(V/b) beta_l) and other untracked roots are not
- *       reported as branches; if one is unstable at a grid point, the solution warns.
+ *       reported as branches; if one is unstable at a grid point, the solution warns. A root in
+ *       the right half-plane is never dominated by lag states: its eigenvector has lag states
+ *       z_l = s / (s + (V/b) beta_l) E_l xi, with |s| &lt; |s + (V/b) beta_l| for Re s &gt; 0
+ *       and ||E_l|| &le; 1 in both realisations (the identity, or a unit row e_l^T), so
+ *       ||z_l|| &lt; ||xi||: a root grown out of a lag root is reported like any other untracked
+ *       root once it is unstable.
  *   <li><b>Crossings</b>: sign changes of 2 Re(s) - g_level |Im(s)| (g_level = 0 and minus the
  *       damping limit) on the grid are refined by Brent's method on the path parameter,
  *       re-solving the eigenproblem and matching from the left grid point's roots. A tracked
@@ -102,7 +108,10 @@ import org.flexmargin.numerics.ComplexEigenResult;
  *       no branch accounts for is refined by Brent's method on the continuous function
  *       (-1)^(number of negative real roots) &times; (distance of the nearest real root from 0)
  *       and reported in the warnings with its speed and dynamic pressure (the result types have
- *       no crossing kind for it yet).
+ *       no crossing kind for it yet). A step in which a tracked branch already reports a crossing
+ *       at zero frequency (its real root crossing zero) gets no such note: that crossing accounts
+ *       for the sign change, and the other real roots crossed zero an even number of times
+ *       there, which det A cannot show.
  * </ul>
  *
  * <p>Diagnostics: {@code fullEigenSolves} counts eigen-decompositions, {@code iterations} their QR
@@ -423,7 +432,7 @@ public final class StateSpaceMethod implements FlutterMethod {
     }
     List<FlutterCrossing> crossings = CrossingScan.scan(roots, options,
         (j, p, fa, level) -> tr.refine(j, p, roots[p], fa, level, options));
-    tr.staticCrossings(spectra, roots);
+    tr.staticCrossings(spectra);
     tr.finishWarnings();
     flagFitErrorAtOnsets(system.aero(), f, crossings, warnings);
     return new FlutterSolution(FlutterMethodKind.STATE_SPACE, curves, crossings, tr.counters.toDiagnostics(),
@@ -519,10 +528,11 @@ public final class StateSpaceMethod implements FlutterMethod {
     final List<String> warnings = new ArrayList<>();
     final ComplexEigen eigen = new ComplexEigen();
     double maxTrackedK;
-    String unstableLag;
     String unstableUntracked;
     boolean unstableUntrackedReal;
     final List<String> staticNotes = new ArrayList<>();
+    /** Left grid points of the steps in which a tracked branch crosses at zero frequency. */
+    final BitSet zeroFrequencyCrossings = new BitSet();
 
     Tracker(AeroelasticSystem sys, RationalFit fit, FlightPath path) {
       this.sys = sys;
@@ -779,20 +789,13 @@ public final class StateSpaceMethod implements FlutterMethod {
         if (tracked[c] || !sp.candidate(c) || !(sp.re()[c] > REAL_TOLERANCE * sp.radius())) {
           continue;
         }
-        String text = String.format(Locale.ROOT, "%.2f m/s EAS (s = %.4g %+.4g i 1/s)",
-            fc.speedEasMps(), sp.re()[c], sp.upperImag(c));
-        if (sp.lagRatio()[c] > LAG_DOMINANCE) {
-          if (unstableLag == null) {
-            unstableLag = text;
-          }
-        } else {
-          if (sp.upperImag(c) != 0) {
-            counters.trouble(p); // an oscillatory root no branch follows is unstable: onsets in doubt
-          }
-          if (unstableUntracked == null) {
-            unstableUntracked = text;
-            unstableUntrackedReal = sp.upperImag(c) == 0;
-          }
+        if (sp.upperImag(c) != 0) {
+          counters.trouble(p); // an oscillatory root no branch follows is unstable: onsets in doubt
+        }
+        if (unstableUntracked == null) {
+          unstableUntracked = String.format(Locale.ROOT, "%.2f m/s EAS (s = %.4g %+.4g i 1/s)",
+              fc.speedEasMps(), sp.re()[c], sp.upperImag(c));
+          unstableUntrackedReal = sp.upperImag(c) == 0;
         }
       }
     }
@@ -800,26 +803,19 @@ public final class StateSpaceMethod implements FlutterMethod {
     /**
      * Real roots crossing zero between grid points that no branch accounts for (static divergence
      * of the state-space model): bracketed by a sign change of det A, refined by Brent's method on
-     * the path parameter, reported as warnings.
+     * the path parameter, reported as warnings. A step with a crossing of a tracked branch at zero
+     * frequency ({@link #zeroFrequencyCrossings}, filled by {@link #refine}) is skipped: that
+     * crossing already reports the real root crossing zero, whether the branch was real at both
+     * grid points or a pair split into real roots within the step.
      */
-    void staticCrossings(Spectrum[] spectra, Root[][] roots) {
+    void staticCrossings(Spectrum[] spectra) {
       for (int p = 0; p + 1 < spectra.length; p++) {
-        if (spectra[p] == null || spectra[p + 1] == null) {
+        if (spectra[p] == null || spectra[p + 1] == null || zeroFrequencyCrossings.get(p)) {
           continue;
         }
         double fa = spectra[p].staticFunction();
         double fb = spectra[p + 1].staticFunction();
         if ((fa > 0) == (fb > 0)) {
-          continue;
-        }
-        boolean branchCrossed = false;
-        for (int j = 0; j < n; j++) {
-          Root a = roots[p][j];
-          Root b = roots[p + 1][j];
-          branchCrossed |= a.converged() && b.converged() && a.si() == 0 && b.si() == 0
-              && (a.sr() > 0) != (b.sr() > 0);
-        }
-        if (branchCrossed) {
           continue;
         }
         int at = p;
@@ -851,10 +847,6 @@ public final class StateSpaceMethod implements FlutterMethod {
 
     void finishWarnings() {
       warnings.addAll(staticNotes);
-      if (unstableLag != null) {
-        warnings.add("an aerodynamic lag root of the state-space model is unstable from " + unstableLag
-            + "; the rational fit is not trustworthy there");
-      }
       if (unstableUntracked != null && (!unstableUntrackedReal || staticNotes.isEmpty())) {
         warnings.add("a root not followed by any branch is unstable from " + unstableUntracked
             + "; check the eigenvalues at that speed");
@@ -888,8 +880,12 @@ public final class StateSpaceMethod implements FlutterMethod {
       Root at = step(p, left, t, 0).roots()[branch];
       boolean rising = fLeft < 0;
       CrossingKind kind = CrossingKind.of(level, rising);
-      return new FlutterCrossing(branch, names.get(branch), kind, t, path.at(t),
+      FlutterCrossing x = new FlutterCrossing(branch, names.get(branch), kind, t, path.at(t),
           at.converged() ? at.frequencyHz() : Double.NaN, level, evaluations, absAccuracy);
+      if (x.frequencyHz() == 0) {
+        zeroFrequencyCrossings.set(p); // a real root: its crossing function 2 Re(s) is zero there
+      }
+      return x;
     }
   }
 }

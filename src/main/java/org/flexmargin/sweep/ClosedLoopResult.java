@@ -2,11 +2,12 @@ package org.flexmargin.sweep;
 
 import java.util.List;
 import org.flexmargin.flutter.FlutterCrossing;
+import org.flexmargin.model.InvalidInputException;
 
 /**
  * Closed-loop (aeroservoelastic) stability of one configuration along the sweep.
  *
- * @param points eigenvalues at every grid point
+ * @param points eigenvalues at every grid point, in path order; at least one (the sweep start)
  * @param crossings refined damping crossings of closed-loop roots (g = 0 and the damping limit),
  *     labelled with the open-loop root they are nearest to; each g = 0 crossing is the onset on
  *     the exact frequency-domain loop when that refinement succeeded (see {@code refinements}),
@@ -27,13 +28,25 @@ public record ClosedLoopResult(
     List<String> warnings,
     List<String> assumptions,
     List<OnsetRefinement> refinements) {
-  /** Copies. */
+  /**
+   * Validates and copies.
+   *
+   * @throws InvalidInputException {@code closed_loop.points} when there is no sweep point
+   */
   public ClosedLoopResult {
+    if (points == null || points.isEmpty()) {
+      throw new InvalidInputException("closed_loop.points", "at least one sweep point (the sweep start)", "none");
+    }
     refinements = List.copyOf(refinements);
     points = List.copyOf(points);
     crossings = List.copyOf(crossings);
     warnings = List.copyOf(warnings);
     assumptions = List.copyOf(assumptions);
+  }
+
+  /** @return the eigenvalues at the first grid point, the sweep start */
+  public ClosedLoopPoint start() {
+    return points.get(0);
   }
 
   /**

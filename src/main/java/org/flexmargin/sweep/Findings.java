@@ -53,9 +53,7 @@ public final class Findings {
       if (c.flutter().method() != FlutterMethodKind.K) {
         startStatus(out, c, result.analysisCase().options().dampingLimitG(), sweepStart);
       }
-      List<FlutterCrossing> crossings = new ArrayList<>(c.flutter().crossings());
-      crossings.sort(Comparator.comparingDouble(x -> x.condition().speedEasMps()));
-      for (FlutterCrossing x : crossings) {
+      for (FlutterCrossing x : c.flutter().crossings()) {
         FlightCondition fc = x.condition();
         boolean unreliable = TrackingTrust.unreliableAt(c.flutter(), fc.speedEasMps());
         out.add(new Finding(c.configuration(), label(x.kind()) + (unreliable ? UNRELIABLE : ""), x.branchName(),
@@ -88,7 +86,7 @@ public final class Findings {
   /** Closed-loop instability at the sweep start and every refined closed-loop crossing. */
   private static void closedLoop(List<Finding> out, ConfigurationResult c) {
     ClosedLoopResult r = c.servo().closedLoop();
-    ClosedLoopPoint first = r.points().get(0);
+    ClosedLoopPoint first = r.start();
     for (ClosedLoopRoot root : first.roots()) {
       if (root.realPerS() > 0) {
         FlightCondition fc = first.condition();

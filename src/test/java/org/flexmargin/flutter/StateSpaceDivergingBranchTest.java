@@ -94,13 +94,15 @@ class StateSpaceDivergingBranchTest {
         .orElseThrow(() -> new AssertionError(x));
     assertEquals(vd, limit.condition().speedTasMps(), 0.02);
     assertEquals(2, x.size(), x.toString());
-    // the unstable real root is tracked: no warning of an unstable root no branch follows; a
-    // note of the real root crossing zero, if any, gives q_D itself
+    // the unstable real root is tracked: no warning of an unstable root no branch follows, and no
+    // note of a real root crossing zero either, although the pair splits (at q q0 = w0^2 (1 -
+    // zeta^2)) and its larger root crosses zero (at q q0 = w0^2) within one grid step, so the branch
+    // is oscillating at the step's left end: the onset above already reports that crossing
+    int left = (int) Math.floor((vd - 20) / 20);
+    assertTrue(root(0, 20 + 20 * left)[1] > 0 && root(0, 40 + 20 * left)[1] == 0, "premise: split within the step");
     assertTrue(sol.warnings().stream().noneMatch(w -> w.contains("not followed by any branch")),
         sol.warnings().toString());
-    String qd = String.format(java.util.Locale.ROOT, "q = %.6g Pa", w0 * w0 / Q0[0]);
-    assertTrue(sol.warnings().stream().filter(w -> w.contains("crosses zero")).allMatch(w -> w.contains(qd)),
-        qd + " in " + sol.warnings());
+    assertTrue(sol.warnings().stream().noneMatch(w -> w.contains("crosses zero")), sol.warnings().toString());
     assertEquals(0, sol.diagnostics().unconvergedRoots());
     assertTrue(Double.isNaN(sol.diagnostics().firstTroublePathParameter()));
   }

@@ -207,7 +207,7 @@ class ClearanceRankingTest {
 
   static MarginOnset stabilityOnset(FlutterCrossing... crossings) {
     ServoResult servo = new ServoResult(List.of(servoPoint(50), servoPoint(100), servoPoint(150)),
-        new ClosedLoopResult(List.of(), List.of(crossings), "fit", 0, List.of(), List.of()));
+        new ClosedLoopResult(List.of(point(50)), List.of(crossings), "fit", 0, List.of(), List.of()));
     MarginOnsets.Bracket b = new MarginOnsets.Bracket(STABILITY, 100, 150, 1, -1);
     return ClearanceSweep.stabilityOnset(b, servo, List.of(), REQ);
   }

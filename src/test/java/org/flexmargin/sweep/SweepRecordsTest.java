@@ -29,6 +29,9 @@ class SweepRecordsTest {
     return new FlightCondition(0, 1.225, 101325, 288.15, 340.294, tas);
   }
 
+  /** Closed-loop roots at the sweep start (none needed by the checks that use it). */
+  private static final List<ClosedLoopPoint> START = List.of(new ClosedLoopPoint(0, seaLevel(50), List.of(), 4));
+
   private static FlutterCrossing onset(double tas, double hz) {
     return new FlutterCrossing(0, "wing_bending", CrossingKind.FLUTTER_ONSET, 3.2, seaLevel(tas), hz, 0, 7,
         1e-6);
@@ -106,12 +109,12 @@ class SweepRecordsTest {
     assertThrows(IllegalArgumentException.class, () -> new OnsetRefinement(null, Optional.empty(), 0, 0, ""));
     assertThrows(IllegalArgumentException.class, () -> new OnsetRefinement(rational, null, 0, 0, ""));
     assertThrows(IllegalArgumentException.class, () -> new OnsetRefinement(rational, Optional.empty(), 0, 0, null));
-    ClosedLoopResult r = new ClosedLoopResult(List.of(), List.of(exact), "fit", 3, List.of(), List.of(),
+    ClosedLoopResult r = new ClosedLoopResult(START, List.of(exact), "fit", 3, List.of(), List.of(),
         List.of(ok));
     assertEquals("exact frequency-domain loop; rational model 100.00 m/s EAS, difference +3.50 m/s",
         r.routeOf(exact));
     assertEquals("closed-loop state space", r.routeOf(onset(90, 4)));
-    assertEquals("closed-loop state space", new ClosedLoopResult(List.of(), List.of(), "fit", 0, List.of(),
+    assertEquals("closed-loop state space", new ClosedLoopResult(START, List.of(), "fit", 0, List.of(),
         List.of(), List.of(failed)).routeOf(rational));
   }
 
