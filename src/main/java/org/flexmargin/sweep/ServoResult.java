@@ -1,6 +1,7 @@
 package org.flexmargin.sweep;
 
 import java.util.List;
+import org.flexmargin.model.InvalidInputException;
 
 /**
  * Aeroservoelastic results of one configuration: loop margins at every grid point (exact
@@ -10,8 +11,18 @@ import java.util.List;
  * @param closedLoop closed-loop roots and refined crossings
  */
 public record ServoResult(List<ServoPoint> points, ClosedLoopResult closedLoop) {
-  /** Copies. */
+  /**
+   * Validates and copies.
+   *
+   * @throws InvalidInputException {@code servo.points} or {@code servo.closed_loop} when missing
+   */
   public ServoResult {
+    if (points == null) {
+      throw new InvalidInputException("servo.points", "the loop margins at the sweep points", "none");
+    }
+    if (closedLoop == null) {
+      throw new InvalidInputException("servo.closed_loop", "the closed-loop eigenvalues along the sweep", "none");
+    }
     points = List.copyOf(points);
   }
 }

@@ -48,4 +48,16 @@ class ClosedLoopResultTest {
     List<Finding> all = Findings.of(InstabilityFindingsTest.sweep(c), InstabilityFindingsTest.seaLevel(50));
     assertEquals(List.of("no divergence"), all.stream().map(Finding::what).toList());
   }
+
+  @Test
+  void aLoopResultNeedsItsMarginsAndItsClosedLoop() {
+    ClosedLoopResult cl = new ClosedLoopResult(List.of(point(50, new ClosedLoopRoot(-1, 20, "bending"))), List.of(),
+        "fit", 1, List.of(), List.of());
+    InvalidInputException noClosedLoop = assertThrows(InvalidInputException.class,
+        () -> new ServoResult(List.of(), null));
+    assertEquals("servo.closed_loop", noClosedLoop.fieldPath());
+    InvalidInputException noPoints = assertThrows(InvalidInputException.class, () -> new ServoResult(null, cl));
+    assertEquals("servo.points", noPoints.fieldPath());
+    assertSame(cl, new ServoResult(List.of(), cl).closedLoop());
+  }
 }
