@@ -138,14 +138,24 @@ public final class MinimumStateApproximation {
 
   /**
    * As {@link #fit(AeroSource, double[], double[], double, FitWeighting)}, with how the iterations
-   * ended.
+   * ended: the fit's diagnostics (iterations, weighted error, last relative decrease).
+   *
+   * @param source the data to fit
+   * @param reducedFrequencies k values as for {@link #fit(AeroSource, double[], double[], double)}
+   * @param lagRoots &beta;<sub>l</sub> as for {@link #fit(AeroSource, double[], double[], double)}
+   * @param errorThreshold relative element error above which the fit is flagged
+   * @param weighting how the equations are weighted
+   * @return the fit and its diagnostics
    */
   public static Result fitWithConvergence(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
       double errorThreshold, FitWeighting weighting) {
     return fitWithConvergence(source, reducedFrequencies, lagRoots, errorThreshold, weighting, MAX_ITERATIONS);
   }
 
-  /** As {@link #fitWithConvergence(AeroSource, double[], double[], double, FitWeighting)} with at most {@code limit} iterations. */
+  /**
+   * As {@link #fitWithConvergence(AeroSource, double[], double[], double, FitWeighting)} with at
+   * most {@code limit} iterations (&ge; 1).
+   */
   static Result fitWithConvergence(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
       double errorThreshold, FitWeighting weighting, int limit) {
     if (source == null) {
