@@ -186,6 +186,125 @@ class MinimumStateStepsTest {
   }
 
   @Test
+  void theNewtonStepSolvesTheDampedPenalisedEquations() {
+    // Independent: the first call's step is delta = -(H + mu I + lambda0 diag(H + mu I))^-1 (g + mu x)
+    // with lambda0 = INITIAL_DAMPING times 4^k, H and g half the Hessian and gradient of S (checked against
+    // central differences above), x the parameters; solved here by Commons Math's Cholesky decomposition.
+    // A trial is taken when it lowers the penalised residual F, else the damping grows fourfold.
+    // mu = 1e-3 keeps the penalised minimum near the known one and still makes the ridge terms
+    // count far above the tolerance.
+    // 1e-9 of the largest step entry: two solutions of the same system of condition about 1e6.
+    Known known = new Known(31);
+    MinimumStateSteps steps = steps(known, 32);
+    int nl = BETA.length;
+    int size = 2 * N * nl;
+    double[][] d = new double[N][nl];
+    double[][] e = new double[nl][N];
+    Random rnd = new Random(33);
+    for (int i = 0; i < N; i++) {
+      for (int l = 0; l < nl; l++) {
+        d[i][l] = known.d[i][l] + 0.02 * (2 * rnd.nextDouble() - 1);
+        e[l][i] = known.e[l][i] + 0.02 * (2 * rnd.nextDouble() - 1);
+      }
+    }
+    double mu = 1e-3;
+    double[] hessian = new double[size * size];
+    double[] gradient = new double[size];
+    steps.newton(d, e, hessian, gradient, new double[nl], new double[nl]);
+    double current = steps.residual(d, e, new double[nl]) + mu * MinimumStateLevenbergMarquardt.squares(d, e);
+    // the damping grows fourfold per trial until a trial lowers F: find that trial independently
+    double[] delta = null;
+    for (int k = 0; k < MinimumStateLevenbergMarquardt.TRIALS && delta == null; k++) {
+      double lambda = MinimumStateLevenbergMarquardt.INITIAL_DAMPING * Math.pow(4, k);
+      double[][] a = new double[size][size];
+      double[] b = new double[size];
+      for (int p = 0; p < size; p++) {
+        for (int q = 0; q < size; q++) {
+          a[p][q] = hessian[p * size + q] + (p == q ? mu : 0.0);
+        }
+        a[p][p] *= 1 + lambda;
+        b[p] = -gradient[p] - mu * (p < N * nl ? d[p / nl][p % nl] : e[(p - N * nl) / N][(p - N * nl) % N]);
+      }
+      // a trial whose matrix is not positive definite is skipped (the Hessian need not be)
+      double[] trial;
+      try {
+        trial = new org.apache.commons.math3.linear.CholeskyDecomposition(
+            new org.apache.commons.math3.linear.Array2DRowRealMatrix(a)).getSolver()
+            .solve(new org.apache.commons.math3.linear.ArrayRealVector(b)).toArray();
+      } catch (org.apache.commons.math3.linear.NonPositiveDefiniteMatrixException notDefinite) {
+        continue;
+      }
+      double[][] dt = new double[N][nl];
+      double[][] et = new double[nl][N];
+      for (int p = 0; p < size; p++) {
+        shift(dt, et, p, trial[p] + (p < N * nl ? d[p / nl][p % nl] : e[(p - N * nl) / N][(p - N * nl) % N]));
+      }
+      if (steps.residual(dt, et, new double[nl]) + mu * MinimumStateLevenbergMarquardt.squares(dt, et) < current) {
+        delta = trial;
+      }
+    }
+    double[][] dStep = new double[N][];
+    double[][] eStep = new double[nl][];
+    for (int i = 0; i < N; i++) {
+      dStep[i] = d[i].clone();
+    }
+    for (int l = 0; l < nl; l++) {
+      eStep[l] = e[l].clone();
+    }
+    double f = new MinimumStateLevenbergMarquardt(steps).improve(dStep, eStep, current, mu);
+    assertTrue(f < current, f + " from " + current);
+    double largest = 0;
+    for (double v : delta) {
+      largest = Math.max(largest, Math.abs(v));
+    }
+    for (int p = 0; p < size; p++) {
+      double moved = p < N * nl ? dStep[p / nl][p % nl] - d[p / nl][p % nl]
+          : eStep[(p - N * nl) / N][(p - N * nl) % N] - e[(p - N * nl) / N][(p - N * nl) % N];
+      assertEquals(delta[p], moved, 1e-9 * largest, "parameter " + p);
+    }
+    // the value returned is the penalised residual where the step went (sum of squares by hand)
+    double squares = 0;
+    for (double[][] m : new double[][][] {dStep, eStep}) {
+      for (double[] row : m) {
+        for (double v : row) {
+          squares += v * v;
+        }
+      }
+    }
+    assertEquals(steps.residual(dStep, eStep, new double[nl]) + mu * squares, f, 1e-12 * current);
+  }
+
+  @Test
+  void dataWithoutUnsteadyPartAreFittedByZeroLagTermsAtOnce() {
+    // Q(ik) = A0 at every k: the weighted residual is zero from the start, the Newton step finds
+    // nothing to lower (its matrix is zero and every trial fails), and only the round-off rule can
+    // stop, after one iteration, with a weighted error of 0 and the lag, velocity and acceleration
+    // matrices exactly zero (closed form).
+    int n = 3;
+    double[][][] a = new double[BETA.length + 3][n][n];
+    Random rnd = new Random(41);
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        a[0][i][j] = 2 * rnd.nextDouble() - 1;
+      }
+    }
+    RogerApproximationTest.RogerFormData data = new RogerApproximationTest.RogerFormData(a, BETA);
+    MinimumStateApproximation.Result r = MinimumStateApproximation.fitWithConvergence(data, KS, BETA, 0.05,
+        FitWeighting.ELEMENT);
+    MinimumStateApproximation.Convergence c = r.convergence();
+    assertTrue(c.converged(), c.toString());
+    assertEquals(1, c.iterations());
+    assertEquals(0.0, c.weightedError(), 0.0);
+    for (int m = 1; m < BETA.length + 3; m++) {
+      for (double[] row : r.fit().matrix(m)) {
+        for (double v : row) {
+          assertEquals(0.0, v, 0.0, "matrix " + m);
+        }
+      }
+    }
+  }
+
+  @Test
   void theResidualIsTheWeightedSumOfSquaresOfTheEquations() {
     // With D = 0 every lag coefficient is 0, and A1, A2 are the separate least-squares fits of the
     // imaginary parts by A1 k and the real parts by -A2 k^2: for data of the form A1 ik + A2 (ik)^2
