@@ -251,7 +251,8 @@ public final class MinimumStateApproximation {
       double before = s + mu * MinimumStateLevenbergMarquardt.squares(d, e);
       steps.solveColumns(d, e);
       steps.solveRows(e, d, work);
-      double f = newton.improve(d, e, steps.residual(d, e, work) + mu * MinimumStateLevenbergMarquardt.squares(d, e), mu);
+      double swept = steps.residual(d, e, work) + mu * MinimumStateLevenbergMarquardt.squares(d, e);
+      double f = newton.improve(d, e, swept, mu);
       s = steps.residual(d, e, work);
       history[it] = s;
       decrease = (before - f) / before;

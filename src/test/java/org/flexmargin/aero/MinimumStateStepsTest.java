@@ -305,6 +305,38 @@ class MinimumStateStepsTest {
   }
 
   @Test
+  void aNewtonCallThatCannotLowerTheGivenValueLeavesDAndEAlone() {
+    // contract: when no trial lowers F below the value given (here one far below the true F at D
+    // and E, so none can), the call returns that value and D and E are untouched
+    Known known = new Known(51);
+    MinimumStateSteps steps = steps(known, 52);
+    int nl = BETA.length;
+    double[][] d = new double[N][nl];
+    double[][] e = new double[nl][N];
+    for (int i = 0; i < N; i++) {
+      for (int l = 0; l < nl; l++) {
+        d[i][l] = known.d[i][l] + 0.1;
+        e[l][i] = known.e[l][i] - 0.1;
+      }
+    }
+    double f = steps.residual(d, e, new double[nl]);
+    assertTrue(f > 0);
+    double given = 1e-6 * f;
+    double[][] d0 = MinimumStateStepsTest.copy(d);
+    double[][] e0 = MinimumStateStepsTest.copy(e);
+    assertEquals(given, new MinimumStateLevenbergMarquardt(steps).improve(d, e, given, 0.0), 0.0);
+    assertTrue(java.util.Arrays.deepEquals(d0, d) && java.util.Arrays.deepEquals(e0, e));
+  }
+
+  private static double[][] copy(double[][] m) {
+    double[][] c = new double[m.length][];
+    for (int i = 0; i < m.length; i++) {
+      c[i] = m[i].clone();
+    }
+    return c;
+  }
+
+  @Test
   void theResidualIsTheWeightedSumOfSquaresOfTheEquations() {
     // With D = 0 every lag coefficient is 0, and A1, A2 are the separate least-squares fits of the
     // imaginary parts by A1 k and the real parts by -A2 k^2: for data of the form A1 ik + A2 (ik)^2
