@@ -34,23 +34,51 @@ import org.flexmargin.model.InvalidInputException;
  * ill-posed). A<sub>1</sub> and A<sub>2</sub> are eliminated per element once, so that each
  * half-step solves only nL x nL normal equations per column or row ({@link MinimumStateSteps}).
  *
- * <p>Stop rule: each half-step cannot increase the weighted residual sum of squares S, so S falls
- * monotonically; the iterations stop when S has fallen by no more than
- * {@value #STOP_RELATIVE_DECREASE} of itself over the last {@value #STOP_WINDOW} iterations (the
- * weighted RMS error then changes by under 5e-7 relative per {@value #STOP_WINDOW} iterations, far
- * below the 1e-3 to which fit errors are quoted), or when S is round-off (1e-28 of that of Q - A0,
- * an RMS error of 1e-14), or after {@value #MAX_ITERATIONS}. A window rather than one iteration,
- * because alternating least squares can creep slowly along a shallow valley before falling again.
- * Reaching the limit is said in the fit's warnings, with the weighted error and its last decrease.
+ * <p>The plain least-squares problem need not have a minimum. With many close lag roots (the
+ * automatic 2 n roots lie within a factor 7.5 of each other) neighbouring lag terms can grow
+ * without bound while cancelling each other, approaching a double pole p / (p + beta)<sup>2</sup>
+ * that the form cannot hold: on the demo's strip-theory forces (n = 8, 16 lag roots) alternating
+ * least squares lowers S by 30 % over 36 000 iterations while its lag coefficients grow from 40
+ * to 900 times the largest entry of A<sub>0..2</sub>, with alternating signs, and no stop rule on S
+ * alone is met in 400 iterations (the same degeneracy is known for other bilinear fits: P. Paatero,
+ * "Construction and analysis of degenerate PARAFAC models", J. Chemometrics 14, 2000, from memory).
+ * So the fit minimises the penalised residual F = S + &mu; (|D|<sup>2</sup> + |E|<sup>2</sup>) (a
+ * ridge, or Tikhonov, term; |.| the Frobenius norm), which has a minimum. At that minimum each lag
+ * term's size is shared equally between D and E, so the penalty is 2 &mu; times the sum of the
+ * Frobenius norms of the lag matrices: with &mu; = {@value #RIDGE} S / s<sub>Q</sub> (S at the
+ * time, s<sub>Q</sub> the RMS over k of the Frobenius norm of Q - A0) lag matrices as large as the
+ * data cost 2 % of S, while cancelling pairs a hundred times larger cost twice S. &mu; is set at
+ * the start and again whenever S has fallen below {@value #RIDGE_STAGE} of its value at the last
+ * setting, so that it vanishes with S: data of the form itself are still fitted to round-off.
+ *
+ * <p>Iteration: one alternating least-squares sweep (each half-step with the ridge), then one
+ * damped Newton step on D and E together ({@link MinimumStateLevenbergMarquardt}), taken only if it
+ * lowers F. The sweep alone zigzags across valleys that run obliquely to D and E and converges
+ * linearly at a rate near 1; the Newton step converges quadratically near the minimum.
+ *
+ * <p>Stop rule: with &mu; fixed each half-step and each step taken lowers F, so F falls
+ * monotonically; the iterations stop when one iteration has lowered F by no more than {@value
+ * #STOP_RELATIVE_DECREASE} of itself (near the minimum the Newton steps shrink quadratically, so
+ * the rest of the decrease is smaller still), or when S is round-off (1e-28 of that of Q - A0, an
+ * RMS error of 1e-14), or after {@value #MAX_ITERATIONS} iterations. Reaching the limit is said in
+ * the fit's warnings, with the weighted error and the last decrease; {@link #fitWithConvergence}
+ * also gives the iterations, the weighted error and the last decrease of a fit that converged.
  */
 public final class MinimumStateApproximation {
 
-  /** Most alternating least-squares iterations. */
+  /** Most iterations (each an alternating least-squares sweep and a damped Newton step). */
   static final int MAX_ITERATIONS = 400;
-  /** Iterations over which the decrease of the weighted residual is measured. */
-  static final int STOP_WINDOW = 10;
-  /** Relative decrease of the weighted residual sum of squares over the window that stops. */
-  static final double STOP_RELATIVE_DECREASE = 1e-6;
+  /** Relative decrease of the penalised residual over one iteration that stops (dimensionless). */
+  static final double STOP_RELATIVE_DECREASE = 1e-10;
+  /**
+   * Ridge weight &eta;: &mu; = &eta; S / s<sub>Q</sub>, S the weighted residual sum of squares when
+   * &mu; is set and s<sub>Q</sub> the size of the data (dimensionless).
+   */
+  static final double RIDGE = 1e-2;
+  /** &mu; is set again when S has fallen below this fraction of its value at the last setting. */
+  static final double RIDGE_STAGE = 0.25;
+  /** Lag matrices whose largest entry is below this fraction of the data's size are set to zero. */
+  private static final double NEGLIGIBLE_LAG = 1e-15;
   /** Weighted residual sum of squares, relative to that of Q - A0, that is round-off: stops. */
   private static final double ROUND_OFF_SQUARES = 1e-28;
   /** Elements smaller than this fraction of the largest are weighted as that size. */
@@ -110,10 +138,26 @@ public final class MinimumStateApproximation {
 
   /**
    * As {@link #fit(AeroSource, double[], double[], double, FitWeighting)}, with how the iterations
-   * ended.
+   * ended: the fit's diagnostics (iterations, weighted error, last relative decrease).
+   *
+   * @param source the data to fit
+   * @param reducedFrequencies k values as for {@link #fit(AeroSource, double[], double[], double)}
+   * @param lagRoots &beta;<sub>l</sub> as for {@link #fit(AeroSource, double[], double[], double)}
+   * @param errorThreshold relative element error above which the fit is flagged
+   * @param weighting how the equations are weighted
+   * @return the fit and its diagnostics
+   */
+  public static Result fitWithConvergence(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
+      double errorThreshold, FitWeighting weighting) {
+    return fitWithConvergence(source, reducedFrequencies, lagRoots, errorThreshold, weighting, MAX_ITERATIONS);
+  }
+
+  /**
+   * As {@link #fitWithConvergence(AeroSource, double[], double[], double, FitWeighting)} with at
+   * most {@code limit} iterations (&ge; 1).
    */
   static Result fitWithConvergence(AeroSource source, double[] reducedFrequencies, double[] lagRoots,
-      double errorThreshold, FitWeighting weighting) {
+      double errorThreshold, FitWeighting weighting, int limit) {
     if (source == null) {
       throw new InvalidInputException("rfa.source", "aerodynamic data", "none");
     }
@@ -144,12 +188,12 @@ public final class MinimumStateApproximation {
         RogerApproximation.frequencyWeights(data, a0, weighting));
     double[][] d = pr.initialD(source, errorThreshold, lags);
     double[][] e = new double[nl][n];
-    Convergence convergence = iterate(pr.steps(), d, e, MAX_ITERATIONS);
+    Convergence convergence = iterate(pr.steps(), d, e, limit);
     if (!convergence.converged()) {
       warnings.add(String.format(Locale.ROOT,
           "minimum-state fit stopped at the iteration limit %d: weighted fit error %.3g still falling by %.3g "
-              + "relative over the last %d iterations",
-          convergence.iterations(), convergence.weightedError(), convergence.lastDecrease(), STOP_WINDOW));
+              + "relative in the last iteration",
+          convergence.iterations(), convergence.weightedError(), convergence.lastDecrease()));
     }
     double[][] a1 = new double[n][n];
     double[][] a2 = new double[n][n];
@@ -160,12 +204,16 @@ public final class MinimumStateApproximation {
     coefficients[2] = a2;
     for (int l = 0; l < nl; l++) {
       double[][] m = new double[n][n];
+      double largest = 0;
       for (int i = 0; i < n; i++) {
         for (int j = 0; j < n; j++) {
           m[i][j] = d[i][l] * e[l][j];
+          largest = Math.max(largest, Math.abs(m[i][j]));
         }
       }
-      coefficients[l + 3] = m;
+      // a lag term the ridge has shrunk towards zero would reach the subnormal range, where the
+      // products d_i e_j are no longer of rank one to round-off: below 1e-15 of the data it is 0
+      coefficients[l + 3] = largest > NEGLIGIBLE_LAG * pr.steps().targetScale() ? m : new double[n][n];
     }
     RationalFit fit = RogerApproximation.measured(source, lags, coefficients, ks, data, errorThreshold, warnings,
         RationalFit.MINIMUM_STATE);
@@ -173,8 +221,8 @@ public final class MinimumStateApproximation {
   }
 
   /**
-   * Alternating least squares from D until the stop rule of the class description or {@code limit}
-   * iterations.
+   * Iterations of the class description (sweep and Newton step) from D until the stop rule or
+   * {@code limit} iterations.
    *
    * @param steps the half-steps
    * @param d D, the start; overwritten with the last
@@ -183,45 +231,53 @@ public final class MinimumStateApproximation {
    * @return how it stopped
    */
   static Convergence iterate(MinimumStateSteps steps, double[][] d, double[][] e, int limit) {
-    int nl = e.length;
-    double[] work = new double[nl];
+    double[] work = new double[e.length];
     double[] history = new double[limit];
     double total = steps.targetSquares();
+    double scale = steps.targetScale();
+    MinimumStateLevenbergMarquardt newton = new MinimumStateLevenbergMarquardt(steps);
+    double s = steps.residual(d, e, work);
+    double stage = Double.POSITIVE_INFINITY;
+    double mu = 0;
     int it = 0;
     boolean converged = false;
     double decrease = Double.NaN;
     while (it < limit && !converged) {
+      if (s < RIDGE_STAGE * stage) {
+        stage = s;
+        mu = scale > 0 ? RIDGE * s / scale : 0.0;
+        steps.ridge(mu);
+      }
+      double before = s + mu * MinimumStateLevenbergMarquardt.squares(d, e);
       steps.solveColumns(d, e);
       steps.solveRows(e, d, work);
-      history[it] = steps.residual(d, e, work);
-      if (it >= STOP_WINDOW) {
-        double before = history[it - STOP_WINDOW];
-        decrease = before > 0 ? (before - history[it]) / before : 0.0;
-        converged = decrease <= STOP_RELATIVE_DECREASE;
-      }
-      converged |= history[it] <= ROUND_OFF_SQUARES * total;
+      double swept = steps.residual(d, e, work) + mu * MinimumStateLevenbergMarquardt.squares(d, e);
+      double f = newton.improve(d, e, swept, mu);
+      s = steps.residual(d, e, work);
+      history[it] = s;
+      decrease = (before - f) / before;
+      converged = decrease <= STOP_RELATIVE_DECREASE || s <= ROUND_OFF_SQUARES * total;
       it++;
     }
-    double last = history[it - 1];
-    return new Convergence(it, converged, total > 0 ? Math.sqrt(last / total) : 0.0, decrease,
+    return new Convergence(it, converged, total > 0 ? Math.sqrt(s / total) : 0.0, decrease,
         Arrays.copyOf(history, it));
   }
 
   /**
-   * How the alternating least squares ended.
+   * How the iterations of a minimum-state fit ended: its diagnostics.
    *
-   * @param iterations iterations done, 1 to the limit
+   * @param iterations iterations done, 1 to the limit (count)
    * @param converged whether the stop rule (rather than the limit) ended them
    * @param weightedError weighted fit error, relative: sqrt(weighted residual sum of squares / that
    *     of Q - A0), dimensionless
-   * @param lastDecrease relative decrease of the weighted residual sum of squares over the last
-   *     {@value #STOP_WINDOW} iterations (dimensionless), NaN when fewer were done
+   * @param lastDecrease relative decrease of the penalised residual F in the last iteration
+   *     (dimensionless; NaN when Q = A0 and F is 0)
    * @param history weighted residual sum of squares after each iteration (squared force coefficient
    *     units times the squared weights)
    */
-  record Convergence(int iterations, boolean converged, double weightedError, double lastDecrease,
+  public record Convergence(int iterations, boolean converged, double weightedError, double lastDecrease,
       double[] history) {
-    Convergence {
+    public Convergence {
       if (iterations < 1 || history == null || history.length != iterations || !(weightedError >= 0)) {
         throw new IllegalArgumentException("iterations " + iterations + ", weighted error " + weightedError);
       }
@@ -240,8 +296,8 @@ public final class MinimumStateApproximation {
    * @param fit the fit
    * @param convergence the iterations
    */
-  record Result(RationalFit fit, Convergence convergence) {
-    Result {
+  public record Result(RationalFit fit, Convergence convergence) {
+    public Result {
       if (fit == null || convergence == null) {
         throw new IllegalArgumentException("fit and convergence are required");
       }

@@ -56,6 +56,13 @@ final class MinimumStateSteps {
   private final double[][] a2Slope;
   /** Sum of the squared weighted targets: the weighted residual with every coefficient zero. */
   private final double targetSquares;
+  /**
+   * Size of the data: the root mean square over the fitted k of the Frobenius norm of Q - A0,
+   * unweighted (force coefficient units).
+   */
+  private final double targetScale;
+  /** Ridge weight &mu; of the penalised half-steps (weighted squared units per force coefficient unit). */
+  private double ridge;
 
   /** Normal equations being built, nL x nL (dimensionless after scaling). */
   private final DMatrixRMaj normal;
@@ -94,6 +101,7 @@ final class MinimumStateSteps {
     a1Slope = new double[elements][nl];
     a2Slope = new double[elements][nl];
     double squares = 0;
+    double scale2 = 0;
     double[] column = new double[nk];
     for (int i = 0; i < n; i++) {
       for (int j = 0; j < n; j++) {
@@ -107,6 +115,7 @@ final class MinimumStateSteps {
           y[e][r] = w * targetRe[r][i][j];
           y[e][nk + r] = w * targetIm[r][i][j];
           squares += y[e][r] * y[e][r] + y[e][nk + r] * y[e][nk + r];
+          scale2 += targetRe[r][i][j] * targetRe[r][i][j] + targetIm[r][i][j] * targetIm[r][i][j];
         }
         // real rows: the column of A2 is -w k^2; imaginary rows: that of A1 is w k
         for (int r = 0; r < nk; r++) {
@@ -130,6 +139,7 @@ final class MinimumStateSteps {
       }
     }
     targetSquares = squares;
+    targetScale = Math.sqrt(scale2 / nk);
     normal = new DMatrixRMaj(nl, nl);
     factor = new DMatrixRMaj(nl, nl);
     right = new DMatrixRMaj(nl, 1);
@@ -177,6 +187,31 @@ final class MinimumStateSteps {
       }
     }
     return base;
+  }
+
+  /** @return the number of coordinates n */
+  int coordinates() {
+    return n;
+  }
+
+  /** @return the number of lag roots nL */
+  int lagCount() {
+    return nl;
+  }
+
+  /** @return the size of the data, RMS over k of the Frobenius norm of Q - A0 (force coefficient units) */
+  double targetScale() {
+    return targetScale;
+  }
+
+  /**
+   * Sets the ridge weight of the half-steps: each then minimises the weighted residual sum of
+   * squares plus &mu; times the sum of the squares of the unknowns it solves for.
+   *
+   * @param mu &mu; &ge; 0 (weighted squared units per force coefficient unit)
+   */
+  void ridge(double mu) {
+    ridge = mu;
   }
 
   /** @return the weighted residual sum of squares with every coefficient zero (&gt; 0 unless Q = A0) */
@@ -277,6 +312,69 @@ final class MinimumStateSteps {
     }
   }
 
+  /**
+   * Half the gradient and half the Hessian of the weighted residual sum of squares S in (D, E)
+   * together, at the given D and E: with the parameters ordered D row by row (D[i][l] at i nL + l),
+   * then E row by row (E[l][j] at n nL + l n + j), r<sub>ij</sub> = X<sub>ij</sub> c<sub>ij</sub> -
+   * y<sub>ij</sub> the residual of element (i, j) and J its Jacobian, the gradient is
+   * J<sup>T</sup>r and the Hessian J<sup>T</sup>J plus the second-order term: since
+   * dc<sub>ij</sub>/dD[i][l] = E[l][j] u<sub>l</sub> and dc<sub>ij</sub>/dE[l][j] = D[i][l]
+   * u<sub>l</sub> (u<sub>l</sub> the l-th unit vector), the only second derivative of c<sub>ij</sub>
+   * is d<sup>2</sup>c<sub>ij,l</sub> / dD[i][l] dE[l][j] = 1, which adds (M<sub>ij</sub>
+   * c<sub>ij</sub> - h<sub>ij</sub>)<sub>l</sub> there. Everything follows from each element's Gram
+   * matrix and right side alone. The exact Hessian rather than Gauss-Newton's J<sup>T</sup>J alone,
+   * because on these fits the residual is not small against the curvature along the valleys, where
+   * Gauss-Newton converges only linearly (J. Nocedal and S. J. Wright, Numerical Optimization,
+   * 2nd ed., 2006, sec. 10.3, from memory).
+   *
+   * @param d D
+   * @param e E
+   * @param hessian half the Hessian, 2 n nL x 2 n nL row-major, written
+   * @param gradient half the gradient, 2 n nL, written
+   * @param c workspace of nL
+   * @param r workspace of nL
+   */
+  void newton(double[][] d, double[][] e, double[] hessian, double[] gradient, double[] c, double[] r) {
+    int size = 2 * n * nl;
+    int offset = n * nl;
+    Arrays.fill(hessian, 0, size * size, 0.0);
+    Arrays.fill(gradient, 0, size, 0.0);
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        int el = i * n + j;
+        double[] m = gram[el];
+        lagCoefficients(d, e, i, j, c);
+        for (int p = 0; p < nl; p++) {
+          double v = -rhs[el][p];
+          for (int q = 0; q < nl; q++) {
+            v += m[p * nl + q] * c[q];
+          }
+          r[p] = v;
+        }
+        for (int p = 0; p < nl; p++) {
+          int dp = i * nl + p;
+          int ep = offset + p * n + j;
+          double ej = e[p][j];
+          double di = d[i][p];
+          gradient[dp] += ej * r[p];
+          gradient[ep] += di * r[p];
+          hessian[dp * size + ep] += r[p];
+          hessian[ep * size + dp] += r[p];
+          for (int q = 0; q < nl; q++) {
+            double mpq = m[p * nl + q];
+            int dq = i * nl + q;
+            int eq = offset + q * n + j;
+            hessian[dp * size + dq] += ej * e[q][j] * mpq;
+            hessian[ep * size + eq] += di * d[i][q] * mpq;
+            double cross = ej * d[i][q] * mpq;
+            hessian[dp * size + eq] += cross;
+            hessian[eq * size + dp] += cross;
+          }
+        }
+      }
+    }
+  }
+
   private void lagCoefficients(double[][] d, double[][] e, int i, int j, double[] c) {
     for (int l = 0; l < nl; l++) {
       c[l] = d[i][l] * e[l][j];
@@ -309,6 +407,9 @@ final class MinimumStateSteps {
   /** Solves the accumulated normal equations into {@link #solution}. */
   private void solve() {
     double[] nd = normal.data;
+    for (int p = 0; p < nl; p++) {
+      nd[p * nl + p] += ridge;
+    }
     for (int p = 0; p < nl; p++) {
       double diag = nd[p * nl + p];
       scale[p] = diag > 0 ? 1 / Math.sqrt(diag) : 1.0;

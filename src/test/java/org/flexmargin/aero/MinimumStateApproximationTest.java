@@ -63,10 +63,12 @@ class MinimumStateApproximationTest {
     assertTrue(java.util.Arrays.deepEquals(fit.coefficients(), MinimumStateApproximation.fit(data,
         RogerApproximation.defaultReducedFrequencies(1.5, RogerApproximation.DEFAULT_POINTS), beta, 0.05)
         .coefficients()), "the default weighting is the element weighting");
-    // the stop rule sees round-off at once (measured: 1 iteration, weighted error 4.9e-16); 1e-14
-    // is the rule's own round-off level (1e-28 on the squares)
+    // the ridge, set from the residual of the start with E = 0, first pulls the fit off the exact
+    // start and vanishes with the residual (measured: round-off, weighted error 2.6e-15, after 11
+    // iterations, well before the limit of 400); 1e-14 is the rule's own round-off level (1e-28 on
+    // the squares)
     assertTrue(result.convergence().converged());
-    assertTrue(result.convergence().iterations() <= 2, result.convergence().toString());
+    assertTrue(result.convergence().iterations() <= 20, result.convergence().toString());
     assertTrue(result.convergence().weightedError() < 1e-14, result.convergence().toString());
     assertTrue(fit.error().worstRelativeError() < 1e-12, "worst " + fit.error().worstRelativeError());
     assertTrue(RogerApproximationTest.denseError(data, fit, 3.0) < 1e-12, "between and beyond the fitted k");
