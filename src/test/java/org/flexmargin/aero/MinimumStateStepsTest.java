@@ -135,15 +135,9 @@ class MinimumStateStepsTest {
     MinimumStateSteps steps = steps(known, 22);
     int nl = BETA.length;
     int size = 2 * N * nl;
-    double[][] d = new double[N][nl];
-    double[][] e = new double[nl][N];
-    Random rnd = new Random(23);
-    for (int i = 0; i < N; i++) {
-      for (int l = 0; l < nl; l++) {
-        d[i][l] = known.d[i][l] + 0.3 * (2 * rnd.nextDouble() - 1);
-        e[l][i] = known.e[l][i] + 0.3 * (2 * rnd.nextDouble() - 1);
-      }
-    }
+    double[][][] start = perturbed(known, 23, 0.3);
+    double[][] d = start[0];
+    double[][] e = start[1];
     double[] hessian = new double[size * size];
     double[] gradient = new double[size];
     steps.newton(d, e, hessian, gradient, new double[nl], new double[nl]);
@@ -198,15 +192,9 @@ class MinimumStateStepsTest {
     MinimumStateSteps steps = steps(known, 32);
     int nl = BETA.length;
     int size = 2 * N * nl;
-    double[][] d = new double[N][nl];
-    double[][] e = new double[nl][N];
-    Random rnd = new Random(33);
-    for (int i = 0; i < N; i++) {
-      for (int l = 0; l < nl; l++) {
-        d[i][l] = known.d[i][l] + 0.02 * (2 * rnd.nextDouble() - 1);
-        e[l][i] = known.e[l][i] + 0.02 * (2 * rnd.nextDouble() - 1);
-      }
-    }
+    double[][][] start = perturbed(known, 33, 0.02);
+    double[][] d = start[0];
+    double[][] e = start[1];
     double mu = 1e-3;
     double[] hessian = new double[size * size];
     double[] gradient = new double[size];
@@ -479,5 +467,23 @@ class MinimumStateStepsTest {
     double[][] bad = new double[N][BETA.length];
     bad[0][0] = Double.NaN;
     assertThrows(InvalidInputException.class, () -> steps.solveColumns(bad, e));
+  }
+
+  /**
+   * @return {D, E}: the known D and E, each entry moved by a seeded uniform amount within
+   *     +-{@code amplitude}
+   */
+  private static double[][][] perturbed(Known known, long seed, double amplitude) {
+    int nl = BETA.length;
+    double[][] d = new double[N][nl];
+    double[][] e = new double[nl][N];
+    Random rnd = new Random(seed);
+    for (int i = 0; i < N; i++) {
+      for (int l = 0; l < nl; l++) {
+        d[i][l] = known.d[i][l] + amplitude * (2 * rnd.nextDouble() - 1);
+        e[l][i] = known.e[l][i] + amplitude * (2 * rnd.nextDouble() - 1);
+      }
+    }
+    return new double[][][] {d, e};
   }
 }

@@ -49,6 +49,15 @@ class PkClosedFormTest {
   }
 
   static AeroelasticSystem system(double[] fHz, double[] q0, double[] d, double kMin, double kMax) {
+    return new AeroelasticSystem(uncoupledModes(fHz), diagonal(q0, d, kMin, kMax));
+  }
+
+  /**
+   * @param fHz natural frequencies (Hz)
+   * @return uncoupled modes "mode_1", "mode_2", ... of unit generalized mass, stiffness omega^2 and
+   *     damping ratio {@link #ZETA}
+   */
+  static StructuralModel uncoupledModes(double[] fHz) {
     int n = fHz.length;
     double[][] m = new double[n][n];
     double[][] c = new double[n][n];
@@ -61,7 +70,7 @@ class PkClosedFormTest {
       k[i][i] = w * w;
       names[i] = "mode_" + (i + 1);
     }
-    return new AeroelasticSystem(new StructuralModel(List.of(names), m, c, k), diagonal(q0, d, kMin, kMax));
+    return new StructuralModel(List.of(names), m, c, k);
   }
 
   /** Closed-form root {sigma, omega} of mode i at true airspeed v (m/s). */

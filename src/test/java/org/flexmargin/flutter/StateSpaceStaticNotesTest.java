@@ -15,7 +15,6 @@ import org.flexmargin.aero.RationalFit;
 import org.flexmargin.model.AirspeedKind;
 import org.flexmargin.model.AnalysisOptions;
 import org.flexmargin.model.SpeedSweep;
-import org.flexmargin.structure.StructuralModel;
 import org.flexmargin.sweep.PlannedPath;
 import org.junit.jupiter.api.Test;
 
@@ -44,7 +43,7 @@ import org.junit.jupiter.api.Test;
 class StateSpaceStaticNotesTest {
 
   static final double B = 0.5;
-  static final double ZETA = 0.02;
+  static final double ZETA = PkClosedFormTest.ZETA;
   static final double BETA = 0.02;
 
   /**
@@ -55,24 +54,15 @@ class StateSpaceStaticNotesTest {
    */
   static AeroelasticSystem lagSpringModes(double[] fHz, double[] q0, double[] lag) {
     int n = fHz.length;
-    double[][] m = new double[n][n];
-    double[][] c = new double[n][n];
-    double[][] k = new double[n][n];
     double[][][] a = new double[4][n][n];
-    String[] names = new String[n];
     for (int i = 0; i < n; i++) {
-      double w = 2 * Math.PI * fHz[i];
-      m[i][i] = 1.0;
-      c[i][i] = 2 * ZETA * w;
-      k[i][i] = w * w;
       a[0][i][i] = q0[i];
       a[3][i][i] = lag[i];
-      names[i] = "mode_" + (i + 1);
     }
     RationalFit fit = new RationalFit(B, new double[] {BETA}, a, new double[] {0.0, 0.5, 1.0},
         new FitError(new double[n][n], new double[n][n], 0.0, 0, 0), 0.05, List.of(), "lag spring",
         RationalFit.ROGER);
-    return new AeroelasticSystem(new StructuralModel(List.of(names), m, c, k), fit);
+    return new AeroelasticSystem(PkClosedFormTest.uncoupledModes(fHz), fit);
   }
 
   /** q_D = omega^2 / q0 (Pa). */
