@@ -197,7 +197,13 @@ final class BenchCommand implements Callable<Integer> {
     }
   }
 
-  private static void deleteTree(java.nio.file.Path dir) {
+  /**
+   * Deletes a scratch folder and everything in it, quietly: one left behind under the system's
+   * temporary folder is harmless.
+   *
+   * @param dir the folder, or null (nothing to do)
+   */
+  static void deleteTree(java.nio.file.Path dir) {
     if (dir == null) {
       return;
     }

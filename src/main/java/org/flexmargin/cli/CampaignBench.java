@@ -7,11 +7,9 @@ import java.lang.management.CompilationMXBean;
 import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.atomic.AtomicLong;
-import java.util.stream.Stream;
 import org.flexmargin.campaign.CampaignPlan;
 import org.flexmargin.campaign.CampaignStore;
 import org.flexmargin.campaign.LocalEngine;
@@ -129,13 +127,7 @@ final class CampaignBench {
     } catch (IOException e) {
       throw new UncheckedIOException("could not set up the campaign benchmark: " + e.getMessage(), e);
     } finally {
-      if (dir != null) {
-        try (Stream<Path> s = Files.walk(dir)) {
-          s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-        } catch (IOException e) {
-          // a temporary folder left behind is harmless
-        }
-      }
+      BenchCommand.deleteTree(dir);
     }
   }
 }
